@@ -1,0 +1,135 @@
+package org.treeproof.distance;
+
+import java.util.Arrays;
+import java.util.Objects;
+
+/**
+ * An immutable symmetric dissimilarity matrix with zero diagonal, stored as its upper triangle.
+ *
+ * <p>The layout is the conventional condensed one (as in scipy's {@code pdist}): for {@code i < j}
+ * the pair {@code (i, j)} is at {@code n*i - i*(i+1)/2 + (j - i - 1)}. Length {@code n(n-1)/2}, held
+ * in one {@code double[]}, so the largest supported {@code n} is about 65 000.
+ */
+public final class CondensedDistances {
+    private final int n;
+    private final double[] values;
+
+    private CondensedDistances(int n, double[] values) {
+        this.n = n;
+        this.values = values;
+    }
+
+    /**
+     * A matrix over {@code n} items from a condensed array, which is copied.
+     *
+     * @throws IllegalArgumentException if the length is wrong or a value is negative or not finite
+     */
+    public static CondensedDistances of(int n, double[] condensed) {
+        Objects.requireNonNull(condensed, "condensed");
+        return wrap(n, condensed.clone());
+    }
+
+    /** Takes ownership of {@code condensed} without copying; only for code in this package that made it. */
+    static CondensedDistances wrap(int n, double[] condensed) {
+        if (n < 1) {
+            throw new IllegalArgumentException("need at least one item, got " + n);
+        }
+        if (condensed.length != length(n)) {
+            throw new IllegalArgumentException("condensed length " + condensed.length + " does not match n = " + n
+                    + " (expected " + length(n) + ")");
+        }
+        for (int t = 0; t < condensed.length; t++) {
+            double v = condensed[t];
+            if (!(v >= 0) || Double.isInfinite(v)) {
+                throw new IllegalArgumentException("distance at condensed position " + t + " is " + v
+                        + "; distances must be finite and non-negative");
+            }
+        }
+        return new CondensedDistances(n, condensed);
+    }
+
+    /** The condensed length for {@code n} items, {@code n(n-1)/2}; fails if it does not fit an array. */
+    public static int length(int n) {
+        long len = (long) n * (n - 1) / 2;
+        if (len > Integer.MAX_VALUE - 8) {
+            throw new IllegalArgumentException(n + " items need " + len + " pairwise distances, more than one array holds");
+        }
+        return (int) len;
+    }
+
+    /** The condensed index of pair {@code (i, j)}, {@code i != j}, in either order. */
+    public static int index(int n, int i, int j) {
+        if (i > j) {
+            int t = i;
+            i = j;
+            j = t;
+        }
+        return (int) ((long) n * i - (long) i * (i + 1) / 2 + (j - i - 1));
+    }
+
+    /** The number of items. */
+    public int size() {
+        return n;
+    }
+
+    /** The dissimilarity between items {@code i} and {@code j}; 0 when {@code i == j}. */
+    public double get(int i, int j) {
+        Objects.checkIndex(i, n);
+        Objects.checkIndex(j, n);
+        return i == j ? 0.0 : values[index(n, i, j)];
+    }
+
+    /** The value at condensed position {@code t}. */
+    public double at(int t) {
+        return values[t];
+    }
+
+    /** A fresh copy of the condensed array (for algorithms that update distances in place). */
+    public double[] toCondensedArray() {
+        return values.clone();
+    }
+
+    /** Copies the condensed array into {@code dst}, which must have length {@code n(n-1)/2}. */
+    public void copyInto(double[] dst) {
+        System.arraycopy(values, 0, dst, 0, values.length);
+    }
+
+    /**
+     * The sub-matrix over the given items, in the given order. Items may repeat (bootstrap): a repeated
+     * item is at distance 0 from its copy. Never recomputes a distance.
+     */
+    public CondensedDistances gather(int[] items) {
+        int m = items.length;
+        double[] out = new double[length(m)];
+        int t = 0;
+        for (int a = 0; a < m; a++) {
+            int i = items[a];
+            Objects.checkIndex(i, n);
+            for (int b = a + 1; b < m; b++) {
+                int j = items[b];
+                out[t++] = i == j ? 0.0 : values[index(n, i, j)];
+            }
+        }
+        return new CondensedDistances(m, out);
+    }
+
+    /** Bytes needed to hold a condensed matrix over {@code n} items. */
+    public static long bytesFor(long n) {
+        return n * (n - 1) / 2 * Double.BYTES;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof CondensedDistances c && c.n == n && Arrays.equals(c.values, values);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * n + Arrays.hashCode(values);
+    }
+
+    @Override
+    public String toString() {
+        return "CondensedDistances[n=" + n + "]";
+    }
+}
