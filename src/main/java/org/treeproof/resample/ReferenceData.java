@@ -1,0 +1,294 @@
+package org.treeproof.resample;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import java.util.SplittableRandom;
+import org.treeproof.data.DataMatrix;
+import org.treeproof.data.InputException;
+
+/**
+ * A seeded generator of structureless reference data sets shaped like an observed matrix: same sample ids,
+ * feature names and size, values drawn afresh by {@link #draw(long)}.
+ *
+ * <p>Three reference distributions:
+ * <ul>
+ *   <li>{@link #featureRange(DataMatrix)}: each feature uniform over its observed range, independently;
+ *       method (a) of R. Tibshirani, G. Walther and T. Hastie, "Estimating the number of clusters in a data
+ *       set via the gap statistic", J. R. Stat. Soc. B 63 (2001) 411-423, doi:10.1111/1467-9868.00293.</li>
+ *   <li>{@link #principalBox(DataMatrix)}: uniform over the box aligned with the principal axes, their
+ *       method (b): the centred data are rotated to {@code X_c V}, each coordinate is drawn uniform over the
+ *       range of that column, and the draw is rotated back with {@code Vᵀ} and shifted by the column
+ *       means. Only the {@link PrincipalAxes#rank()} axes with variance are used, so the reference lies in
+ *       the same affine subspace as the data.</li>
+ *   <li>{@link #gaussian(DataMatrix)}: a Gaussian null that keeps the data's covariance and nothing else,
+ *       {@code Z · diag(sd) · Vᵀ + means} with {@code Z} standard normal and {@code sd_c² } the variance
+ *       along axis {@code c}; its expected sample covariance is the data's.</li>
+ * </ul>
+ *
+ * <p><b>Reproducibility.</b> A draw is a pure function of the prepared generator and the seed. All
+ * randomness comes from one {@code new SplittableRandom(seed)} read with {@code nextDouble()} in a fixed
+ * order: row by row, and within a row feature by feature (method (a)) or axis by axis (methods (b) and
+ * (c)). Normal variates come from the polar method of G. Marsaglia and T. A. Bray, "A convenient method
+ * for generating normal variables", SIAM Review 6 (1964) 260-264, doi:10.1137/1006063 (DOI from memory),
+ * using both values of each accepted pair in turn (a pair may span two rows), with {@link StrictMath#log}
+ * so that no platform intrinsic can change a bit; Java 17 arithmetic is strict everywhere, so output is
+ * identical on every JVM.
+ *
+ * <p><b>Cost per draw.</b> Method (a): {@code n·p} uniforms. Methods (b) and (c): {@code n·r} variates and
+ * an {@code n·r·p} back-rotation, plus one {@link PrincipalAxes#of} when the generator is prepared.
+ *
+ * <p>Instances are immutable and may be shared between threads.
+ */
+public final class ReferenceData {
+
+    /**
+     * The reference distributions offered for the gap statistic, by the names users type
+     * (case-insensitive, with aliases).
+     */
+    public enum Kind {
+        /** Uniform over each feature's observed range: Tibshirani et al. (2001) method (a). */
+        FEATURE_RANGE("feature-range", "range") {
+            @Override
+            public ReferenceData prepare(DataMatrix observed) {
+                return featureRange(observed);
+            }
+        },
+        /** Uniform over the principal-axis box: Tibshirani et al. (2001) method (b). */
+        PRINCIPAL_BOX("principal-box", "pca-box") {
+            @Override
+            public ReferenceData prepare(DataMatrix observed) {
+                return principalBox(observed);
+            }
+        };
+
+        private final String userName;
+        private final String alias;
+
+        Kind(String userName, String alias) {
+            this.userName = userName;
+            this.alias = alias;
+        }
+
+        /** The name users type and reports print. */
+        public String userName() {
+            return userName;
+        }
+
+        /** A generator of this kind for {@code observed}. */
+        public abstract ReferenceData prepare(DataMatrix observed);
+
+        /**
+         * The kind named by {@code text} (user name or alias, any case, surrounding blanks ignored).
+         *
+         * @throws InputException if no kind has that name
+         */
+        public static Kind parse(String text) {
+            String t = Objects.requireNonNull(text, "text").strip().toLowerCase(Locale.ROOT);
+            for (Kind k : values()) {
+                if (k.userName.equals(t) || k.alias.equals(t)) {
+                    return k;
+                }
+            }
+            throw new InputException("unknown gap reference '" + text.strip() + "': expected "
+                    + FEATURE_RANGE.userName + " or " + PRINCIPAL_BOX.userName);
+        }
+
+        @Override
+        public String toString() {
+            return userName;
+        }
+    }
+
+    /** How the coordinates of one sample are drawn; lives on the constant rather than in a switch. */
+    private enum Shape {
+        UNIFORM {
+            @Override
+            void coordinates(ReferenceData ref, SplittableRandom rng, Normal normal, double[] z) {
+                for (int c = 0; c < z.length; c++) {
+                    double lo = ref.lower[c];
+                    double hi = ref.upper[c];
+                    // nextDouble() < 1, but lo + (hi - lo) * u can still round up past hi.
+                    z[c] = Math.min(hi, lo + (hi - lo) * rng.nextDouble());
+                }
+            }
+        },
+        GAUSSIAN {
+            @Override
+            void coordinates(ReferenceData ref, SplittableRandom rng, Normal normal, double[] z) {
+                for (int c = 0; c < z.length; c++) {
+                    z[c] = ref.sd[c] * normal.next(rng);
+                }
+            }
+        };
+
+        abstract void coordinates(ReferenceData ref, SplittableRandom rng, Normal normal, double[] z);
+    }
+
+    private final List<String> sampleIds;
+    private final List<String> featureNames;
+    private final Shape shape;
+    /** Bounds of the uniform coordinates (features, or axes when {@link #axes} is set); null for Gaussian. */
+    private final double[] lower;
+    private final double[] upper;
+    /** Standard deviation per axis; Gaussian only. */
+    private final double[] sd;
+    /** {@code Vᵀ} r × p and the means to add back, or null when coordinates are the features themselves. */
+    private final double[] axes;
+    private final double[] means;
+
+    private ReferenceData(DataMatrix observed, Shape shape, double[] lower, double[] upper, double[] sd,
+            double[] axes, double[] means) {
+        this.sampleIds = observed.sampleIds();
+        this.featureNames = observed.featureNames();
+        this.shape = shape;
+        this.lower = lower;
+        this.upper = upper;
+        this.sd = sd;
+        this.axes = axes;
+        this.means = means;
+    }
+
+    /**
+     * Uniform over each feature's observed range [min, max] (method (a)).
+     *
+     * @throws InputException if a value is missing
+     */
+    public static ReferenceData featureRange(DataMatrix observed) {
+        int n = observed.samples();
+        int p = observed.features();
+        double[] x = observed.rowMajorCopy();
+        PrincipalAxes.requireComplete(observed, x, "gap reference data");
+        double[] lo = new double[p];
+        double[] hi = new double[p];
+        columnRanges(x, n, p, lo, hi);
+        return new ReferenceData(observed, Shape.UNIFORM, lo, hi, null, null, null);
+    }
+
+    /** Uniform over the principal-axis box of {@code observed} (method (b)), computing its axes. */
+    public static ReferenceData principalBox(DataMatrix observed) {
+        return principalBox(observed, PrincipalAxes.of(observed));
+    }
+
+    /**
+     * Uniform over the principal-axis box (method (b)) with axes already computed from {@code observed}.
+     *
+     * @throws InputException if a value is missing
+     */
+    public static ReferenceData principalBox(DataMatrix observed, PrincipalAxes axes) {
+        requireMatch(observed, axes);
+        int r = axes.rank();
+        double[] lo = new double[r];
+        double[] hi = new double[r];
+        columnRanges(axes.scores(observed), observed.samples(), r, lo, hi);
+        return new ReferenceData(observed, Shape.UNIFORM, lo, hi, null, axes.axes(), axes.means());
+    }
+
+    /** The Gaussian null with the covariance of {@code observed}, computing its axes. */
+    public static ReferenceData gaussian(DataMatrix observed) {
+        return gaussian(observed, PrincipalAxes.of(observed));
+    }
+
+    /** The Gaussian null with the covariance described by {@code axes}, which were computed from {@code observed}. */
+    public static ReferenceData gaussian(DataMatrix observed, PrincipalAxes axes) {
+        requireMatch(observed, axes);
+        double[] var = axes.variances();
+        double[] sd = new double[var.length];
+        for (int c = 0; c < sd.length; c++) {
+            sd[c] = Math.sqrt(var[c]);
+        }
+        return new ReferenceData(observed, Shape.GAUSSIAN, null, null, sd, axes.axes(), axes.means());
+    }
+
+    private static void requireMatch(DataMatrix observed, PrincipalAxes axes) {
+        if (axes.samples() != observed.samples() || axes.features() != observed.features()) {
+            throw new IllegalArgumentException("axes of a " + axes.samples() + " x " + axes.features()
+                    + " matrix given for a " + observed.samples() + " x " + observed.features() + " one");
+        }
+    }
+
+    private static void columnRanges(double[] x, int n, int m, double[] lo, double[] hi) {
+        java.util.Arrays.fill(lo, Double.POSITIVE_INFINITY);
+        java.util.Arrays.fill(hi, Double.NEGATIVE_INFINITY);
+        for (int i = 0; i < n; i++) {
+            for (int c = 0; c < m; c++) {
+                double v = x[i * m + c];
+                lo[c] = Math.min(lo[c], v);
+                hi[c] = Math.max(hi[c], v);
+            }
+        }
+    }
+
+    /** The number of samples of every draw. */
+    public int samples() {
+        return sampleIds.size();
+    }
+
+    /** The number of features of every draw. */
+    public int features() {
+        return featureNames.size();
+    }
+
+    /** One reference data set, a pure function of this generator and {@code seed}. */
+    public DataMatrix draw(long seed) {
+        int n = samples();
+        int p = features();
+        SplittableRandom rng = new SplittableRandom(seed);
+        Normal normal = new Normal();
+        double[] out = new double[n * p];
+        if (axes == null) {
+            double[] z = new double[p];
+            for (int i = 0; i < n; i++) {
+                shape.coordinates(this, rng, normal, z);
+                System.arraycopy(z, 0, out, i * p, p);
+            }
+        } else {
+            int r = axes.length / p;
+            double[] z = new double[r];
+            for (int i = 0; i < n; i++) {
+                shape.coordinates(this, rng, normal, z);
+                int o = i * p;
+                System.arraycopy(means, 0, out, o, p);
+                for (int c = 0; c < r; c++) {
+                    double zc = z[c];
+                    int ao = c * p;
+                    for (int j = 0; j < p; j++) {
+                        out[o + j] += zc * axes[ao + j];
+                    }
+                }
+            }
+        }
+        return new DataMatrix(sampleIds, featureNames, out);
+    }
+
+    /** Marsaglia-Bray polar method; holds the second value of the last accepted pair for the next call. */
+    private static final class Normal {
+        private double spare;
+        private boolean hasSpare;
+
+        double next(SplittableRandom rng) {
+            if (hasSpare) {
+                hasSpare = false;
+                return spare;
+            }
+            double u;
+            double v;
+            double s;
+            do {
+                u = 2 * rng.nextDouble() - 1;
+                v = 2 * rng.nextDouble() - 1;
+                s = u * u + v * v;
+            } while (s >= 1 || s == 0);
+            double m = Math.sqrt(-2 * StrictMath.log(s) / s);
+            spare = v * m;
+            hasSpare = true;
+            return u * m;
+        }
+    }
+
+    @Override
+    public String toString() {
+        return "ReferenceData[" + shape.name().toLowerCase(Locale.ROOT) + (axes == null ? " over features" : " over axes")
+                + ", " + samples() + " x " + features() + "]";
+    }
+}
