@@ -35,7 +35,7 @@ final class TreeFixtures {
     static double[][] iris() {
         try (Reader r = new InputStreamReader(open("/reference/iris.csv"), StandardCharsets.UTF_8)) {
             List<double[]> rows = new ArrayList<>();
-            for (CSVRecord rec : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).build().parse(r)) {
+            for (CSVRecord rec : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(r)) {
                 double[] row = new double[4];
                 for (int f = 0; f < 4; f++) {
                     row[f] = Double.parseDouble(rec.get(f));
