@@ -95,11 +95,12 @@ abstract sealed class RowSource permits RowSource.Columns, RowSource.Ranks, RowS
             }
             this.ranks = new float[rows * width];
             double[] row = new double[width];
-            double[] sorted = new double[width];
+            int[] order = new int[width];
+            int[] buffer = new int[width];
             double[] scratch = new double[values.scratchLength()];
             for (int r = 0; r < rows; r++) {
                 values.load(r, row, 0, scratch);
-                averageRanks(row, sorted, ranks, r * width);
+                averageRanks(row, order, buffer, ranks, r * width);
             }
         }
 
@@ -108,47 +109,72 @@ abstract sealed class RowSource permits RowSource.Columns, RowSource.Ranks, RowS
          * {@code scipy.stats.rankdata(method='average')}: equal values (also {@code -0.0} and {@code 0.0})
          * share the mean of the 1-based positions they occupy in sorted order.
          */
-        static void averageRanks(double[] row, double[] sorted, float[] out, int outOff) {
+        static void averageRanks(double[] row, int[] order, int[] buffer, float[] out, int outOff) {
             int m = row.length;
-            for (int k = 0; k < m; k++) {
-                sorted[k] = row[k] + 0.0; // turns -0.0 into 0.0, which Arrays.sort would otherwise order apart
-            }
-            java.util.Arrays.sort(sorted, 0, m);
-            for (int k = 0; k < m; k++) {
-                double v = row[k] + 0.0;
-                int lo = firstNotBelow(sorted, m, v);
-                int hi = firstAbove(sorted, m, v);
-                // positions lo+1 .. hi (1-based) are tied; their mean is (lo + 1 + hi) / 2
-                out[outOff + k] = (float) ((lo + 1 + hi) * 0.5);
+            sortIndices(row, order, buffer);
+            for (int lo = 0; lo < m; ) {
+                double v = row[order[lo]];
+                int hi = lo + 1;
+                while (hi < m && row[order[hi]] == v) {
+                    hi++;
+                }
+                // sorted positions lo .. hi-1 hold equal values: 1-based ranks lo+1 .. hi, mean (lo + 1 + hi) / 2
+                float rank = (float) ((lo + 1 + hi) * 0.5);
+                for (int k = lo; k < hi; k++) {
+                    out[outOff + order[k]] = rank;
+                }
+                lo = hi;
             }
         }
 
-        private static int firstNotBelow(double[] s, int m, double v) {
-            int lo = 0;
-            int hi = m;
-            while (lo < hi) {
-                int mid = (lo + hi) >>> 1;
-                if (s[mid] < v) {
-                    lo = mid + 1;
-                } else {
-                    hi = mid;
-                }
-            }
-            return lo;
-        }
+        private static final int INSERTION_RUN = 16;
 
-        private static int firstAbove(double[] s, int m, double v) {
-            int lo = 0;
-            int hi = m;
-            while (lo < hi) {
-                int mid = (lo + hi) >>> 1;
-                if (s[mid] <= v) {
-                    lo = mid + 1;
-                } else {
-                    hi = mid;
+        /**
+         * Puts into {@code order} the indices of {@code v} in increasing order of value: a bottom-up merge
+         * sort over runs sorted by insertion. The JDK sorts primitives only by value, and a sort of boxed
+         * indices with a comparator costs several times more for the short rows typical here.
+         */
+        static void sortIndices(double[] v, int[] order, int[] buffer) {
+            int m = v.length;
+            for (int k = 0; k < m; k++) {
+                order[k] = k;
+            }
+            for (int start = 0; start < m; start += INSERTION_RUN) {
+                int end = Math.min(m, start + INSERTION_RUN);
+                for (int k = start + 1; k < end; k++) {
+                    int idx = order[k];
+                    double key = v[idx];
+                    int j = k - 1;
+                    while (j >= start && v[order[j]] > key) {
+                        order[j + 1] = order[j];
+                        j--;
+                    }
+                    order[j + 1] = idx;
                 }
             }
-            return lo;
+            int[] src = order;
+            int[] dst = buffer;
+            for (int width = INSERTION_RUN; width < m; width *= 2) {
+                for (int lo = 0; lo < m; lo += 2 * width) {
+                    int mid = Math.min(m, lo + width);
+                    int hi = Math.min(m, lo + 2 * width);
+                    int a = lo;
+                    int b = mid;
+                    for (int k = lo; k < hi; k++) {
+                        if (a < mid && (b >= hi || v[src[a]] <= v[src[b]])) {
+                            dst[k] = src[a++];
+                        } else {
+                            dst[k] = src[b++];
+                        }
+                    }
+                }
+                int[] t = src;
+                src = dst;
+                dst = t;
+            }
+            if (src != order) {
+                System.arraycopy(src, 0, order, 0, m);
+            }
         }
 
         @Override

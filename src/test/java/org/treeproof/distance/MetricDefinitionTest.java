@@ -64,7 +64,7 @@ class MetricDefinitionTest {
         // rankdata([3, 1, 4, 1, 5], 'average') = [3, 1.5, 4, 1.5, 5]
         double[] row = {3, 1, 4, 1, 5};
         float[] ranks = new float[5];
-        RowSource.Ranks.averageRanks(row, new double[5], ranks, 0);
+        RowSource.Ranks.averageRanks(row, new int[5], new int[5], ranks, 0);
         assertEquals(List.of(3f, 1.5f, 4f, 1.5f, 5f), List.of(ranks[0], ranks[1], ranks[2], ranks[3], ranks[4]));
     }
 
