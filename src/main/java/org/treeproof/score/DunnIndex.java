@@ -53,13 +53,15 @@ public final class DunnIndex {
         int t = 0;
         for (int i = 0; i < n; i++) {
             int li = labels[i];
+            // select rather than branch: cluster membership along a row is close to random, so a
+            // branch here is mispredicted about half the time
             for (int j = i + 1; j < n; j++) {
                 double d = distances.at(t++);
-                if (labels[j] == li) {
-                    diameter = Math.max(diameter, d);
-                } else {
-                    separation = Math.min(separation, d);
-                }
+                boolean same = labels[j] == li;
+                double within = same ? d : 0.0;
+                double between = same ? Double.POSITIVE_INFINITY : d;
+                diameter = within > diameter ? within : diameter;
+                separation = between < separation ? between : separation;
             }
         }
         if (partition.clusterCount() < 2) {

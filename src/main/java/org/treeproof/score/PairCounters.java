@@ -27,6 +27,16 @@ final class PairCounters {
         return arrays * length * (wide ? 2 : 1);
     }
 
+    /** Whether counters are two bytes wide. */
+    boolean wide() {
+        return high != null;
+    }
+
+    /** The low bytes of array {@code a}, for loops that increment one-byte counters directly. */
+    byte[] lowBytes(int a) {
+        return low[a];
+    }
+
     /** The largest count a counter can hold. */
     int maxCount() {
         return high == null ? 0xFF : 0xFFFF;
