@@ -41,6 +41,14 @@ public final class DaviesBouldin {
     public record Result(double value, double[] scatter) {
         public Result {
             scatter = scatter.clone();
+            if (value < 0) {
+                throw new IllegalArgumentException("negative Davies-Bouldin index " + value);
+            }
+            for (double s : scatter) {
+                if (!(s >= 0)) {
+                    throw new IllegalArgumentException("cluster scatter " + s + " is not a non-negative number");
+                }
+            }
         }
 
         @Override

@@ -42,6 +42,11 @@ public final class DunnIndex {
      * @param diameter    the largest within-cluster dissimilarity (0 when every cluster is one sample)
      */
     public record Result(double value, double separation, double diameter) {
+        public Result {
+            if (value < 0 || separation < 0 || !(diameter >= 0)) {
+                throw new IllegalArgumentException("Dunn index parts must be non-negative");
+            }
+        }
     }
 
     /** Computes the index. */

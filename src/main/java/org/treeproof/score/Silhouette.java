@@ -25,7 +25,7 @@ import org.treeproof.partition.Partition;
  */
 public final class Silhouette {
     /** Above this many per-sample cluster sums the O(n) memory, row-by-row pass is used instead. */
-    static final long SUMS_LIMIT = 1L << 25;
+    static final long SUMS_LIMIT = 1L << 23;
 
     private final CondensedDistances distances;
     private final Partition partition;
@@ -61,6 +61,11 @@ public final class Silhouette {
     public record Result(double[] values, double mean) {
         public Result {
             values = values.clone();
+            for (double v : values) {
+                if (v < -1 || v > 1) {
+                    throw new IllegalArgumentException("silhouette width " + v + " is outside [-1, 1]");
+                }
+            }
         }
 
         @Override

@@ -37,6 +37,14 @@ public final class WithinClusterSumOfSquares {
     public record Result(double total, double[] perCluster) {
         public Result {
             perCluster = perCluster.clone();
+            if (!(total >= 0)) {
+                throw new IllegalArgumentException("W_k " + total + " is not a non-negative number");
+            }
+            for (double w : perCluster) {
+                if (!(w >= 0)) {
+                    throw new IllegalArgumentException("cluster sum of squares " + w + " is not a non-negative number");
+                }
+            }
         }
 
         @Override

@@ -211,6 +211,11 @@ class ConsensusAccumulatorTest {
         assertThrows(IllegalArgumentException.class, () -> m.consensus(4, 0, 1));
         assertThrows(IllegalArgumentException.class, () -> m.consensus(2, 1, 1));
         assertThrows(IllegalArgumentException.class, () -> ConsensusAccumulator.create(1, 3, 10));
+        // no replicates: no pair co-sampled, no consensus values, PAC undefined
+        ConsensusMatrix none = ConsensusAccumulator.create(3, 2, 5).finish();
+        assertEquals(3, none.neverCoSampledPairs());
+        assertEquals(0, none.distribution(2).pairs());
+        assertTrue(Double.isNaN(none.pac(2)));
         assertThrows(IllegalArgumentException.class, () -> ConsensusAccumulator.create(10, 3, 10_001));
     }
 
