@@ -1,0 +1,22 @@
+package org.treeproof.study;
+
+import java.util.List;
+
+/**
+ * The evidence table of a study: every linkage, every k, every measure.
+ *
+ * @param sampleIds the samples, in input order
+ * @param features  the number of features of the prepared data (0 when only distances were given)
+ * @param settings  the study's settings
+ * @param linkages  per linkage, in the order of the settings
+ */
+public record Evidence(List<String> sampleIds, int features, StudySettings settings, List<LinkageEvidence> linkages) {
+    public Evidence {
+        sampleIds = List.copyOf(sampleIds);
+        linkages = List.copyOf(linkages);
+    }
+
+    public int samples() {
+        return sampleIds.size();
+    }
+}

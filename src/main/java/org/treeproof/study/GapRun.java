@@ -1,0 +1,112 @@
+package org.treeproof.study;
+
+import java.util.List;
+import org.treeproof.data.DataMatrix;
+import org.treeproof.distance.CondensedDistances;
+import org.treeproof.distance.Metric;
+import org.treeproof.resample.ReferenceData;
+import org.treeproof.resample.ReplicateExecutor;
+import org.treeproof.resample.Seeds;
+import org.treeproof.score.GapResult;
+import org.treeproof.score.GapStatistic;
+import org.treeproof.tree.MergeTree;
+
+/**
+ * The gap statistic of every linkage (R. Tibshirani, G. Walther, T. Hastie, "Estimating the number of
+ * clusters in a data set via the gap statistic", J. R. Stat. Soc. B 63 (2001) 411-423,
+ * doi:10.1111/1467-9868.00293): each reference set is drawn, its distances computed and clustered with
+ * every linkage, and log W_k recorded for k = 1..maxK; reference sets run in parallel.
+ *
+ * <p>W_k = Σ_r D_r / (2 n_r) with D_r the sum of d over ordered pairs in cluster r. The paper takes d as
+ * squared Euclidean distance, so for the Euclidean metrics W_k is the pooled within-cluster sum of
+ * squares around the centroids; for any other metric d is that metric's dissimilarity.
+ */
+final class GapRun {
+    private final DataMatrix data;
+    private final CondensedDistances distances;
+    private final StudySettings settings;
+    private final List<ReferenceSolution> refs;
+    private final ReplicateExecutor executor;
+    private final StudyProgress progress;
+
+    GapRun(DataMatrix data, CondensedDistances distances, StudySettings settings, List<ReferenceSolution> refs,
+            ReplicateExecutor executor, StudyProgress progress) {
+        this.data = data;
+        this.distances = distances;
+        this.settings = settings;
+        this.refs = refs;
+        this.executor = executor;
+        this.progress = progress;
+    }
+
+    GapResult[] run() {
+        int maxK = settings.maxK();
+        int b = settings.referenceSets();
+        int l = refs.size();
+        double[][][] refLogW = new double[l][b][];
+        ReferenceData generator = settings.gapReference().prepare(data);
+        progress.stage("reference data sets (gap statistic)", b);
+        executor.run(0, b, i -> referenceLogW(generator, i), row -> {
+            int index = (int) row[0][0];
+            for (int li = 0; li < l; li++) {
+                refLogW[li][index] = row[li + 1];
+            }
+            progress.step();
+        });
+        GapResult[] out = new GapResult[l];
+        for (int li = 0; li < l; li++) {
+            MergeTree tree = refs.get(li).tree();
+            double[] observed = logW(data, distances, tree, maxK);
+            out[li] = GapStatistic.compute(observed, refLogW[li]);
+        }
+        return out;
+    }
+
+    /** Row 0 holds the index; row 1 + l the log W_k of linkage l for k = 1..maxK. */
+    private double[][] referenceLogW(ReferenceData generator, int index) {
+        DataMatrix ref = generator.draw(Seeds.seedFor(settings.seed(), Seeds.Purpose.GAP_REFERENCE, index));
+        CondensedDistances rd = settings.metric().compute(ref, 1);
+        double[][] out = new double[refs.size() + 1][];
+        out[0] = new double[] {index};
+        for (int li = 0; li < refs.size(); li++) {
+            MergeTree tree = refs.get(li).linkage().cluster(rd);
+            out[li + 1] = logW(ref, rd, tree, settings.maxK());
+        }
+        return out;
+    }
+
+    private double[] logW(DataMatrix x, CondensedDistances d, MergeTree tree, int maxK) {
+        double[] out = new double[maxK];
+        for (int k = 1; k <= maxK; k++) {
+            int[] labels = tree.cutLabelsAtK(k);
+            out[k - 1] = StrictMath.log(within(x, d, labels, k));
+        }
+        return out;
+    }
+
+    private double within(DataMatrix x, CondensedDistances d, int[] labels, int k) {
+        Metric m = settings.metric();
+        if (m == Metric.EUCLIDEAN || m == Metric.SQEUCLIDEAN) {
+            return GapStatistic.withinSumOfSquares(x, labels);
+        }
+        // Σ_r (1 / n_r) Σ_{i<i' in r} d(i, i')
+        int n = labels.length;
+        int[] size = new int[k];
+        for (int lab : labels) {
+            size[lab]++;
+        }
+        double[] sum = new double[k];
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                if (labels[i] == labels[j]) {
+                    sum[labels[i]] += d.get(i, j);
+                }
+            }
+        }
+        double w = 0;
+        for (int c = 0; c < k; c++) {
+            w += sum[c] / size[c];
+        }
+        return w;
+    }
+}

@@ -1,0 +1,17 @@
+package org.treeproof.study;
+
+import org.treeproof.score.BranchSupport;
+
+/**
+ * The compact result of one replicate: everything the study accumulates from it, and nothing it
+ * can recompute. Small enough to send between machines (a few bytes per sample and linkage).
+ *
+ * @param index    the replicate's index
+ * @param distinct the distinct samples it held, sorted
+ * @param labels   {@code labels[l][k - 2][a]}: the cluster (0-based, canonical) of {@code distinct[a]} when
+ *                 linkage {@code l}'s replicate tree is cut at k
+ * @param support  per linkage, which reference clades this replicate counted and reproduced; {@code null}
+ *                 when branch support is not computed (null calibration)
+ */
+record ReplicateOutcome(int index, int[] distinct, int[][][] labels, BranchSupport.Replicate[] support) {
+}

@@ -1,0 +1,217 @@
+package org.treeproof.study;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Objects;
+import org.treeproof.data.InputException;
+import org.treeproof.distance.Metric;
+import org.treeproof.resample.ReferenceData;
+import org.treeproof.resample.Resampling;
+import org.treeproof.tree.Linkage;
+
+/**
+ * Every choice of a study, validated once, with every problem reported together.
+ *
+ * <p>The thread count is deliberately not here: it cannot change a result, so it belongs to the run,
+ * not to the study (see {@link StudyRunner}).
+ *
+ * @param linkages        the linkages to compare, in the order given, no repeats
+ * @param metric          the dissimilarity between samples
+ * @param maxK            the largest number of clusters assessed (from 2)
+ * @param replicates      stability replicates B
+ * @param resampling      how replicates draw samples
+ * @param sampleFraction  share of samples a subsample holds, in (0, 1]
+ * @param featureFraction share of features each replicate holds, in (0, 1]; 1 keeps all (no recomputation)
+ * @param referenceSets   reference data sets for the gap statistic (0 skips it)
+ * @param gapReference    how the gap statistic's reference data are drawn
+ * @param nullSets        null data sets for calibrating stability (0 skips it)
+ * @param nullReplicates  replicates drawn from each null data set
+ * @param pacLow          lower end of the PAC interval (exclusive)
+ * @param pacHigh         upper end of the PAC interval (inclusive)
+ * @param seed            the master seed every random draw derives from
+ */
+public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int replicates, Resampling resampling,
+        double sampleFraction, double featureFraction, int referenceSets, ReferenceData.Kind gapReference,
+        int nullSets, int nullReplicates, double pacLow, double pacHigh, long seed) {
+
+    /** The defaults a study uses when an option is not given. */
+    public static final List<Linkage> DEFAULT_LINKAGES = List.of(Linkage.AVERAGE, Linkage.COMPLETE, Linkage.WARD);
+
+    public StudySettings {
+        linkages = List.copyOf(linkages);
+        Objects.requireNonNull(metric, "metric");
+        Objects.requireNonNull(resampling, "resampling");
+        Objects.requireNonNull(gapReference, "gapReference");
+        List<String> problems = problems(linkages, metric, maxK, replicates, sampleFraction, featureFraction,
+                referenceSets, nullSets, nullReplicates, pacLow, pacHigh);
+        if (!problems.isEmpty()) {
+            throw new InputException(String.join("; ", problems));
+        }
+    }
+
+    private static List<String> problems(List<Linkage> linkages, Metric metric, int maxK, int replicates,
+            double sampleFraction, double featureFraction, int referenceSets, int nullSets, int nullReplicates,
+            double pacLow, double pacHigh) {
+        var p = new ArrayList<String>();
+        if (linkages.isEmpty()) {
+            p.add("--linkages needs at least one linkage");
+        }
+        if (new LinkedHashSet<>(linkages).size() != linkages.size()) {
+            p.add("--linkages names a linkage twice");
+        }
+        for (Linkage l : linkages) {
+            if (l.requiresEuclidean() && !metric.euclidean()) {
+                p.add(l.id() + " linkage needs --metric euclidean (it is defined on Euclidean distances), not "
+                        + metric.id());
+            }
+        }
+        if (maxK < 2) {
+            p.add("--max-k must be at least 2, got " + maxK);
+        }
+        if (replicates < 2) {
+            p.add("--replicates must be at least 2, got " + replicates);
+        }
+        if (!(sampleFraction > 0 && sampleFraction <= 1)) {
+            p.add("--sample-fraction must be in (0, 1], got " + sampleFraction);
+        }
+        if (!(featureFraction > 0 && featureFraction <= 1)) {
+            p.add("--feature-fraction must be in (0, 1], got " + featureFraction);
+        }
+        if (referenceSets < 0 || referenceSets == 1) {
+            p.add("--reference-sets must be 0 (no gap statistic) or at least 2, got " + referenceSets);
+        }
+        if (nullSets < 0) {
+            p.add("--null-sets must be 0 (no null calibration) or more, got " + nullSets);
+        }
+        if (nullSets > 0 && nullReplicates < 2) {
+            p.add("--null-replicates must be at least 2, got " + nullReplicates);
+        }
+        if (!(pacLow >= 0 && pacLow < pacHigh && pacHigh <= 1)) {
+            p.add("the PAC interval must satisfy 0 <= low < high <= 1, got (" + pacLow + ", " + pacHigh + "]");
+        }
+        return p;
+    }
+
+    /** Checks the settings against the size of the input; every problem in one message. */
+    public void checkAgainst(int samples, boolean hasData) {
+        var p = new ArrayList<String>();
+        int smallest = resampling == Resampling.SUBSAMPLE ? (int) Math.round(sampleFraction * samples) : samples;
+        if (maxK > samples - 1) {
+            p.add("--max-k " + maxK + " needs more than " + maxK + " samples; the input has " + samples);
+        } else if (maxK > smallest - 1) {
+            p.add("--max-k " + maxK + " is too large for replicates of " + smallest
+                    + " samples; lower --max-k or raise --sample-fraction");
+        }
+        if (!hasData) {
+            if (featureFraction < 1) {
+                p.add("--feature-fraction needs a data table; distances alone cannot be resampled by feature");
+            }
+        }
+        if (!p.isEmpty()) {
+            throw new InputException(String.join("; ", p));
+        }
+    }
+
+    /** Whether replicates draw features too (and so recompute distances). */
+    public boolean resamplesFeatures() {
+        return featureFraction < 1;
+    }
+
+    /** A builder holding the defaults. */
+    public static Builder builder() {
+        return new Builder();
+    }
+
+    /** Collects options one by one; {@link #build()} validates them all at once. */
+    public static final class Builder {
+        private List<Linkage> linkages = DEFAULT_LINKAGES;
+        private Metric metric = Metric.EUCLIDEAN;
+        private int maxK = 10;
+        private int replicates = 200;
+        private Resampling resampling = Resampling.SUBSAMPLE;
+        private double sampleFraction = 0.8;
+        private double featureFraction = 1.0;
+        private int referenceSets = 50;
+        private ReferenceData.Kind gapReference = ReferenceData.Kind.PRINCIPAL_BOX;
+        private int nullSets = 19;
+        private int nullReplicates = 20;
+        private double pacLow = 0.1;
+        private double pacHigh = 0.9;
+        private long seed = 1;
+
+        private Builder() {
+        }
+
+        public Builder linkages(List<Linkage> v) {
+            linkages = v;
+            return this;
+        }
+
+        public Builder metric(Metric v) {
+            metric = v;
+            return this;
+        }
+
+        public Builder maxK(int v) {
+            maxK = v;
+            return this;
+        }
+
+        public Builder replicates(int v) {
+            replicates = v;
+            return this;
+        }
+
+        public Builder resampling(Resampling v) {
+            resampling = v;
+            return this;
+        }
+
+        public Builder sampleFraction(double v) {
+            sampleFraction = v;
+            return this;
+        }
+
+        public Builder featureFraction(double v) {
+            featureFraction = v;
+            return this;
+        }
+
+        public Builder referenceSets(int v) {
+            referenceSets = v;
+            return this;
+        }
+
+        public Builder gapReference(ReferenceData.Kind v) {
+            gapReference = v;
+            return this;
+        }
+
+        public Builder nullSets(int v) {
+            nullSets = v;
+            return this;
+        }
+
+        public Builder nullReplicates(int v) {
+            nullReplicates = v;
+            return this;
+        }
+
+        public Builder pacInterval(double low, double high) {
+            pacLow = low;
+            pacHigh = high;
+            return this;
+        }
+
+        public Builder seed(long v) {
+            seed = v;
+            return this;
+        }
+
+        public StudySettings build() {
+            return new StudySettings(linkages, metric, maxK, replicates, resampling, sampleFraction, featureFraction,
+                    referenceSets, gapReference, nullSets, nullReplicates, pacLow, pacHigh, seed);
+        }
+    }
+}

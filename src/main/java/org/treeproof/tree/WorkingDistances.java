@@ -1,0 +1,165 @@
+package org.treeproof.tree;
+
+import java.util.Arrays;
+import org.treeproof.distance.CondensedDistances;
+
+/**
+ * The mutable state shared by the matrix-updating algorithms: one working copy of the condensed matrix,
+ * the sorted list of active cluster slots and their sizes.
+ *
+ * <p>A cluster lives in the slot of one of its items. When slots {@code x < y} merge, {@code x} is
+ * dropped and {@code y} holds the union, the convention of Müllner's fastcluster and of scipy, which
+ * keeps tie resolution identical to theirs. Scanning only the active slots (instead of all n and
+ * skipping empty ones) halves the work over a run; {@code rowOffset} turns the condensed index of
+ * {@code (i, j)}, {@code i < j}, into one addition.
+ */
+final class WorkingDistances {
+    final int n;
+    final double[] d;
+    final int[] size;
+    private final int[] rowOffset;
+    private final int[] active;
+    private int count;
+    private final double[] bufX;
+    private final double[] bufY;
+    private final int[] bufSize;
+    private final int[] bufPos;
+
+    WorkingDistances(CondensedDistances source) {
+        n = source.size();
+        d = source.toCondensedArray();
+        size = new int[n];
+        Arrays.fill(size, 1);
+        rowOffset = new int[n];
+        for (int i = 0; i < n; i++) {
+            rowOffset[i] = (int) ((long) n * i - (long) i * (i + 1) / 2 - i - 1);
+        }
+        active = new int[n];
+        for (int i = 0; i < n; i++) {
+            active[i] = i;
+        }
+        count = n;
+        bufX = new double[n];
+        bufY = new double[n];
+        bufSize = new int[n];
+        bufPos = new int[n];
+    }
+
+    /** Condensed position of {@code (i, j)}; requires {@code i < j}. */
+    int index(int i, int j) {
+        return rowOffset[i] + j;
+    }
+
+    double get(int i, int j) {
+        return i < j ? d[rowOffset[i] + j] : d[rowOffset[j] + i];
+    }
+
+    /** The smallest active slot. */
+    int firstActive() {
+        return active[0];
+    }
+
+    /**
+     * The active slot nearest to {@code x}, scanning in increasing slot order and replacing the current
+     * best only when strictly closer; {@code preferred} (or -1) is the starting best, so it wins ties.
+     */
+    int nearest(int x, int preferred) {
+        double best = preferred >= 0 ? get(x, preferred) : Double.POSITIVE_INFINITY;
+        int arg = preferred;
+        final double[] dd = d;
+        final int[] off = rowOffset;
+        final int[] act = active;
+        int p = Arrays.binarySearch(act, 0, count, x);
+        for (int r = 0; r < p; r++) {
+            int i = act[r];
+            double v = dd[off[i] + x];
+            if (v < best) {
+                best = v;
+                arg = i;
+            }
+        }
+        int ox = off[x];
+        for (int r = p + 1, m = count; r < m; r++) {
+            int i = act[r];
+            double v = dd[ox + i];
+            if (v < best) {
+                best = v;
+                arg = i;
+            }
+        }
+        return arg;
+    }
+
+    /** The active slot above {@code x} nearest to it (smallest slot on ties), or -1 if none. */
+    int nearestAbove(int x) {
+        double best = Double.POSITIVE_INFINITY;
+        int arg = -1;
+        final double[] dd = d;
+        final int[] act = active;
+        int ox = rowOffset[x];
+        for (int r = Arrays.binarySearch(act, 0, count, x) + 1, m = count; r < m; r++) {
+            int i = act[r];
+            double v = dd[ox + i];
+            if (v < best) {
+                best = v;
+                arg = i;
+            }
+        }
+        return arg;
+    }
+
+    /**
+     * Merges slots {@code x < y} at working distance {@code dxy}: drops {@code x}, gives {@code y} the
+     * union and its Lance-Williams distances to every other active slot.
+     */
+    void merge(Linkage linkage, int x, int y, double dxy) {
+        int nx = size[x];
+        int ny = size[y];
+        int p = Arrays.binarySearch(active, 0, count, x);
+        System.arraycopy(active, p + 1, active, p, count - p - 1);
+        count--;
+        final double[] dd = d;
+        final int[] off = rowOffset;
+        final int[] act = active;
+        final int ox = off[x];
+        final int oy = off[y];
+        int c = 0;
+        for (int r = 0, m = count; r < m; r++) {
+            int i = act[r];
+            int px;
+            int py;
+            if (i < x) {
+                px = off[i] + x;
+                py = off[i] + y;
+            } else if (i < y) {
+                px = ox + i;
+                py = off[i] + y;
+            } else if (i > y) {
+                px = ox + i;
+                py = oy + i;
+            } else {
+                continue;
+            }
+            bufX[c] = dd[px];
+            bufY[c] = dd[py];
+            bufSize[c] = size[i];
+            bufPos[c] = py;
+            c++;
+        }
+        linkage.update(bufX, bufY, dxy, nx, ny, bufSize, c);
+        for (int r = 0; r < c; r++) {
+            dd[bufPos[r]] = bufY[r];
+        }
+        size[x] = 0;
+        size[y] = nx + ny;
+    }
+
+    /** Active slots below {@code limit}, in increasing order, written to {@code out}; returns how many. */
+    int activeBelow(int limit, int[] out) {
+        int c = 0;
+        for (int r = 0; r < count && active[r] < limit; r++) {
+            out[c++] = active[r];
+        }
+        return c;
+    }
+}
