@@ -1,0 +1,382 @@
+package org.treeproof.io;
+
+import com.fasterxml.jackson.core.JsonEncoding;
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.UncheckedIOException;
+import java.util.List;
+import org.treeproof.score.GapResult;
+import org.treeproof.score.ReplicateSummary;
+import org.treeproof.study.ClusterEvidence;
+import org.treeproof.study.CutHeight;
+import org.treeproof.study.Evidence;
+import org.treeproof.study.KEvidence;
+import org.treeproof.study.LinkageEvidence;
+import org.treeproof.study.NullStability;
+import org.treeproof.study.Recommendation;
+import org.treeproof.study.StudySettings;
+import org.treeproof.tree.Linkage;
+
+/**
+ * Writes {@code summary.json}: the evidence table and the recommendation, in the layout scripts rely on.
+ *
+ * <p>The output is a pure function of its inputs (no time stamps, no thread count), so two runs of the same
+ * study give identical bytes. Numbers are written at full precision (shortest round-trip form); values that
+ * are not finite are written as {@code null}.
+ */
+public final class SummaryJson {
+    private final Evidence evidence;
+    private final Recommendation recommendation;
+    private final Provenance provenance;
+
+    /**
+     * Where the data came from and how it was prepared.
+     *
+     * @param toolName    the tool's name
+     * @param toolVersion the tool's version
+     * @param inputPath   the input file as given
+     * @param sha256      the SHA-256 of the input file's bytes
+     * @param preparation the preparation steps, as sentences, in order
+     * @param inputOptions the effective input options (name → value), in a stable order
+     * @param labels      comparison with known labels, or {@code null}
+     */
+    public record Provenance(String toolName, String toolVersion, String inputPath, String sha256,
+            List<String> preparation, List<Option> inputOptions, LabelsSummary labels) {
+        public Provenance {
+            preparation = List.copyOf(preparation);
+            inputOptions = List.copyOf(inputOptions);
+        }
+    }
+
+    /** One effective option, written as a string. */
+    public record Option(String name, String value) {
+    }
+
+    /** The recommended solution against known labels. */
+    public record LabelsSummary(String file, double ari, List<String> classes, int[][] table) {
+    }
+
+    public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance) {
+        this.evidence = evidence;
+        this.recommendation = recommendation;
+        this.provenance = provenance;
+    }
+
+    /** The JSON as UTF-8 bytes, pretty-printed, ending with a newline. */
+    public byte[] toBytes() {
+        var out = new ByteArrayOutputStream();
+        try {
+            write(out);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return out.toByteArray();
+    }
+
+    public void write(OutputStream out) throws IOException {
+        try (JsonGenerator g = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)) {
+            g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+            g.setPrettyPrinter(new DefaultPrettyPrinter());
+            g.writeStartObject();
+            g.writeObjectFieldStart("tool");
+            g.writeStringField("name", provenance.toolName());
+            g.writeStringField("version", provenance.toolVersion());
+            g.writeEndObject();
+            writeInput(g);
+            writeSettings(g, evidence.settings());
+            g.writeArrayFieldStart("linkages");
+            for (LinkageEvidence le : evidence.linkages()) {
+                writeLinkage(g, le);
+            }
+            g.writeEndArray();
+            writeRecommendation(g);
+            if (provenance.labels() != null) {
+                writeLabels(g, provenance.labels());
+            }
+            g.writeEndObject();
+            g.writeRaw('\n');
+        }
+    }
+
+    private void writeInput(JsonGenerator g) throws IOException {
+        g.writeObjectFieldStart("input");
+        g.writeStringField("path", provenance.inputPath());
+        g.writeStringField("sha256", provenance.sha256());
+        g.writeNumberField("samples", evidence.samples());
+        g.writeNumberField("features", evidence.features());
+        g.writeArrayFieldStart("preparation");
+        for (String s : provenance.preparation()) {
+            g.writeString(s);
+        }
+        g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    private void writeSettings(JsonGenerator g, StudySettings s) throws IOException {
+        g.writeObjectFieldStart("settings");
+        g.writeStringField("metric", s.metric().id());
+        g.writeArrayFieldStart("linkages");
+        for (Linkage l : s.linkages()) {
+            g.writeString(l.id());
+        }
+        g.writeEndArray();
+        g.writeNumberField("maxK", s.maxK());
+        g.writeNumberField("replicates", s.replicates());
+        g.writeStringField("resampling", s.resampling().id());
+        g.writeNumberField("sampleFraction", s.sampleFraction());
+        g.writeNumberField("featureFraction", s.featureFraction());
+        g.writeNumberField("referenceSets", s.referenceSets());
+        g.writeStringField("gapReference", s.gapReference().userName());
+        g.writeNumberField("nullSets", s.nullSets());
+        g.writeNumberField("nullReplicates", s.nullReplicates());
+        g.writeObjectFieldStart("pacInterval");
+        g.writeNumberField("low", s.pacLow());
+        g.writeNumberField("high", s.pacHigh());
+        g.writeEndObject();
+        g.writeNumberField("seed", s.seed());
+        for (Option o : provenance.inputOptions()) {
+            g.writeStringField(o.name(), o.value());
+        }
+        g.writeObjectFieldStart("decisionRule");
+        var r = recommendation.rule();
+        g.writeNumberField("alpha", r.alpha());
+        g.writeNumberField("stableJaccard", r.stableJaccard());
+        g.writeNumberField("dissolvedJaccard", r.dissolvedJaccard());
+        g.writeNumberField("reasonableSilhouette", r.reasonableSilhouette());
+        g.writeNumberField("weakSilhouette", r.weakSilhouette());
+        g.writeNumberField("unstableSample", r.unstableSample());
+        g.writeEndObject();
+        g.writeEndObject();
+    }
+
+    private void writeLinkage(JsonGenerator g, LinkageEvidence le) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("linkage", le.linkage().id());
+        number(g, "copheneticCorrelation", le.copheneticCorrelation());
+        g.writeBooleanField("monotone", le.tree().monotone());
+        if (le.gap() != null) {
+            g.writeNumberField("gapChoice", le.gapChoice());
+        } else {
+            g.writeNullField("gapChoice");
+        }
+        if (le.gap() != null) {
+            writeGap(g, le.gap());
+        }
+        g.writeArrayFieldStart("byK");
+        for (KEvidence e : le.byK()) {
+            writeK(g, e);
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("branchSupport");
+        double[] support = le.branchSupport();
+        for (int s = 0; s < support.length; s++) {
+            g.writeStartObject();
+            g.writeNumberField("merge", s);
+            g.writeNumberField("size", le.tree().size(s));
+            number(g, "height", le.tree().height(s));
+            number(g, "support", support[s]);
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    private static void writeGap(JsonGenerator g, GapResult gap) throws IOException {
+        g.writeObjectFieldStart("gap");
+        g.writeNumberField("referenceSets", gap.referenceSets());
+        g.writeBooleanField("ruleMet", gap.ruleMet());
+        g.writeArrayFieldStart("byK");
+        double[] logW = gap.logW();
+        double[] ref = gap.referenceMeanLogW();
+        double[] gv = gap.gap();
+        double[] sd = gap.sd();
+        double[] se = gap.se();
+        for (int k = 1; k <= gap.maxK(); k++) {
+            g.writeStartObject();
+            g.writeNumberField("k", k);
+            number(g, "logW", logW[k - 1]);
+            number(g, "referenceMeanLogW", ref[k - 1]);
+            number(g, "gap", gv[k - 1]);
+            number(g, "sd", sd[k - 1]);
+            number(g, "se", se[k - 1]);
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    private static void writeK(JsonGenerator g, KEvidence e) throws IOException {
+        g.writeStartObject();
+        g.writeNumberField("k", e.k());
+        cutHeight(g, "cutHeight", e.cutHeight());
+        g.writeBooleanField("tieDependent", e.tieDependent());
+        number(g, "silhouette", e.silhouette());
+        number(g, "calinskiHarabasz", e.calinskiHarabasz());
+        number(g, "daviesBouldin", e.daviesBouldin());
+        number(g, "dunn", e.dunn());
+        number(g, "gap", e.gap());
+        number(g, "gapSE", e.gapSE());
+        g.writeObjectFieldStart("stability");
+        ReplicateSummary a = e.stability().ari();
+        g.writeNumberField("replicates", a.count());
+        number(g, "ariMean", a.mean());
+        number(g, "ariSD", a.sd());
+        number(g, "ariLow", a.low());
+        number(g, "ariHigh", a.high());
+        number(g, "pac", e.stability().pac());
+        NullStability n = e.stability().nullModel();
+        if (n == null) {
+            g.writeNullField("null");
+        } else {
+            g.writeObjectFieldStart("null");
+            g.writeNumberField("sets", n.sets());
+            g.writeNumberField("replicatesPerSet", n.replicatesPerSet());
+            number(g, "ariMean", n.ariMean());
+            number(g, "ariLow", n.ariLow());
+            number(g, "ariHigh", n.ariHigh());
+            number(g, "pacMean", n.pacMean());
+            number(g, "pacLow", n.pacLow());
+            number(g, "pacHigh", n.pacHigh());
+            number(g, "pValueAri", n.pValueAri());
+            number(g, "pValuePac", n.pValuePac());
+            g.writeEndObject();
+        }
+        g.writeEndObject();
+        g.writeArrayFieldStart("clusters");
+        for (ClusterEvidence c : e.clusters()) {
+            g.writeStartObject();
+            g.writeNumberField("id", c.id());
+            g.writeNumberField("size", c.size());
+            number(g, "jaccard", c.jaccard());
+            number(g, "dissolvedShare", c.dissolvedShare());
+            number(g, "recoveredShare", c.recoveredShare());
+            g.writeStringField("status", c.status().label());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    private void writeRecommendation(JsonGenerator g) throws IOException {
+        Recommendation r = recommendation;
+        g.writeObjectFieldStart("recommendation");
+        g.writeStringField("linkage", r.linkage().id());
+        g.writeNumberField("k", r.k());
+        cutHeight(g, "cutHeight", r.cutHeight());
+        g.writeStringField("verdict", r.verdict().id());
+        g.writeArrayFieldStart("levels");
+        for (int k : r.levels()) {
+            g.writeNumber(k);
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("reasons");
+        for (String s : r.reasons()) {
+            g.writeString(s);
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("criteria");
+        for (Recommendation.CriterionChoice c : r.criteria()) {
+            g.writeStartObject();
+            g.writeStringField("criterion", c.criterion());
+            g.writeNumberField("k", c.k());
+            g.writeStringField("basis", c.basis());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("flaggedClusters");
+        for (ClusterEvidence c : r.flaggedClusters()) {
+            g.writeStartObject();
+            g.writeNumberField("id", c.id());
+            g.writeNumberField("size", c.size());
+            number(g, "jaccard", c.jaccard());
+            g.writeStringField("status", c.status().label());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("flaggedSamples");
+        for (Recommendation.SampleFlag f : r.flaggedSamples()) {
+            g.writeStartObject();
+            g.writeStringField("sample", f.sampleId());
+            g.writeNumberField("cluster", f.cluster());
+            number(g, "stability", f.stability());
+            number(g, "silhouette", f.silhouette());
+            g.writeArrayFieldStart("reasons");
+            for (String s : f.reasons()) {
+                g.writeString(s);
+            }
+            g.writeEndArray();
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("linkageComparison");
+        for (Recommendation.LinkageSummary s : r.linkages()) {
+            g.writeStartObject();
+            g.writeStringField("linkage", s.linkage().id());
+            number(g, "copheneticCorrelation", s.copheneticCorrelation());
+            g.writeNumberField("k", s.k());
+            g.writeStringField("verdict", s.verdict().id());
+            number(g, "ariMean", s.ariMean());
+            number(g, "pac", s.pac());
+            number(g, "silhouette", s.silhouette());
+            number(g, "smallestJaccard", s.worstJaccard());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("agreement");
+        for (double[] row : r.agreement()) {
+            g.writeStartArray();
+            for (double v : row) {
+                number(g, v);
+            }
+            g.writeEndArray();
+        }
+        g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    private static void writeLabels(JsonGenerator g, LabelsSummary l) throws IOException {
+        g.writeObjectFieldStart("labels");
+        g.writeStringField("file", l.file());
+        number(g, "ari", l.ari());
+        g.writeArrayFieldStart("classes");
+        for (String c : l.classes()) {
+            g.writeString(c);
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("table");
+        for (int[] row : l.table()) {
+            g.writeStartArray();
+            for (int v : row) {
+                g.writeNumber(v);
+            }
+            g.writeEndArray();
+        }
+        g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    private static void cutHeight(JsonGenerator g, String field, CutHeight h) throws IOException {
+        g.writeObjectFieldStart(field);
+        number(g, "low", h.low());
+        number(g, "high", h.high());
+        number(g, "chosen", h.chosen());
+        g.writeEndObject();
+    }
+
+    private static void number(JsonGenerator g, String field, double v) throws IOException {
+        g.writeFieldName(field);
+        number(g, v);
+    }
+
+    private static void number(JsonGenerator g, double v) throws IOException {
+        if (Double.isFinite(v)) {
+            g.writeNumber(v);
+        } else {
+            g.writeNull();
+        }
+    }
+}

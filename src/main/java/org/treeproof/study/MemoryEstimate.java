@@ -1,0 +1,85 @@
+package org.treeproof.study;
+
+import java.util.Locale;
+import org.treeproof.distance.CondensedDistances;
+import org.treeproof.score.ConsensusAccumulator;
+
+/**
+ * The heap a study needs at its peak, estimated before anything large is allocated, so that a study too big
+ * for the heap stops at once with advice instead of failing hours later with an OutOfMemoryError.
+ *
+ * <p>What stays for the whole run: the data table, the full distance matrix, and per linkage the consensus
+ * counters (one or two bytes per pair and k). On top of it, the largest of the three phases: stability
+ * replicates (per running replicate a gathered distance matrix and the linkage's working copy of it), null
+ * calibration (a null data set, its distances and consensus counters, plus running replicates) and the gap
+ * statistic (per running reference set its data, distances and a working copy).
+ *
+ * @param persistent bytes held for the whole run
+ * @param peakPhase  bytes of the largest phase on top of them
+ * @param phase      which phase that is
+ */
+public record MemoryEstimate(long persistent, long peakPhase, String phase) {
+
+    /** The estimate for a study of {@code n} samples and {@code p} features run on {@code threads} threads. */
+    public static MemoryEstimate of(int n, int p, StudySettings s, int threads, boolean hasData) {
+        int links = s.linkages().size();
+        long data = 8L * n * p;
+        long distances = CondensedDistances.bytesFor(n);
+        long consensus = links * ConsensusAccumulator.bytesFor(n, s.maxK(), s.replicates());
+        long persistent = data + distances + consensus;
+        int m = s.resampling() == org.treeproof.resample.Resampling.SUBSAMPLE
+                ? (int) Math.round(s.sampleFraction() * n) : n;
+        long perReplicate = 2 * CondensedDistances.bytesFor(m) + 64L * m * (s.maxK() + links);
+        if (s.resamplesFeatures()) {
+            perReplicate += 8L * m * p;
+        }
+        int inFlight = Math.max(1, threads);
+        long replicates = inFlight * perReplicate;
+        long nulls = 0;
+        if (hasData && s.nullSets() > 0) {
+            nulls = data + distances + links * ConsensusAccumulator.bytesFor(n, s.maxK(), s.nullReplicates())
+                    + inFlight * perReplicate;
+        }
+        long gap = 0;
+        if (hasData && s.referenceSets() > 0) {
+            gap = inFlight * (data + 2 * distances);
+        }
+        long peak = replicates;
+        String phase = "stability replicates";
+        if (nulls > peak) {
+            peak = nulls;
+            phase = "null calibration";
+        }
+        if (gap > peak) {
+            peak = gap;
+            phase = "gap statistic";
+        }
+        return new MemoryEstimate(persistent, peak, phase);
+    }
+
+    public long total() {
+        return persistent + peakPhase;
+    }
+
+    /**
+     * Fails with advice when the estimate (plus a quarter for the JVM's own needs and fragmentation) exceeds
+     * {@code heapBytes}.
+     */
+    public void requireFits(long heapBytes, int n) {
+        long needed = total() + total() / 4;
+        if (needed > heapBytes) {
+            throw new NotEnoughMemoryException(String.format(Locale.ROOT,
+                    "this study needs about %s of memory (%s for the data, distances and consensus counters, %s more "
+                            + "during %s) but Java may use only %s; give Java more heap (java -Xmx%dg -jar ...), "
+                            + "run fewer --threads, assess fewer samples, reduce features with --top-variable, or "
+                            + "lower --null-sets/--reference-sets",
+                    gib(needed), gib(persistent), gib(peakPhase), phase, gib(heapBytes),
+                    (long) Math.ceil(needed / (double) (1L << 30)) + 1));
+        }
+    }
+
+    private static String gib(long bytes) {
+        return bytes >= (1L << 30) ? String.format(Locale.ROOT, "%.1f GiB", bytes / (double) (1L << 30))
+                : String.format(Locale.ROOT, "%.0f MiB", bytes / (double) (1L << 20));
+    }
+}
