@@ -7,7 +7,6 @@ import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Objects;
 import org.treeproof.data.InputException;
 import org.treeproof.data.InputSource;
 import org.treeproof.distance.CondensedDistances;
@@ -46,14 +45,7 @@ public final class DistanceTableReader {
      * @throws InputException when the file cannot be read or is not a valid distance table
      */
     public DistanceTable read(Path file) {
-        Objects.requireNonNull(file, "file");
-        String source = file.toString();
-        InputStream in = Sources.open(file);
-        try {
-            return read(source, in, delimiter != null ? delimiter : Cells.delimiterFor(source));
-        } finally {
-            Sources.closeQuietly(in);
-        }
+        return TableText.parse(file, delimiter, text -> new Parse(text).run());
     }
 
     /**
@@ -62,15 +54,7 @@ public final class DistanceTableReader {
      * @throws InputException when the bytes are not a valid distance table
      */
     public DistanceTable read(String source, InputStream in) {
-        Objects.requireNonNull(source, "source");
-        Objects.requireNonNull(in, "in");
-        return read(source, in, delimiter != null ? delimiter : Cells.delimiterFor(source));
-    }
-
-    private DistanceTable read(String source, InputStream in, char d) {
-        try (TableText text = TableText.open(source, in, d)) {
-            return new Parse(text).run();
-        }
+        return TableText.parse(source, in, delimiter, text -> new Parse(text).run());
     }
 
     /** The state of reading one table. */

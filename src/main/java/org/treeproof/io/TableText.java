@@ -10,10 +10,13 @@ import java.io.PushbackInputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
 import java.util.Iterator;
+import java.util.Objects;
+import java.util.function.Function;
 import java.util.zip.GZIPInputStream;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
@@ -71,6 +74,29 @@ final class TableText implements Closeable {
     /** Opens {@code raw} for reading; the caller closes the result, which closes {@code raw}. */
     static TableText open(String source, InputStream raw, char delimiter) {
         return new TableText(source, Cells.checkDelimiter(delimiter), raw);
+    }
+
+    /**
+     * Reads {@code file} with {@code parse} and closes it; the file is named in messages as given, and gives the
+     * delimiter by its name unless one is given.
+     */
+    static <T> T parse(Path file, Character delimiter, Function<TableText, T> parse) {
+        Objects.requireNonNull(file, "file");
+        InputStream in = Sources.open(file);
+        try {
+            return parse(file.toString(), in, delimiter, parse);
+        } finally {
+            Sources.closeQuietly(in);
+        }
+    }
+
+    /** Reads {@code in} with {@code parse} and closes it; {@code source} names it and, unless given, the delimiter. */
+    static <T> T parse(String source, InputStream in, Character delimiter, Function<TableText, T> parse) {
+        Objects.requireNonNull(source, "source");
+        Objects.requireNonNull(in, "in");
+        try (TableText text = open(source, in, delimiter != null ? delimiter : Cells.delimiterFor(source))) {
+            return parse.apply(text);
+        }
     }
 
     String source() {
