@@ -15,7 +15,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Preparations against values computed by numpy 1.24.2 and scikit-learn 1.2.1 (StandardScaler) in
- * {@code src/test/resources/reference/preparation_reference.py}: nanmedian imputation, log2(x + 1), population
+ * {@code src/test/resources/reference/data/preparation_reference.py}: nanmedian imputation, log2(x + 1), population
  * variance for the top-variable choice, and population z-scores, on a small table with missing cells and on Iris
  * (Fisher 1936, doi:10.1111/j.1469-1809.1936.tb02137.x).
  */
@@ -25,7 +25,7 @@ class PreparationReferenceTest {
 
     static JsonNode fixture() throws IOException {
         try (InputStream in = PreparationReferenceTest.class.getResourceAsStream(
-                "/reference/preparation_reference.json")) {
+                "/reference/data/preparation_reference.json")) {
             return new ObjectMapper().readTree(in);
         }
     }

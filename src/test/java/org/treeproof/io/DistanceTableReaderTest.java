@@ -26,7 +26,7 @@ class DistanceTableReaderTest {
 
     private static JsonNode reference() throws IOException {
         try (InputStream in = DistanceTableReaderTest.class.getResourceAsStream(
-                "/reference/distance_table_reference.json")) {
+                "/reference/io/distance_table_reference.json")) {
             return new ObjectMapper().readTree(in);
         }
     }

@@ -128,7 +128,7 @@ y, f = top_variable(y, IF, 3)
 cases.append(case("iris log2, top 3, center", {"missing": "error", "log2": True, "scale": "center", "topVariable": 3},
                   IS, IF, IX, IS, f, center(y)))
 
-out = {"generator": "src/test/resources/reference/preparation_reference.py",
+out = {"generator": "src/test/resources/reference/data/preparation_reference.py",
        "versions": {"numpy": np.__version__, "scipy": scipy.__version__, "scikit-learn": sklearn.__version__},
        "cases": cases}
 with open("preparation_reference.json", "w") as fh:
