@@ -29,6 +29,8 @@ final class CheckedTextReader extends Reader {
     private long line = 1;
     private long column = 1;
     private boolean afterCarriageReturn;
+    /** The second half of a surrogate pair decoded for a one-character read, or -1. */
+    private int pending = -1;
 
     /**
      * @param source  the name used in messages
@@ -48,6 +50,11 @@ final class CheckedTextReader extends Reader {
         if (len == 0) {
             return 0;
         }
+        if (pending >= 0) {
+            cbuf[off] = (char) pending;
+            pending = -1;
+            return 1;
+        }
         if (flushed) {
             return -1;
         }
@@ -65,7 +72,12 @@ final class CheckedTextReader extends Reader {
                 return produced;
             }
             if (r.isOverflow()) {
-                throw new IllegalStateException("decoder overflow with room for " + len + " characters");
+                // One character of room and a surrogate pair to give: hand out its first half now.
+                char[] pair = new char[2];
+                int n = read(pair, 0, 2);
+                cbuf[off] = pair[0];
+                pending = n == 2 ? pair[1] : -1;
+                return 1;
             }
             if (endOfBytes) {
                 flushed = true;
