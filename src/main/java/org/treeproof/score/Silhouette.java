@@ -1,0 +1,186 @@
+package org.treeproof.score;
+
+import java.util.Arrays;
+import java.util.Objects;
+import org.treeproof.distance.CondensedDistances;
+import org.treeproof.partition.Partition;
+
+/**
+ * Silhouette widths of a partition from a dissimilarity matrix.
+ *
+ * <p>P. J. Rousseeuw, "Silhouettes: a graphical aid to the interpretation and validation of cluster
+ * analysis", Journal of Computational and Applied Mathematics 20 (1987) 53-65,
+ * doi:10.1016/0377-0427(87)90125-7. For sample {@code i} in cluster {@code A}, {@code a(i)} is its mean
+ * dissimilarity to the other members of {@code A}, {@code b(i)} the smallest mean dissimilarity to the
+ * members of another cluster, and {@code s(i) = (b(i) - a(i)) / max(a(i), b(i))}.
+ *
+ * <p>Conventions, as in scikit-learn 1.2.1 ({@code silhouette_samples}, {@code silhouette_score}):
+ * a sample alone in its cluster has {@code s(i) = 0} (Rousseeuw's own rule); a sample with
+ * {@code a(i) = b(i) = 0} (duplicates split across clusters) has {@code s(i) = 0}; the mean is over all
+ * samples, singletons included. With one cluster there is no {@code b(i)}: the silhouette is undefined
+ * and every value and the mean are {@code NaN} (scikit-learn refuses this case). With as many clusters
+ * as samples every value is 0 by the singleton rule (scikit-learn refuses this case too).
+ *
+ * <p>One pass over the condensed matrix, O(n²) time, O(n·k) extra memory.
+ */
+public final class Silhouette {
+    /** Above this many per-sample cluster sums the O(n) memory, row-by-row pass is used instead. */
+    static final long SUMS_LIMIT = 1L << 23;
+
+    private final CondensedDistances distances;
+    private final Partition partition;
+    private final long sumsLimit;
+
+    private Silhouette(CondensedDistances distances, Partition partition, long sumsLimit) {
+        this.distances = Objects.requireNonNull(distances, "distances");
+        this.partition = Objects.requireNonNull(partition, "partition");
+        if (distances.size() != partition.size()) {
+            throw new IllegalArgumentException("distances are over " + distances.size()
+                    + " items but the partition over " + partition.size());
+        }
+        this.sumsLimit = sumsLimit;
+    }
+
+    /** The silhouette of {@code partition} under {@code distances} (same items, same order). */
+    public static Silhouette of(CondensedDistances distances, Partition partition) {
+        return new Silhouette(distances, partition, SUMS_LIMIT);
+    }
+
+    /** As {@link #of}, choosing the pass by the given limit; lets tests exercise both passes. */
+    static Silhouette of(CondensedDistances distances, Partition partition, long sumsLimit) {
+        return new Silhouette(distances, partition, sumsLimit);
+    }
+
+    /**
+     * Per-sample silhouette widths and their mean.
+     *
+     * @param values one width per sample, in sample order, each in [-1, 1], or all {@code NaN} when
+     *               the partition has one cluster
+     * @param mean   the average width, {@code NaN} when the partition has one cluster
+     */
+    public record Result(double[] values, double mean) {
+        public Result {
+            values = values.clone();
+            for (double v : values) {
+                if (v < -1 || v > 1) {
+                    throw new IllegalArgumentException("silhouette width " + v + " is outside [-1, 1]");
+                }
+            }
+        }
+
+        @Override
+        public double[] values() {
+            return values.clone();
+        }
+
+        /** Width of sample {@code i}. */
+        public double value(int i) {
+            return values[i];
+        }
+
+        /** Whether the silhouette is defined (the partition has at least two clusters). */
+        public boolean defined() {
+            return !Double.isNaN(mean);
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Result r && Arrays.equals(r.values, values)
+                    && Double.compare(r.mean, mean) == 0;
+        }
+
+        @Override
+        public int hashCode() {
+            return Arrays.hashCode(values) * 31 + Double.hashCode(mean);
+        }
+
+        @Override
+        public String toString() {
+            return "Silhouette.Result[n=" + values.length + ", mean=" + mean + "]";
+        }
+    }
+
+    /** Computes the widths. */
+    public Result compute() {
+        int n = partition.size();
+        int k = partition.clusterCount();
+        double[] s = new double[n];
+        if (k < 2) {
+            Arrays.fill(s, Double.NaN);
+            return new Result(s, Double.NaN);
+        }
+        int[] labels = partition.labels();
+        int[] sizes = partition.clusterSizes();
+        double[] rowSums = new double[k];
+        if ((long) n * k <= sumsLimit) {
+            double[] sums = clusterSumsAllPairs(labels, k);
+            for (int i = 0; i < n; i++) {
+                System.arraycopy(sums, i * k, rowSums, 0, k);
+                s[i] = width(rowSums, labels[i], sizes);
+            }
+        } else {
+            for (int i = 0; i < n; i++) {
+                clusterSumsOfRow(i, labels, rowSums);
+                s[i] = width(rowSums, labels[i], sizes);
+            }
+        }
+        double total = 0;
+        for (double v : s) {
+            total += v;
+        }
+        return new Result(s, total / n);
+    }
+
+    /** {@code sums[i*k + c]} = Σ of d(i, j) over the members j of cluster c; one sequential pass. */
+    private double[] clusterSumsAllPairs(int[] labels, int k) {
+        int n = labels.length;
+        double[] sums = new double[n * k];
+        double[] acc = new double[k];
+        int t = 0;
+        for (int i = 0; i < n; i++) {
+            int li = labels[i];
+            int rowI = i * k;
+            Arrays.fill(acc, 0.0);
+            for (int j = i + 1; j < n; j++) {
+                double d = distances.at(t++);
+                int lj = labels[j];
+                acc[lj] += d;
+                sums[j * k + li] += d;
+            }
+            for (int c = 0; c < k; c++) {
+                sums[rowI + c] += acc[c];
+            }
+        }
+        return sums;
+    }
+
+    /** The same sums for one sample, reading its row of the matrix; O(k) memory, strided reads. */
+    private void clusterSumsOfRow(int i, int[] labels, double[] rowSums) {
+        int n = labels.length;
+        Arrays.fill(rowSums, 0.0);
+        for (int j = 0; j < i; j++) {
+            rowSums[labels[j]] += distances.at(CondensedDistances.index(n, j, i));
+        }
+        if (i + 1 < n) {
+            int t = CondensedDistances.index(n, i, i + 1);
+            for (int j = i + 1; j < n; j++) {
+                rowSums[labels[j]] += distances.at(t++);
+            }
+        }
+    }
+
+    private static double width(double[] sums, int own, int[] sizes) {
+        if (sizes[own] == 1) {
+            return 0.0;
+        }
+        double a = sums[own] / (sizes[own] - 1);
+        double b = Double.POSITIVE_INFINITY;
+        for (int c = 0; c < sums.length; c++) {
+            if (c != own) {
+                b = Math.min(b, sums[c] / sizes[c]);
+            }
+        }
+        double max = Math.max(a, b);
+        return max == 0 ? 0.0 : (b - a) / max;
+    }
+}
