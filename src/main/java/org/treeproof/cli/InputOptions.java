@@ -1,0 +1,180 @@
+package org.treeproof.cli;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.treeproof.data.InputException;
+import org.treeproof.data.MissingPolicy;
+import org.treeproof.data.Preparation;
+import org.treeproof.data.Scale;
+import org.treeproof.io.DataTable;
+import org.treeproof.io.DataTableReader;
+import org.treeproof.io.DistanceTableReader;
+import org.treeproof.io.LoadedInput;
+import picocli.CommandLine;
+import picocli.CommandLine.Option;
+
+/**
+ * The input options every command that reads a table shares (a picocli mixin): how the file is laid out and how
+ * it is prepared. {@link #load(Path)} reads and prepares the command's INPUT accordingly.
+ *
+ * <p>The default scaling is {@code zscore}: with features in different units, a distance on raw values is
+ * decided by whichever feature has the largest numbers, which is rarely what a study means. Data already on one
+ * scale (and comparisons with other software on raw values) ask for {@code --scale none}; the effective choice is
+ * recorded with the results either way.
+ */
+public final class InputOptions {
+
+    @Option(names = "--samples-in-columns",
+            description = "The table has one feature per row and one sample per column (header row = sample ids).")
+    private boolean samplesInColumns;
+
+    @Option(names = "--delimiter", paramLabel = "CHAR", converter = DelimiterConverter.class,
+            description = "Field delimiter: a single character, or tab, comma, semicolon, space, pipe (also '\\t')."
+                    + " Default: from the file name: .csv comma; .tsv, .tab, .txt tab (also with .gz).")
+    private Character delimiter;
+
+    @Option(names = "--missing", paramLabel = "POLICY", converter = MissingConverter.class,
+            description = "Missing cells (empty, NA, N/A, #N/A, NaN): error, drop-features, drop-samples or"
+                    + " impute-median (the feature's median). Default: error.")
+    private MissingPolicy missing;
+
+    @Option(names = "--log2", description = "Take log2(x + 1) of every value (all values must be >= 0).")
+    private boolean log2;
+
+    @Option(names = "--scale", paramLabel = "HOW", converter = ScaleConverter.class,
+            description = "Per-feature scaling after log2: none, center or zscore (population SD; constant features"
+                    + " are dropped and reported). Default: zscore.")
+    private Scale scale;
+
+    @Option(names = "--top-variable", paramLabel = "N", converter = TopVariableConverter.class,
+            description = "Keep the N features of largest variance (ties by input order), 0 for all. Default: 0.")
+    private Integer topVariable;
+
+    @Option(names = "--distances",
+            description = "INPUT is a square, symmetric table of distances with ids in its header row and first"
+                    + " column, not a data table.")
+    private boolean distances;
+
+    /** Whether INPUT is a distance table. */
+    public boolean distances() {
+        return distances;
+    }
+
+    /** Whether a data table holds one sample per column. */
+    public boolean samplesInColumns() {
+        return samplesInColumns;
+    }
+
+    /** The delimiter asked for; empty when it is chosen by the file name. */
+    public Optional<Character> delimiter() {
+        return Optional.ofNullable(delimiter);
+    }
+
+    /** The effective preparation of a data table, defaults filled in. */
+    public Preparation preparation() {
+        return new Preparation(missing == null ? MissingPolicy.ERROR : missing, log2,
+                scale == null ? Preparation.DEFAULT_SCALE : scale, topVariable == null ? 0 : topVariable);
+    }
+
+    /**
+     * Reads {@code input} as these options say and, for a data table, prepares it.
+     *
+     * @throws InputException when the file is not a valid table, cannot be prepared, or an option given does not
+     *                        apply to a distance table
+     */
+    public LoadedInput load(Path input) {
+        if (distances) {
+            List<String> notForDistances = new ArrayList<>();
+            addIf(notForDistances, samplesInColumns, "--samples-in-columns");
+            addIf(notForDistances, missing != null, "--missing");
+            addIf(notForDistances, log2, "--log2");
+            addIf(notForDistances, scale != null, "--scale");
+            addIf(notForDistances, topVariable != null, "--top-variable");
+            if (!notForDistances.isEmpty()) {
+                throw new InputException(String.join(", ", notForDistances) + (notForDistances.size() == 1 ? " does"
+                        : " do") + " not apply to a distance table (--distances)");
+            }
+            return LoadedInput.of(new DistanceTableReader(delimiter).read(input));
+        }
+        Preparation preparation = preparation();
+        DataTable table = new DataTableReader(delimiter, samplesInColumns).read(input);
+        return LoadedInput.of(table, preparation.apply(table.matrix(), table.locator()));
+    }
+
+    private static void addIf(List<String> list, boolean condition, String option) {
+        if (condition) {
+            list.add(option);
+        }
+    }
+
+    /** Reads a delimiter: one character, or a name for one that is awkward to type. */
+    public static final class DelimiterConverter implements CommandLine.ITypeConverter<Character> {
+        @Override
+        public Character convert(String value) {
+            char c = switch (value.toLowerCase(Locale.ROOT)) {
+                case "tab", "\\t", "\t" -> '\t';
+                case "comma" -> ',';
+                case "semicolon" -> ';';
+                case "space", " " -> ' ';
+                case "pipe" -> '|';
+                default -> {
+                    if (value.length() != 1) {
+                        throw new CommandLine.TypeConversionException("'" + value + "' is not one character; give a"
+                                + " character or tab, comma, semicolon, space or pipe");
+                    }
+                    yield value.charAt(0);
+                }
+            };
+            if (c == '"' || (c < 0x20 && c != '\t')) {
+                throw new CommandLine.TypeConversionException(c == '"' ? "the quote character '\"' cannot delimit"
+                        + " fields" : "a control character cannot delimit fields");
+            }
+            return c;
+        }
+    }
+
+    /** Reads a missing-value policy by its user name. */
+    public static final class MissingConverter implements CommandLine.ITypeConverter<MissingPolicy> {
+        @Override
+        public MissingPolicy convert(String value) {
+            try {
+                return MissingPolicy.fromUserName(value);
+            } catch (InputException e) {
+                throw new CommandLine.TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
+    /** Reads a scaling by its user name. */
+    public static final class ScaleConverter implements CommandLine.ITypeConverter<Scale> {
+        @Override
+        public Scale convert(String value) {
+            try {
+                return Scale.fromUserName(value);
+            } catch (InputException e) {
+                throw new CommandLine.TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
+    /** Reads a feature count, 0 meaning all. */
+    public static final class TopVariableConverter implements CommandLine.ITypeConverter<Integer> {
+        @Override
+        public Integer convert(String value) {
+            int n;
+            try {
+                n = Integer.parseInt(value.strip());
+            } catch (NumberFormatException e) {
+                throw new CommandLine.TypeConversionException("'" + value + "' is not a whole number");
+            }
+            if (n < 0) {
+                throw new CommandLine.TypeConversionException("'" + value + "' is negative; give 0 (all features) or"
+                        + " a positive count");
+            }
+            return n;
+        }
+    }
+}

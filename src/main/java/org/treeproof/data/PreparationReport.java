@@ -1,0 +1,99 @@
+package org.treeproof.data;
+
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * What a {@link Preparation} did to a table, for the report and the methods paragraph: every sample and feature
+ * it dropped with the reason, how many cells it imputed, which features the top-variable step kept.
+ *
+ * @param settings        the preparation that was applied
+ * @param inputSamples    samples in the table as read
+ * @param inputFeatures   features in the table as read
+ * @param missingCells    missing cells in the table as read
+ * @param droppedSamples  samples dropped, in input order (only the missing-value policy drops samples)
+ * @param droppedFeatures features dropped by the missing-value policy or as constant under z-scoring, in the
+ *                        order they were dropped; features left out by the top-variable step are not listed here
+ *                        but described by {@code topVariable}
+ * @param imputedCells    cells filled in with their feature's median
+ * @param imputedFeatures features with at least one imputed cell
+ * @param topVariable     the top-variable selection, empty when it was not asked for
+ * @param samples         samples in the prepared table
+ * @param features        features in the prepared table
+ */
+public record PreparationReport(Preparation settings, int inputSamples, int inputFeatures, long missingCells,
+        List<Removal> droppedSamples, List<Removal> droppedFeatures, long imputedCells, int imputedFeatures,
+        Optional<TopVariable> topVariable, int samples, int features) {
+
+    public PreparationReport {
+        Objects.requireNonNull(settings, "settings");
+        droppedSamples = List.copyOf(droppedSamples);
+        droppedFeatures = List.copyOf(droppedFeatures);
+        Objects.requireNonNull(topVariable, "topVariable");
+        if (inputSamples < 0 || inputFeatures < 0 || missingCells < 0 || imputedCells < 0 || imputedFeatures < 0) {
+            throw new IllegalArgumentException("negative count");
+        }
+        if (samples != inputSamples - droppedSamples.size()) {
+            throw new IllegalArgumentException(samples + " samples left does not match " + inputSamples + " read and "
+                    + droppedSamples.size() + " dropped");
+        }
+        int leftOut = topVariable.map(t -> t.candidates() - t.kept().size()).orElse(0);
+        if (features != inputFeatures - droppedFeatures.size() - leftOut) {
+            throw new IllegalArgumentException(features + " features left does not match " + inputFeatures + " read, "
+                    + droppedFeatures.size() + " dropped and " + leftOut + " not among the most variable");
+        }
+    }
+
+    /** A sample or feature that was dropped, and why. */
+    public record Removal(String name, Reason reason, int missingValues) {
+        public Removal {
+            Objects.requireNonNull(name, "name");
+            Objects.requireNonNull(reason, "reason");
+            if (missingValues < 0) {
+                throw new IllegalArgumentException("negative missing count");
+            }
+        }
+    }
+
+    /** Why a sample or feature was dropped. */
+    public enum Reason {
+        /** It had missing values and the policy drops such rows or columns. */
+        MISSING_VALUES("has missing values"),
+        /** Every value of the feature was missing, so there was no median to impute. */
+        NO_OBSERVED_VALUES("has no observed value to take a median of"),
+        /** The feature takes one value in every sample, so its standard deviation is 0 and it has no z-score. */
+        CONSTANT("is constant, so it has no z-score");
+
+        private final String description;
+
+        Reason(String description) {
+            this.description = description;
+        }
+
+        /** A short phrase for reports, e.g. "has missing values". */
+        public String description() {
+            return description;
+        }
+    }
+
+    /**
+     * The outcome of keeping the {@code requested} features of largest population variance.
+     *
+     * @param requested      the N asked for
+     * @param candidates     features available at that step
+     * @param kept           the kept features, in input order (all candidates when N is not smaller)
+     * @param cutoffVariance the smallest variance among the kept features
+     * @param tieAtCutoff    whether a left-out feature has exactly the cutoff variance, so input order decided
+     */
+    public record TopVariable(int requested, int candidates, List<String> kept, double cutoffVariance,
+            boolean tieAtCutoff) {
+        public TopVariable {
+            kept = List.copyOf(kept);
+            if (requested < 1 || kept.size() != Math.min(requested, candidates)) {
+                throw new IllegalArgumentException("kept " + kept.size() + " of " + candidates + " for N = "
+                        + requested);
+            }
+        }
+    }
+}

@@ -1,0 +1,94 @@
+package org.treeproof.data;
+
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.stream.Collectors;
+
+/**
+ * How features are put on a common scale before distances are computed; always per feature, over the samples.
+ * Means and standard deviations are population ones (divisor n), as numpy computes them by default.
+ */
+public enum Scale {
+    /** The values as they are (after any log2). */
+    NONE("none") {
+        @Override
+        void apply(PreparationRun run) {
+        }
+    },
+    /** Subtract each feature's mean. */
+    CENTER("center", "centre") {
+        @Override
+        void apply(PreparationRun run) {
+            double[] mean = run.table.means();
+            double[] one = new double[mean.length];
+            Arrays.fill(one, 1.0);
+            run.table.shiftAndDivide(mean, one);
+        }
+    },
+    /**
+     * Subtract each feature's mean and divide by its population standard deviation. A constant feature has no
+     * z-score; it is dropped and reported instead of being divided by zero.
+     */
+    ZSCORE("zscore", "z-score", "standardize", "standardise") {
+        @Override
+        void apply(PreparationRun run) {
+            boolean[] constant = run.table.constantFeatures();
+            int left = 0;
+            for (boolean c : constant) {
+                left += c ? 0 : 1;
+            }
+            if (left == 0) {
+                throw new InputException(run.where.source() + ": every feature is constant across the samples, so "
+                        + "--scale zscore leaves nothing to cluster");
+            }
+            run.dropFeatures(constant, PreparationReport.Reason.CONSTANT, new int[constant.length]);
+            double[] mean = run.table.means();
+            double[] sd = run.table.variances(mean);
+            for (int j = 0; j < sd.length; j++) {
+                sd[j] = Math.sqrt(sd[j]);
+            }
+            run.table.shiftAndDivide(mean, sd);
+        }
+    };
+
+    private final String userName;
+    private final String[] aliases;
+
+    Scale(String userName, String... aliases) {
+        this.userName = userName;
+        this.aliases = aliases;
+    }
+
+    /** The name users type, e.g. {@code zscore}. */
+    public String userName() {
+        return userName;
+    }
+
+    /**
+     * The scaling for a user-typed name or alias ({@code centre}, {@code z-score}, {@code standardize}), ignoring
+     * case.
+     *
+     * @throws InputException naming the accepted names when {@code name} is none of them
+     */
+    public static Scale fromUserName(String name) {
+        String key = name.strip().toLowerCase(Locale.ROOT);
+        for (Scale s : values()) {
+            if (s.userName.equals(key) || Arrays.asList(s.aliases).contains(key)) {
+                return s;
+            }
+        }
+        throw new InputException("unknown scaling '" + name + "'; use one of " + names());
+    }
+
+    /** The user names, comma-separated, for help and messages. */
+    public static String names() {
+        return Arrays.stream(values()).map(Scale::userName).collect(Collectors.joining(", "));
+    }
+
+    abstract void apply(PreparationRun run);
+
+    @Override
+    public String toString() {
+        return userName;
+    }
+}
