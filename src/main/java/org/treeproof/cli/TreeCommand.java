@@ -59,8 +59,8 @@ final class TreeCommand implements Callable<Integer> {
         var loaded = inputOptions.load(input);
         CondensedDistances d;
         String metricId;
-        if (loaded.distances() != null) {
-            d = loaded.distances();
+        if (loaded.isDistanceTable()) {
+            d = loaded.distances().orElseThrow();
             metricId = "precomputed";
             if (link.requiresEuclidean()) {
                 System.err.println("treeproof: note: " + link.id() + " linkage assumes the given distances are Euclidean");
@@ -71,7 +71,7 @@ final class TreeCommand implements Callable<Integer> {
                 throw new org.treeproof.data.InputException("--linkage " + link.id()
                         + " needs --metric euclidean (it is defined on Euclidean distances), not " + m.id());
             }
-            d = m.compute(loaded.data(), Threads.resolve(threads, "--threads"));
+            d = m.compute(loaded.matrix().orElseThrow(), Threads.resolve(threads, "--threads"));
             metricId = m.id();
         }
         int n = d.size();
