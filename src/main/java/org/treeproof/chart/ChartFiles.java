@@ -26,6 +26,14 @@ import javax.imageio.ImageIO;
 final class ChartFiles {
     private static final Pattern BASE_NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]{0,120}");
 
+    static {
+        // charts are drawn off screen; without this a set but unreachable DISPLAY can stop AWT from starting.
+        // Only set when the caller has not chosen, so an explicit setting always wins.
+        if (System.getProperty("java.awt.headless") == null) {
+            System.setProperty("java.awt.headless", "true");
+        }
+    }
+
     private ChartFiles() {
     }
 
