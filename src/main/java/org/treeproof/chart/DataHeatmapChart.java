@@ -80,7 +80,7 @@ public final class DataHeatmapChart {
         double widest = 0;
         var font = Look.font(featureNameSize());
         for (int j = 0; j < in.featureCount(); j++) {
-            widest = Math.max(widest, Look.measure(font, Look.clip(in.featureLabelAt(j), featureNameChars())));
+            widest = Math.max(widest, Look.measure(font, Look.clipMiddle(in.featureLabelAt(j), featureNameChars())));
         }
         return Math.min(NAME_ROOM, widest + 6);
     }
@@ -175,7 +175,7 @@ public final class DataHeatmapChart {
             g.setColor(Look.INK);
             int chars = featureNameChars();
             for (int c = 0; c < p; c++) {
-                Look.textDown(g, Look.clip(in.featureLabelAt(colOrder[c]), chars), x0 + (c + 0.5) * heatW / p, below);
+                Look.textDown(g, Look.clipMiddle(in.featureLabelAt(colOrder[c]), chars), x0 + (c + 0.5) * heatW / p, below);
             }
             below += featureNameBand();
         }
@@ -191,7 +191,7 @@ public final class DataHeatmapChart {
             g.setColor(Look.INK);
             int chars = (int) (NAME_ROOM / (size * 0.62));
             for (int r = 0; r < n; r++) {
-                Look.textLeft(g, Look.clip(in.sampleLabelAt(rowOrder[r]), chars), right, y0 + (r + 0.5) * heatH / n);
+                Look.textLeft(g, Look.clipMiddle(in.sampleLabelAt(rowOrder[r]), chars), right, y0 + (r + 0.5) * heatH / n);
             }
             right += NAME_ROOM;
         }

@@ -1,6 +1,7 @@
 package org.treeproof.chart;
 
 import java.awt.BasicStroke;
+import java.awt.Color;
 import java.awt.Graphics2D;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
@@ -32,6 +33,7 @@ public final class DendrogramChart {
 
     private static final double KEY_WIDTH = 250;
     private static final double LABEL_BAND = 120;
+    private static final double STRIP = 13;
 
     private final DendrogramInput in;
 
@@ -79,11 +81,11 @@ public final class DendrogramChart {
         if (names) {
             g.setFont(Look.font(nameSize));
             for (int leaf = 0; leaf < n; leaf++) {
-                band = Math.max(band, Look.width(g, Look.clip(in.labelAt(leaf), maxChars)) + 6);
+                band = Math.max(band, Look.width(g, Look.clipMiddle(in.labelAt(leaf), maxChars)) + 6);
             }
             band = Math.min(band, LABEL_BAND);
         }
-        double bottomRoom = 16 + 44 + band;
+        double bottomRoom = 20 + 44 + band;
         Rectangle2D plot = new Rectangle2D.Double(plotLeft, top + 14, plotRight - plotLeft,
                 HEIGHT - bottomRoom - (top + 14));
 
@@ -115,18 +117,26 @@ public final class DendrogramChart {
 
         double stripTop = plot.getMaxY() + 3;
         int[] order = tree.leafOrder();
+        g.setFont(Look.font(Look.SMALL_SIZE));
         for (int[] run : Clusters.runs(in.clusterView(), order)) {
-            g.setColor(ChartColors.cluster(run[2]));
+            Color colour = ChartColors.cluster(run[2]);
+            g.setColor(colour);
             double x0 = placed.along(run[0]);
             double x1 = placed.along(run[1]);
-            g.fill(new Rectangle2D.Double(x0, stripTop, x1 - x0, 9));
+            g.fill(new Rectangle2D.Double(x0, stripTop, x1 - x0, STRIP));
+            // the number tells clusters apart where colours repeat (more than nine clusters)
+            String number = Integer.toString(run[2] + 1);
+            if (x1 - x0 >= Look.width(g, number) + 6) {
+                g.setColor(ChartColors.textOn(colour));
+                Look.textLeft(g, number, (x0 + x1) / 2 - Look.width(g, number) / 2, stripTop + STRIP / 2);
+            }
         }
-        double y = stripTop + 13;
+        double y = stripTop + STRIP + 4;
         if (names) {
             g.setFont(Look.font(nameSize));
             g.setColor(Look.INK);
             for (int p = 0; p < n; p++) {
-                Look.textDown(g, Look.clip(in.labelAt(order[p]), maxChars), placed.along(p + 0.5), y);
+                Look.textDown(g, Look.clipMiddle(in.labelAt(order[p]), maxChars), placed.along(p + 0.5), y);
             }
             y += band;
         }

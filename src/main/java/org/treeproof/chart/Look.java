@@ -171,6 +171,20 @@ final class Look {
         g.fill(r);
     }
 
+    /**
+     * {@code s} cut to {@code max} characters with an ellipsis in the middle: sample names often share a long
+     * prefix and differ at the end, so both ends are kept.
+     */
+    static String clipMiddle(String s, int max) {
+        if (s.length() <= max) {
+            return s;
+        }
+        int keep = Math.max(2, max - 1);
+        int head = keep * 2 / 5;
+        int tail = keep - head;
+        return s.substring(0, head) + "\u2026" + s.substring(s.length() - tail);
+    }
+
     /** {@code s} cut to {@code max} characters with an ellipsis, for labels that must fit a column. */
     static String clip(String s, int max) {
         return s.length() <= max ? s : s.substring(0, Math.max(1, max - 1)) + "\u2026";

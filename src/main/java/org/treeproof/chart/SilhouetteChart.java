@@ -56,6 +56,7 @@ public final class SilhouetteChart {
         double[] means = new double[k];
         int negative = 0;
         double row = 0;
+        double lastLabel = Double.NEGATIVE_INFINITY;
         g.setFont(Look.font(Look.TICK_SIZE));
         for (int c = 0; c < k; c++) {
             int[] m = members[c];
@@ -80,10 +81,11 @@ public final class SilhouetteChart {
             g.setColor(ChartColors.cluster(c));
             g.fill(shape);
             double mid = (axes.y(rows - row) + axes.y(rows - row - v.length)) / 2;
-            double blockHeight = axes.y(rows - row - v.length) - axes.y(rows - row);
-            if (blockHeight >= 12) {
+            // a name wherever it keeps clear of the one above; the key names every cluster anyway
+            if (mid - lastLabel >= 15) {
                 g.setColor(Look.INK);
                 Look.textRight(g, Clusters.name(c), plot.getX() - 10, mid);
+                lastLabel = mid;
             }
             row += v.length + gap;
         }

@@ -85,5 +85,21 @@ public final class ChartLookDemo {
         new DendrogramChart(new DendrogramInput("Tree of 150 samples, centroid linkage", tree,
                 Synthetic.names("S", 150), cut, Double.NaN, null, "Merge height (Euclidean distance)"))
                 .write(out, "dendrogram-centroid-150");
+
+        // awkward cases: twenty clusters, long names, a long title, a one-point gap curve
+        int[] many = new int[80];
+        ChartTree t20 = Synthetic.average(Synthetic.points(new SplittableRandom(9), 80, 3, 20, 0.5, many));
+        int[] cut20 = Synthetic.cut(t20, 20);
+        String[] longNames = new String[80];
+        java.util.Arrays.setAll(longNames, i -> "a-very-long-sample-identifier-from-a-lab-system-" + i);
+        String longTitle = "A title far longer than anyone should write for a chart, which must still fit its width"
+                + " without running off the edge of the picture";
+        new DendrogramChart(new DendrogramInput(longTitle, t20, longNames, cut20, Synthetic.cutHeight(t20, 20), null,
+                "Merge height (Euclidean distance)")).write(out, "edge-dendrogram-k20");
+        new SilhouetteChart(new SilhouetteInput("Silhouette of 20 clusters", Synthetic.silhouette(
+                Synthetic.points(new SplittableRandom(9), 80, 3, 20, 0.5, many), cut20, 20), cut20))
+                .write(out, "edge-silhouette-k20");
+        new GapChart(new GapInput("Gap statistic with one k", new double[] {0.3}, new double[] {0.05}, 1))
+                .write(out, "edge-gap-one");
     }
 }
