@@ -35,6 +35,7 @@ public record ConsensusInput(String title, int n, double[] condensed, int[] leaf
         clusterOfItem = Check.labels(clusterOfItem, n, "clusterOfItem");
     }
 
+    /** The number of clusters, k. */
     public int clusterCount() {
         return Check.count(clusterOfItem);
     }

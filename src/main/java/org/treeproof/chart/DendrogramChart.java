@@ -47,6 +47,7 @@ public final class DendrogramChart {
         return n <= MAX_LABELLED ? Math.max(BASE_WIDTH, 350 + 9 * n) : BASE_WIDTH;
     }
 
+    /** Pixel height, always {@value #HEIGHT}. */
     public int height() {
         return HEIGHT;
     }

@@ -28,6 +28,7 @@ public record IntervalSeries(String name, double[] mean, double[] low, double[] 
         }
     }
 
+    /** The number of points. */
     public int size() {
         return mean.length;
     }

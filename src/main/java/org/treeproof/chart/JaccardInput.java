@@ -31,6 +31,7 @@ public record JaccardInput(String title, double[] jaccard, int[] clusterSize) {
         }
     }
 
+    /** The number of clusters, k. */
     public int clusterCount() {
         return jaccard.length;
     }

@@ -24,6 +24,7 @@ public record SilhouetteInput(String title, double[] silhouette, int[] clusterOf
         clusterOfSample = Check.labels(clusterOfSample, silhouette.length, "clusterOfSample");
     }
 
+    /** The number of clusters, k. */
     public int clusterCount() {
         return Check.count(clusterOfSample);
     }
