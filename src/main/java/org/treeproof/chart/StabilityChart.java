@@ -1,0 +1,86 @@
+package org.treeproof.chart;
+
+import java.awt.BasicStroke;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Objects;
+import org.knowm.xchart.AnnotationLine;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
+
+/**
+ * Stability against the number of clusters: per linkage the mean adjusted Rand index between replicate and
+ * full-data clusterings as a line, its 95% interval over replicates as a shaded band, the no-structure
+ * reference as a grey band with a dashed line, and the chosen k as a vertical rule. The adjusted Rand
+ * index is that of L. Hubert and P. Arabie, "Comparing partitions", J. Classification 2 (1985) 193-218,
+ * doi:10.1007/BF01908075. Drawn with XChart; {@value #WIDTH} by {@value #HEIGHT} pixels, PNG and SVG.
+ */
+public final class StabilityChart {
+    public static final int WIDTH = 1000;
+    public static final int HEIGHT = 620;
+    /** Roughly the plot's width in pixels, to set a label beside the chosen-k rule. */
+    private static final double PLOT_WIDTH_GUESS = WIDTH - 300;
+
+    private final StabilityInput in;
+
+    public StabilityChart(StabilityInput input) {
+        this.in = Objects.requireNonNull(input, "input");
+    }
+
+    /** Writes {@code baseName.png} and {@code baseName.svg} into {@code dir}; returns the file names. */
+    public List<String> write(Path dir, String baseName) throws IOException {
+        XYChart chart = chart();
+        return ChartFiles.write(dir, baseName, WIDTH, HEIGHT, true, g -> chart.paint(g, WIDTH, HEIGHT));
+    }
+
+    XYChart chart() {
+        XYChart chart = XCharts.xy(WIDTH, HEIGHT, in.title(), "Number of clusters k",
+                "Adjusted Rand index (line: mean, band: 95% interval)");
+        double[] x = XCharts.asDoubles(in.k());
+        double yMin = 0;
+        IntervalSeries ref = in.reference();
+        if (ref != null) {
+            XCharts.band(chart, "reference band", x, ref.low(), ref.high(),
+                    ChartColors.withAlpha(ChartColors.REFERENCE, 0.28));
+            for (double v : ref.low()) {
+                yMin = Math.min(yMin, v);
+            }
+        }
+        List<IntervalSeries> series = in.linkages();
+        for (int i = 0; i < series.size(); i++) {
+            IntervalSeries s = series.get(i);
+            XCharts.band(chart, s.name() + " band", x, s.low(), s.high(),
+                    ChartColors.withAlpha(ChartColors.linkage(s.name(), i), 0.15));
+            for (double v : s.low()) {
+                yMin = Math.min(yMin, v);
+            }
+        }
+        if (ref != null) {
+            XYSeries line = XCharts.line(chart, "no-structure reference", x, ref.mean(), ChartColors.REFERENCE, 2f);
+            line.setLineStyle(new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                    new float[] {7f, 5f}, 0f));
+        }
+        for (int i = 0; i < series.size(); i++) {
+            IntervalSeries s = series.get(i);
+            boolean chosen = s.name().equals(in.chosenLinkage());
+            XCharts.line(chart, chosen ? s.name() + " (chosen)" : s.name(), x, s.mean(),
+                    ChartColors.linkage(s.name(), i), chosen ? 3.2f : 2f);
+        }
+        var st = chart.getStyler();
+        st.setYAxisMin(Math.floor(yMin * 10) / 10);
+        st.setYAxisMax(1.0);
+        st.setYAxisDecimalPattern("0.0");
+        int[] k = in.k();
+        double pad = k.length > 1 ? 0.3 : 0.5;
+        st.setXAxisMin(k[0] - pad);
+        st.setXAxisMax(k[k.length - 1] + pad);
+        st.setXAxisDecimalPattern("#0");
+        if (in.chosenK() > 0) {
+            chart.addAnnotation(new AnnotationLine(in.chosenK(), true, false));
+            chart.addAnnotation(XCharts.besideRule("chosen k = " + in.chosenK(), in.chosenK(),
+                    k[k.length - 1] - k[0] + 2 * pad, PLOT_WIDTH_GUESS, 0.975));
+        }
+        return chart;
+    }
+}
