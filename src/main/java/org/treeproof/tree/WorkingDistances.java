@@ -21,7 +21,10 @@ final class WorkingDistances {
     private final int[] active;
     private int count;
     private final double[] bufX;
-    private final double[] bufY;
+    /** After {@link #merge}: the new distance to the union from each {@link #touchedSlot}. */
+    final double[] touchedDistance;
+    /** After {@link #merge}: every active slot other than the union, in increasing order. */
+    final int[] touchedSlot;
     private final int[] bufSize;
     private final int[] bufPos;
 
@@ -40,7 +43,8 @@ final class WorkingDistances {
         }
         count = n;
         bufX = new double[n];
-        bufY = new double[n];
+        touchedDistance = new double[n];
+        touchedSlot = new int[n];
         bufSize = new int[n];
         bufPos = new int[n];
     }
@@ -109,10 +113,11 @@ final class WorkingDistances {
     }
 
     /**
-     * Merges slots {@code x < y} at working distance {@code dxy}: drops {@code x}, gives {@code y} the
-     * union and its Lance-Williams distances to every other active slot.
+     * Merges slots {@code x < y} at distance {@code dxy}: drops {@code x}, gives {@code y} the union and
+     * its Lance-Williams distances to every other active slot, which are left in {@link #touchedSlot} and
+     * {@link #touchedDistance} for the caller's bookkeeping; returns how many.
      */
-    void merge(Linkage linkage, int x, int y, double dxy) {
+    int merge(Linkage linkage, int x, int y, double dxy) {
         int nx = size[x];
         int ny = size[y];
         int p = Arrays.binarySearch(active, 0, count, x);
@@ -141,25 +146,18 @@ final class WorkingDistances {
                 continue;
             }
             bufX[c] = dd[px];
-            bufY[c] = dd[py];
+            touchedDistance[c] = dd[py];
+            touchedSlot[c] = i;
             bufSize[c] = size[i];
             bufPos[c] = py;
             c++;
         }
-        linkage.update(bufX, bufY, dxy, nx, ny, bufSize, c);
+        linkage.update(bufX, touchedDistance, dxy, nx, ny, bufSize, c);
         for (int r = 0; r < c; r++) {
-            dd[bufPos[r]] = bufY[r];
+            dd[bufPos[r]] = touchedDistance[r];
         }
         size[x] = 0;
         size[y] = nx + ny;
-    }
-
-    /** Active slots below {@code limit}, in increasing order, written to {@code out}; returns how many. */
-    int activeBelow(int limit, int[] out) {
-        int c = 0;
-        for (int r = 0; r < count && active[r] < limit; r++) {
-            out[c++] = active[r];
-        }
         return c;
     }
 }
