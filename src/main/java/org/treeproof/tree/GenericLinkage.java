@@ -6,7 +6,7 @@ import org.treeproof.distance.CondensedDistances;
  * The generic agglomeration algorithm with a nearest-neighbour list, for the linkages that are not
  * reducible (centroid, median): every step merges the globally closest pair, found through a heap of
  * lower bounds on each slot's distance to its nearest neighbour among the higher slots. Müllner (2011),
- * arXiv:1109.2378, section 3.1 (Figure 3); O(n²) in the usual case, O(n³) at worst.
+ * arXiv:1109.2378; O(n²) in the usual case, O(n³) at worst.
  *
  * <p>Merge heights can decrease from one merge to the next (inversions), so the merges are kept in the
  * order they happen, not sorted. The steps, the nearest-neighbour scans (first of equal distances, so

@@ -9,9 +9,12 @@ import org.treeproof.distance.CondensedDistances;
  *
  * <p>A cluster lives in the slot of one of its items. When slots {@code x < y} merge, {@code x} is
  * dropped and {@code y} holds the union, the convention of Müllner's fastcluster and of scipy, which
- * keeps tie resolution identical to theirs. Scanning only the active slots (instead of all n and
- * skipping empty ones) halves the work over a run; {@code rowOffset} turns the condensed index of
- * {@code (i, j)}, {@code i < j}, into one addition.
+ * keeps tie resolution identical to theirs. Loops run over the list of active slots, not over all n
+ * checking each; {@code rowOffset} turns the condensed index of {@code (i, j)}, {@code i < j}, into one
+ * addition.
+ *
+ * <p>The running time is set by memory traffic: the half of a slot's distances that lies in its column
+ * of the upper triangle costs one cache line (and, with small pages, one TLB entry) per item.
  */
 final class WorkingDistances {
     final int n;
