@@ -6,7 +6,7 @@ import org.treeproof.distance.CondensedDistances;
  * The generic agglomeration algorithm with a nearest-neighbour list, for the linkages that are not
  * reducible (centroid, median): every step merges the globally closest pair, found through a heap of
  * lower bounds on each slot's distance to its nearest neighbour among the higher slots. Müllner (2011),
- * arXiv:1109.2378, section 3.1 (Figure 3); O(n²) in the usual case, O(n³) at worst.
+ * arXiv:1109.2378; O(n²) in the usual case, O(n³) at worst.
  *
  * <p>Merge heights can decrease from one merge to the next (inversions), so the merges are kept in the
  * order they happen, not sorted. The steps, the nearest-neighbour scans (first of equal distances, so
@@ -45,7 +45,6 @@ final class GenericLinkage {
             bound[x] = w.d[w.index(x, neighbor[x])];
         }
         Heap heap = new Heap(bound);
-        int[] lower = new int[n];
         for (int k = 0; k < m; k++) {
             int x;
             int y;
@@ -68,16 +67,19 @@ final class GenericLinkage {
             left[k] = Math.min(idX, idY);
             right[k] = Math.max(idX, idY);
             heights[k] = dxy;
-            w.merge(linkage, x, y, dxy);
+            int touched = w.merge(linkage, x, y, dxy);
             clusterId[y] = n + k;
 
-            int c = w.activeBelow(y, lower);
-            for (int r = 0; r < c; r++) {
-                int z = lower[r];
+            // the slots below y come first among the touched ones, in increasing order (as scipy's loop)
+            for (int r = 0; r < touched; r++) {
+                int z = w.touchedSlot[r];
+                if (z >= y) {
+                    break;
+                }
                 if (z < x && neighbor[z] == x) {
                     neighbor[z] = y; // a guess; the bound stays valid and is checked when z surfaces
                 }
-                double v = w.d[w.index(z, y)];
+                double v = w.touchedDistance[r];
                 if (v < bound[z]) {
                     neighbor[z] = y;
                     bound[z] = v;

@@ -237,7 +237,7 @@ public enum Linkage {
         return algorithm.run(this, distances);
     }
 
-    /** The agglomeration algorithm a linkage uses; Müllner (2011) sections 3.1-3.3. */
+    /** The agglomeration algorithm a linkage uses, as described by Müllner (2011). */
     private enum Algorithm {
         MINIMUM_SPANNING_TREE {
             @Override

@@ -7,7 +7,7 @@ import java.util.Arrays;
  * into the conventional layout: rows stably sorted by height, then relabelled through a union-find so
  * that each row names the two clusters current at that point (leaves {@code 0..n-1}, row {@code s}
  * forms {@code n+s}, smaller id first). This is valid for the monotone methods only, where a merge never
- * lies below one of the merges that formed its parts (Müllner 2011, section 2.3).
+ * lies below one of the merges that formed its parts (Müllner 2011).
  */
 final class MergeOrder {
     private MergeOrder() {

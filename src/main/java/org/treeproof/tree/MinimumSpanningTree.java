@@ -5,7 +5,7 @@ import org.treeproof.distance.CondensedDistances;
 /**
  * Single linkage as a minimum spanning tree grown by Prim's algorithm on the condensed matrix: O(n²)
  * time, O(n) extra memory, the matrix is read in place and never copied. Müllner (2011),
- * arXiv:1109.2378, section 3.3 (MST-linkage); the MST edges sorted by length are the single-linkage
+ * arXiv:1109.2378; the MST edges sorted by length are the single-linkage
  * merges (J. C. Gower and G. J. S. Ross, "Minimum spanning trees and single linkage cluster analysis",
  * J. R. Stat. Soc. C 18 (1969) 54-64, doi:10.2307/2346439).
  *

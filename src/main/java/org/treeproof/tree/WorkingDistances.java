@@ -9,9 +9,12 @@ import org.treeproof.distance.CondensedDistances;
  *
  * <p>A cluster lives in the slot of one of its items. When slots {@code x < y} merge, {@code x} is
  * dropped and {@code y} holds the union, the convention of Müllner's fastcluster and of scipy, which
- * keeps tie resolution identical to theirs. Scanning only the active slots (instead of all n and
- * skipping empty ones) halves the work over a run; {@code rowOffset} turns the condensed index of
- * {@code (i, j)}, {@code i < j}, into one addition.
+ * keeps tie resolution identical to theirs. Loops run over the list of active slots, not over all n
+ * checking each; {@code rowOffset} turns the condensed index of {@code (i, j)}, {@code i < j}, into one
+ * addition.
+ *
+ * <p>The running time is set by memory traffic: the half of a slot's distances that lies in its column
+ * of the upper triangle costs one cache line (and, with small pages, one TLB entry) per item.
  */
 final class WorkingDistances {
     final int n;
@@ -21,7 +24,10 @@ final class WorkingDistances {
     private final int[] active;
     private int count;
     private final double[] bufX;
-    private final double[] bufY;
+    /** After {@link #merge}: the new distance to the union from each {@link #touchedSlot}. */
+    final double[] touchedDistance;
+    /** After {@link #merge}: every active slot other than the union, in increasing order. */
+    final int[] touchedSlot;
     private final int[] bufSize;
     private final int[] bufPos;
 
@@ -40,7 +46,8 @@ final class WorkingDistances {
         }
         count = n;
         bufX = new double[n];
-        bufY = new double[n];
+        touchedDistance = new double[n];
+        touchedSlot = new int[n];
         bufSize = new int[n];
         bufPos = new int[n];
     }
@@ -109,10 +116,11 @@ final class WorkingDistances {
     }
 
     /**
-     * Merges slots {@code x < y} at working distance {@code dxy}: drops {@code x}, gives {@code y} the
-     * union and its Lance-Williams distances to every other active slot.
+     * Merges slots {@code x < y} at distance {@code dxy}: drops {@code x}, gives {@code y} the union and
+     * its Lance-Williams distances to every other active slot, which are left in {@link #touchedSlot} and
+     * {@link #touchedDistance} for the caller's bookkeeping; returns how many.
      */
-    void merge(Linkage linkage, int x, int y, double dxy) {
+    int merge(Linkage linkage, int x, int y, double dxy) {
         int nx = size[x];
         int ny = size[y];
         int p = Arrays.binarySearch(active, 0, count, x);
@@ -141,25 +149,18 @@ final class WorkingDistances {
                 continue;
             }
             bufX[c] = dd[px];
-            bufY[c] = dd[py];
+            touchedDistance[c] = dd[py];
+            touchedSlot[c] = i;
             bufSize[c] = size[i];
             bufPos[c] = py;
             c++;
         }
-        linkage.update(bufX, bufY, dxy, nx, ny, bufSize, c);
+        linkage.update(bufX, touchedDistance, dxy, nx, ny, bufSize, c);
         for (int r = 0; r < c; r++) {
-            dd[bufPos[r]] = bufY[r];
+            dd[bufPos[r]] = touchedDistance[r];
         }
         size[x] = 0;
         size[y] = nx + ny;
-    }
-
-    /** Active slots below {@code limit}, in increasing order, written to {@code out}; returns how many. */
-    int activeBelow(int limit, int[] out) {
-        int c = 0;
-        for (int r = 0; r < count && active[r] < limit; r++) {
-            out[c++] = active[r];
-        }
         return c;
     }
 }
