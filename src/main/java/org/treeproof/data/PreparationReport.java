@@ -1,6 +1,8 @@
 package org.treeproof.data;
 
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -43,6 +45,60 @@ public record PreparationReport(Preparation settings, int inputSamples, int inpu
             throw new IllegalArgumentException(features + " features left does not match " + inputFeatures + " read, "
                     + droppedFeatures.size() + " dropped and " + leftOut + " not among the most variable");
         }
+    }
+
+    /**
+     * The preparation as plain sentences, in the order the steps ran, for the report, the methods paragraph
+     * and {@code summary.json}.
+     */
+    public List<String> steps() {
+        var out = new ArrayList<String>();
+        out.add(String.format(Locale.ROOT, "Read %d samples and %d features.", inputSamples, inputFeatures));
+        if (missingCells > 0) {
+            out.add(String.format(Locale.ROOT, "%d cells were missing; missing-value policy: %s.", missingCells,
+                    settings.missing().userName()));
+        }
+        if (!droppedSamples.isEmpty()) {
+            out.add(String.format(Locale.ROOT, "Dropped %d sample(s) with missing values: %s.",
+                    droppedSamples.size(), names(droppedSamples)));
+        }
+        List<Removal> missingFeatures = droppedFeatures.stream().filter(r -> r.reason() != Reason.CONSTANT).toList();
+        List<Removal> constant = droppedFeatures.stream().filter(r -> r.reason() == Reason.CONSTANT).toList();
+        if (!missingFeatures.isEmpty()) {
+            out.add(String.format(Locale.ROOT, "Dropped %d feature(s) with missing values: %s.",
+                    missingFeatures.size(), names(missingFeatures)));
+        }
+        if (imputedCells > 0) {
+            out.add(String.format(Locale.ROOT, "Imputed %d cell(s) in %d feature(s) with the feature's median.",
+                    imputedCells, imputedFeatures));
+        }
+        if (settings.log2()) {
+            out.add("Transformed every value to log2(x + 1).");
+        }
+        topVariable.ifPresent(t -> out.add(t.kept().size() < t.candidates()
+                ? String.format(Locale.ROOT, "Kept the %d of %d features with the largest variance%s.",
+                        t.kept().size(), t.candidates(), t.tieAtCutoff() ? " (a tie at the cutoff went by input order)" : "")
+                : String.format(Locale.ROOT, "Asked for the %d most variable features; all %d were kept.",
+                        t.requested(), t.candidates())));
+        if (!constant.isEmpty()) {
+            out.add(String.format(Locale.ROOT, "Dropped %d constant feature(s), which have no z-score: %s.",
+                    constant.size(), names(constant)));
+        }
+        out.add(settings.scale().sentence());
+        out.add(String.format(Locale.ROOT, "Clustered %d samples on %d features.", samples, features));
+        return out;
+    }
+
+    private static String names(List<Removal> removals) {
+        int shown = Math.min(10, removals.size());
+        var sb = new StringBuilder();
+        for (int i = 0; i < shown; i++) {
+            sb.append(i == 0 ? "" : ", ").append('\'').append(removals.get(i).name()).append('\'');
+        }
+        if (removals.size() > shown) {
+            sb.append(" and ").append(removals.size() - shown).append(" more");
+        }
+        return sb.toString();
     }
 
     /** A sample or feature that was dropped, and why. */

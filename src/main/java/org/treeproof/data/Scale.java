@@ -10,13 +10,13 @@ import java.util.stream.Collectors;
  */
 public enum Scale {
     /** The values as they are (after any log2). */
-    NONE("none") {
+    NONE("Left the features on their own scales (no scaling).", "none") {
         @Override
         void apply(PreparationRun run) {
         }
     },
     /** Subtract each feature's mean. */
-    CENTER("center", "centre") {
+    CENTER("Centred every feature at mean 0.", "center", "centre") {
         @Override
         void apply(PreparationRun run) {
             double[] mean = run.table.means();
@@ -29,7 +29,7 @@ public enum Scale {
      * Subtract each feature's mean and divide by its population standard deviation. A constant feature has no
      * z-score; it is dropped and reported instead of being divided by zero.
      */
-    ZSCORE("zscore", "z-score", "standardize", "standardise") {
+    ZSCORE("Scaled every feature to mean 0 and population standard deviation 1 (z-scores).", "zscore", "z-score", "standardize", "standardise") {
         @Override
         void apply(PreparationRun run) {
             boolean[] constant = run.table.constantFeatures();
@@ -51,12 +51,19 @@ public enum Scale {
         }
     };
 
+    private final String sentence;
     private final String userName;
     private final String[] aliases;
 
-    Scale(String userName, String... aliases) {
+    Scale(String sentence, String userName, String... aliases) {
+        this.sentence = sentence;
         this.userName = userName;
         this.aliases = aliases;
+    }
+
+    /** What this scaling did, as a sentence for reports. */
+    public String sentence() {
+        return sentence;
     }
 
     /** The name users type, e.g. {@code zscore}. */

@@ -58,6 +58,11 @@ public final class OutputDirectory implements AutoCloseable {
         }
     }
 
+    /** Whether something already exists under {@code target}. */
+    public static boolean exists(Path target) {
+        return Files.exists(target);
+    }
+
     /** Where to write files now; becomes the target on {@link #commit()}. */
     public Path staging() {
         return staging;

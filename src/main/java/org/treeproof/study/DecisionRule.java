@@ -20,8 +20,10 @@ package org.treeproof.study;
  *
  * <p>The rule, for one linkage and one k:
  * <ol>
- *   <li>Eligible when the stability beats the null ({@code pValueAri <= alpha}) and no cluster dissolves
- *       (every mean Jaccard above {@code dissolvedJaccard}). Without null calibration (distances given
+ *   <li>Eligible when the stability beats the null ({@code pValueAri <= alpha}), the mean ARI reaches
+ *       {@code stableJaccard} (a solution that replicates reproduce only partly is not a finding, however much
+ *       better than the null it is; the value borrows Hennig's stable band and is our choice), and no cluster
+ *       dissolves (every mean Jaccard above {@code dissolvedJaccard}). Without null calibration (distances given
  *       without data, or {@code --null-sets 0}) nothing can be eligible for more than {@code tentative}, and
  *       the stability must instead reach a mean ARI of at least {@code stableJaccard}.</li>
  *   <li>{@code supported} when, in addition, every cluster is stable (Jaccard at least {@code stableJaccard})
@@ -31,8 +33,12 @@ package org.treeproof.study;
  *       the earlier linkage and the smaller k.</li>
  *   <li>When nothing is eligible the verdict is {@code unsupported} and k = 1: the data hold no convincing
  *       cluster structure. The gap statistic's choice is reported beside it.</li>
- *   <li>Levels: every k of the recommended linkage whose solution is eligible with all clusters stable;
- *       being cuts of one tree they are nested, so two or more levels describe nested structure.</li>
+ *   <li>Levels: the k of the recommended linkage whose solutions are eligible, keep every cluster stable, hold
+ *       no cluster smaller than max(3, 2% of the samples), and persist over a range of cut heights at least half
+ *       as long (relative to the height) as the longest-persisting such solution; the recommended k is always a
+ *       level. Being cuts of one tree, levels are nested, so two or more describe nested structure. The size and
+ *       persistence conditions are our own choices, made so that splitting off outliers or a transient state of
+ *       the agglomeration does not count as a level.</li>
  * </ol>
  *
  * @param alpha                the largest p-value that beats the null

@@ -49,7 +49,7 @@ public final class Recommender {
         boolean beats;
         boolean calibrated = s.nullModel() != null;
         if (calibrated) {
-            beats = s.nullModel().pValueAri() <= rule.alpha() + 1e-12;
+            beats = s.nullModel().pValueAri() <= rule.alpha() + 1e-12 && s.ari().mean() >= rule.stableJaccard();
         } else {
             beats = s.ari().mean() >= rule.stableJaccard();
         }
@@ -105,12 +105,7 @@ public final class Recommender {
         }
         LinkageEvidence le = all.get(winner.linkage);
         KEvidence e = winner.e;
-        var levels = new ArrayList<Integer>();
-        for (KEvidence o : le.byK()) {
-            if (verdictOf(o) != Verdict.UNSUPPORTED && o.worstJaccard() >= rule.stableJaccard()) {
-                levels.add(o.k());
-            }
-        }
+        var levels = levels(le);
         if (!levels.contains(e.k())) {
             levels.add(e.k());
             levels.sort(null);
@@ -119,6 +114,42 @@ public final class Recommender {
                 ? summaries : List.of());
         return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict, levels, reasons,
                 criteria(le), flaggedClusters(e), flaggedSamples(e), summaries, agreement, rule);
+    }
+
+    /**
+     * The levels of nested structure on one linkage: solutions that are eligible, keep every cluster stable,
+     * hold no cluster smaller than {@code max(3, 2% of n)} (splitting off outliers is not a level), and persist
+     * over a range of cut heights at least half as long, relative to the height, as the longest-persisting such
+     * solution. The last condition reads the dendrogram's merge-height gaps (a cluster solution that exists only
+     * over a sliver of heights is a transient state of the agglomeration, not a level); on trees with inversions
+     * an empty interval never qualifies.
+     */
+    private List<Integer> levels(LinkageEvidence le) {
+        int n = evidence.samples();
+        int minSize = Math.max(3, (int) Math.ceil(0.02 * n));
+        var candidates = new ArrayList<KEvidence>();
+        double widest = 0;
+        for (KEvidence o : le.byK()) {
+            boolean bigEnough = o.clusters().stream().allMatch(c -> c.size() >= minSize);
+            if (verdictOf(o) != Verdict.UNSUPPORTED && o.worstJaccard() >= rule.stableJaccard() && bigEnough) {
+                candidates.add(o);
+                widest = Math.max(widest, persistence(o));
+            }
+        }
+        var out = new ArrayList<Integer>();
+        for (KEvidence o : candidates) {
+            if (widest > 0 && persistence(o) >= 0.5 * widest) {
+                out.add(o.k());
+            }
+        }
+        return out;
+    }
+
+    /** The share of the height at which exactly this many clusters exist: (high - low) / high, 0 if empty. */
+    private static double persistence(KEvidence e) {
+        double low = e.cutHeight().low();
+        double high = e.cutHeight().high();
+        return high > low && high > 0 && Double.isFinite(high) ? (high - low) / high : 0;
     }
 
     private Recommendation unsupported(List<Recommendation.LinkageSummary> summaries, double[][] agreement) {

@@ -16,11 +16,11 @@ import java.util.SplittableRandom;
  *
  * <ul>
  *   <li>{@code yeast-batches.csv}: 180 batches from three house yeast strains (70, 60, 50 batches); each
- *       strain raises or lowers its own set of 10 compounds by 2.5 to 3.5 log2 units.</li>
+ *       strain raises or lowers its own set of 12 compounds by 4.0 log2 units (so the three are equally far apart).</li>
  *   <li>{@code single-strain-batches.csv}: 150 batches of one strain: vigour and noise only.</li>
  *   <li>{@code nested-strains.csv}: 160 batches from two yeast families that each hold two strains
- *       (40 batches each): families differ by 3.0 log2 units on 12 compounds, strains within a family
- *       by 2.2 units on 4 others.</li>
+ *       (40 batches each): families differ by 6.0 log2 units on 16 compounds, strains within a family
+ *       by 3.2 log2 units on 8 others.</li>
  * </ul>
  * The planted group of each batch is written to a separate {@code *-truth.csv} so it can be given to
  * {@code --labels}. Everything is drawn from {@link SplittableRandom} with fixed seeds, so the files
@@ -50,9 +50,9 @@ public final class DemoDataGenerator {
         double[][] shifts = new double[3][COMPOUNDS];
         for (int g = 0; g < 3; g++) {
             // strain g marks compounds 8+12g .. 8+12g+9, sign alternating, magnitude 2.0..3.0 log2 units
-            for (int c = 0; c < 10; c++) {
-                double magnitude = 2.5 + rng.nextDouble();
-                shifts[g][8 + 12 * g + c] = (c % 2 == 0 ? 1 : -1) * magnitude;
+            for (int c = 0; c < 12; c++) {
+                double magnitude = 4.0;
+                shifts[g][8 + 13 * g + c] = (c % 2 == 0 ? 1 : -1) * magnitude;
             }
         }
         return build("yeast-batches.csv", "batch", rng, base, sizes, strains, shifts);
@@ -73,12 +73,12 @@ public final class DemoDataGenerator {
         double[][] shifts = new double[4][COMPOUNDS];
         for (int g = 0; g < 4; g++) {
             int family = g / 2;
-            for (int c = 8; c < 20; c++) {
-                shifts[g][c] += (family == 0 ? 1.5 : -1.5) * (c % 2 == 0 ? 1 : -1);
+            for (int c = 8; c < 24; c++) {
+                shifts[g][c] += (family == 0 ? 3.0 : -3.0) * (c % 2 == 0 ? 1 : -1);
             }
-            int first = 20 + 8 * (g % 2) + 16 * family;
-            for (int c = first; c < first + 4; c++) {
-                shifts[g][c] += (g % 2 == 0 ? 2.2 : -2.2);
+            int first = 24 + 12 * family;
+            for (int c = first; c < first + 8; c++) {
+                shifts[g][c] += (g % 2 == 0 ? 1.6 : -1.6) * (c % 2 == 0 ? 1 : -1);
             }
         }
         return build("nested-strains.csv", "run", rng, base, sizes, strains, shifts);

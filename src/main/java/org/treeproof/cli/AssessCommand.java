@@ -1,0 +1,112 @@
+package org.treeproof.cli;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.treeproof.data.DataMatrix;
+import org.treeproof.data.InputException;
+import org.treeproof.distance.Metric;
+import org.treeproof.io.CsvOutputs;
+import org.treeproof.io.LabelsReader;
+import org.treeproof.io.LoadedInput;
+import org.treeproof.io.OutputDirectory;
+import org.treeproof.io.SummaryJson;
+import org.treeproof.resample.LocalExecutor;
+import org.treeproof.resample.ReferenceData;
+import org.treeproof.resample.Resampling;
+import org.treeproof.study.DecisionRule;
+import org.treeproof.study.Evidence;
+import org.treeproof.study.MemoryEstimate;
+import org.treeproof.study.Recommendation;
+import org.treeproof.study.Recommender;
+import org.treeproof.study.StudyInput;
+import org.treeproof.study.StudyRunner;
+import org.treeproof.study.StudySettings;
+import org.treeproof.tree.Linkage;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code treeproof assess INPUT --out DIR}: the whole study, from the table to the recommendation, the report,
+ * the methods paragraph and the machine-readable outputs.
+ */
+@Command(name = "assess", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Cluster the input with each linkage, recluster resampled replicates, calibrate against null "
+                + "data and the gap statistic, and recommend a number of clusters with its reasons.",
+            "Writes DIR/summary.json, clusters.csv, scores.csv, methods.md, report.html and charts/."})
+final class AssessCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "INPUT", description = "Data table (CSV/TSV, optionally .gz), samples in rows "
+            + "unless --samples-in-columns; or a distance table with --distances.")
+    Path input;
+
+    @Option(names = "--out", required = true, paramLabel = "DIR", description = "Output directory (must not exist "
+            + "unless --force).")
+    Path out;
+
+    @Mixin
+    StudyOptions study;
+
+    @Mixin
+    InputOptions inputOptions;
+
+    @Option(names = "--labels", paramLabel = "FILE", description = "Known classes (id, class per row, header row) to "
+            + "compare the recommended clusters with.")
+    Path labels;
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores). Results do not "
+            + "depend on it.")
+    Integer threads;
+
+    @Option(names = "--force", description = "Replace DIR if it exists (only once the new results are complete).")
+    boolean force;
+
+    @Option(names = "--no-progress", description = "Do not show progress.")
+    boolean noProgress;
+
+    @Option(names = "--quiet", description = "Print nothing but errors.")
+    boolean quiet;
+
+    String[] commandLine = new String[0];
+
+    @Override
+    public Integer call() {
+        long started = System.nanoTime();
+        int nThreads = Threads.resolve(threads, "--threads");
+        StudySettings settings = study.settings();
+        if (OutputDirectory.exists(out) && !force) {
+            throw new InputException("--out " + out + ": already exists; choose another directory or add --force");
+        }
+        LoadedInput loaded = inputOptions.load(input);
+        StudyInput studyInput = loaded.isDistanceTable()
+                ? StudyInput.ofDistances(loaded.sampleIds(), loaded.distances().orElseThrow())
+                : StudyInput.of(loaded.matrix().orElseThrow());
+        settings.checkAgainst(studyInput.samples(), studyInput.hasData());
+        String[] classes = labels == null ? null
+                : LabelsReader.read(labels, inputOptions.delimiter().orElse(null), loaded.sampleIds());
+        MemoryEstimate.of(studyInput.samples(), loaded.features(), settings, nThreads, studyInput.hasData())
+                .requireFits(Runtime.getRuntime().maxMemory(), studyInput.samples());
+
+        Evidence evidence;
+        try (var progress = new ProgressReporter(System.err, quiet || noProgress)) {
+            evidence = new StudyRunner(studyInput, settings, new LocalExecutor(nThreads), nThreads, progress).run();
+        }
+        Recommendation rec = Recommender.of(evidence, DecisionRule.DEFAULT).recommend();
+        var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine, nThreads,
+                (System.nanoTime() - started) / 1e9);
+        try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force)) {
+            outputs.writeInto(dir);
+            dir.commit();
+        }
+        if (!quiet) {
+            System.out.println(outputs.headline());
+            System.out.println("report: " + out.resolve("report.html"));
+        }
+        return ExitCodes.OK;
+    }
+}

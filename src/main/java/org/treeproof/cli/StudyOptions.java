@@ -1,0 +1,140 @@
+package org.treeproof.cli;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.treeproof.data.InputException;
+import org.treeproof.distance.Metric;
+import org.treeproof.resample.ReferenceData;
+import org.treeproof.resample.Resampling;
+import org.treeproof.study.StudySettings;
+import org.treeproof.tree.Linkage;
+import picocli.CommandLine.Option;
+
+/**
+ * The options of a study (a picocli mixin). Names are parsed here and every problem, of any option, is
+ * reported together in one line.
+ */
+final class StudyOptions {
+
+    @Option(names = "--linkages", paramLabel = "L,L", split = ",", description = "Linkages to compare (default: "
+            + "average,complete,ward). Any of single, complete, average (upgma), weighted (wpgma), ward, centroid, median.")
+    List<String> linkages;
+
+    @Option(names = "--metric", paramLabel = "NAME", description = "Dissimilarity (default: euclidean): euclidean, "
+            + "sqeuclidean, manhattan, chebyshev, cosine, pearson, spearman, jaccard, hamming.")
+    String metric;
+
+    @Option(names = "--max-k", paramLabel = "K", description = "Largest number of clusters to assess (default: 10).")
+    Integer maxK;
+
+    @Option(names = "--replicates", paramLabel = "B", description = "Resampled replicates (default: 200).")
+    Integer replicates;
+
+    @Option(names = "--resampling", paramLabel = "HOW", description = "subsample (without replacement, default) or "
+            + "bootstrap (with replacement).")
+    String resampling;
+
+    @Option(names = "--sample-fraction", paramLabel = "F", description = "Share of samples per subsample, in (0, 1] "
+            + "(default: 0.8).")
+    Double sampleFraction;
+
+    @Option(names = "--feature-fraction", paramLabel = "F", description = "Share of features per replicate, in (0, 1];"
+            + " below 1 recomputes distances per replicate (default: 1.0).")
+    Double featureFraction;
+
+    @Option(names = "--reference-sets", paramLabel = "B", description = "Reference data sets for the gap statistic; 0 "
+            + "skips it (default: 50).")
+    Integer referenceSets;
+
+    @Option(names = "--gap-reference", paramLabel = "KIND", description = "Reference data for the gap statistic: "
+            + "principal-box (uniform in the principal-axis box, default) or feature-range (uniform per feature).")
+    String gapReference;
+
+    @Option(names = "--null-sets", paramLabel = "N", description = "Null data sets (same covariance, no clusters) to "
+            + "calibrate stability; 0 skips it (default: 19, the fewest that can give p = 0.05).")
+    Integer nullSets;
+
+    @Option(names = "--null-replicates", paramLabel = "B", description = "Replicates per null data set (default: 20).")
+    Integer nullReplicates;
+
+    @Option(names = "--seed", paramLabel = "S", description = "Master seed; every random draw derives from it "
+            + "(default: 1).")
+    Long seed;
+
+    /** The settings, every problem reported at once. */
+    StudySettings settings() {
+        var problems = new ArrayList<String>();
+        StudySettings.Builder b = StudySettings.builder();
+        if (linkages != null) {
+            var parsed = new ArrayList<Linkage>();
+            for (String s : linkages) {
+                try {
+                    parsed.add(Linkage.parse(s.strip()));
+                } catch (InputException e) {
+                    problems.add("--linkages: " + e.getMessage());
+                }
+            }
+            b.linkages(parsed);
+        }
+        if (metric != null) {
+            try {
+                b.metric(Metric.parse(metric));
+            } catch (InputException e) {
+                problems.add("--metric: " + e.getMessage());
+            }
+        }
+        if (resampling != null) {
+            try {
+                b.resampling(Resampling.parse(resampling));
+            } catch (InputException e) {
+                problems.add("--resampling: " + e.getMessage());
+            }
+        }
+        if (gapReference != null) {
+            try {
+                b.gapReference(ReferenceData.Kind.parse(gapReference));
+            } catch (InputException e) {
+                problems.add("--gap-reference: " + e.getMessage());
+            }
+        }
+        if (maxK != null) {
+            b.maxK(maxK);
+        }
+        if (replicates != null) {
+            b.replicates(replicates);
+        }
+        if (sampleFraction != null) {
+            b.sampleFraction(sampleFraction);
+        }
+        if (featureFraction != null) {
+            b.featureFraction(featureFraction);
+        }
+        if (referenceSets != null) {
+            b.referenceSets(referenceSets);
+        }
+        if (nullSets != null) {
+            b.nullSets(nullSets);
+        }
+        if (nullReplicates != null) {
+            b.nullReplicates(nullReplicates);
+        }
+        if (seed != null) {
+            b.seed(seed);
+        }
+        try {
+            StudySettings s = b.build();
+            if (!problems.isEmpty()) {
+                throw new InputException(String.join("; ", problems));
+            }
+            return s;
+        } catch (InputException e) {
+            if (problems.isEmpty()) {
+                throw e;
+            }
+            if (!e.getMessage().equals(String.join("; ", problems))) {
+                problems.add(e.getMessage());
+            }
+            throw new InputException(String.join("; ", problems));
+        }
+    }
+}
