@@ -72,7 +72,15 @@ final class AssessCommand implements Callable<Integer> {
     @Option(names = "--quiet", description = "Print nothing but errors.")
     boolean quiet;
 
-    String[] commandLine = new String[0];
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    /** The command line as typed (after the program name), for the reproducibility section. */
+    private String[] commandLine() {
+        var args = new ArrayList<String>(List.of("treeproof", "assess"));
+        args.addAll(spec.commandLine().getParseResult().originalArgs());
+        return args.toArray(String[]::new);
+    }
 
     @Override
     public Integer call() {
@@ -97,7 +105,7 @@ final class AssessCommand implements Callable<Integer> {
             evidence = new StudyRunner(studyInput, settings, new LocalExecutor(nThreads), nThreads, progress).run();
         }
         Recommendation rec = Recommender.of(evidence, DecisionRule.DEFAULT).recommend();
-        var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine, nThreads,
+        var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine(), nThreads,
                 (System.nanoTime() - started) / 1e9);
         try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force)) {
             outputs.writeInto(dir);

@@ -8,7 +8,7 @@ import picocli.CommandLine.Command;
 /** The {@code treeproof} command: a parent for the sub-commands. */
 @Command(name = "treeproof", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Hierarchical clustering with resampling evidence for the number of clusters.",
-        subcommands = {TreeCommand.class, AssessCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {TreeCommand.class, AssessCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 
     @CommandLine.Spec
