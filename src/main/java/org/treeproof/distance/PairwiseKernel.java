@@ -48,7 +48,11 @@ final class PairwiseKernel {
         this.tasks = (n + BLOCK_J - 1) / BLOCK_J;
     }
 
-    /** The values computed and, if some pair overflowed, the first such pair's condensed index. */
+    /**
+     * The values computed and, if some pair overflowed, the first such pair's condensed index. The array
+     * is not copied: it goes straight to {@link CondensedDistances#wrap}, and a copy could double the
+     * largest allocation of a run.
+     */
     record Result(double[] condensed, long firstNonFinite) {
     }
 
