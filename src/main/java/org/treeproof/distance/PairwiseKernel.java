@@ -48,7 +48,11 @@ final class PairwiseKernel {
         this.tasks = (n + BLOCK_J - 1) / BLOCK_J;
     }
 
-    /** The values computed and, if some pair overflowed, the first such pair's condensed index. */
+    /**
+     * The values computed and, if some pair overflowed, the first such pair's condensed index. The array
+     * is not copied: it goes straight to {@link CondensedDistances#wrap}, and a copy could double the
+     * largest allocation of a run.
+     */
     record Result(double[] condensed, long firstNonFinite) {
     }
 
@@ -99,11 +103,11 @@ final class PairwiseKernel {
     private final class Worker implements Callable<Void> {
         private final double[] scratch = new double[rows.scratchLength()];
         private final double[] row = new double[m];
-        /** block[k][jj]: feature k of column sample j0 + jj. */
-        private final double[][] block = new double[m][BLOCK_J];
+        /** block[k][jj]: feature k of column sample j0 + jj (no wider than n, for small problems). */
+        private final double[][] block = new double[m][Math.min(BLOCK_J, n)];
         /** Row-major values of the current group of row samples. */
-        private final double[] group = new double[BLOCK_I * m];
-        private final double[][] acc = new double[BLOCK_I][BLOCK_J];
+        private final double[] group = new double[Math.min(BLOCK_I, n) * m];
+        private final double[][] acc = new double[Math.min(BLOCK_I, n)][Math.min(BLOCK_J, n)];
 
         @Override
         public Void call() {

@@ -87,11 +87,14 @@ enum RowPreparation {
             rows.load(r, row, 0, scratch);
             for (int k = 0; k < m; k++) {
                 double v = row[k];
-                if (Double.isNaN(v) || Double.isInfinite(v)) {
-                    throw new InputException("sample '" + data.sampleIds().get(r) + "' has "
-                            + (Double.isNaN(v) ? "a missing value" : "an infinite value") + " in feature '"
-                            + data.featureNames().get(rows.column(k)) + "'; the " + metric
-                            + " distance needs finite values (deal with missing values before)");
+                if (Double.isNaN(v)) {
+                    throw new InputException("sample '" + data.sampleIds().get(r) + "' has a missing value in feature '"
+                            + data.featureNames().get(rows.column(k)) + "'; " + metric
+                            + " distances need complete data (apply a missing-value policy first)");
+                }
+                if (Double.isInfinite(v)) {
+                    throw new InputException("sample '" + data.sampleIds().get(r) + "' has an infinite value in feature '"
+                            + data.featureNames().get(rows.column(k)) + "'; " + metric + " distances need finite values");
                 }
                 if (check != null) {
                     check.accept(r, k, v);
