@@ -141,6 +141,15 @@ public enum Metric {
     }
 
     /**
+     * Whether this measure depends on the samples only through their Euclidean geometry, so it is unchanged by
+     * rotating and shifting the feature space (Euclidean and squared Euclidean distance). Such data may be handled
+     * in any orthonormal coordinates, e.g. principal-axis scores.
+     */
+    public boolean rotationInvariant() {
+        return this == EUCLIDEAN || this == SQEUCLIDEAN;
+    }
+
+    /**
      * The metric named {@code name}, ignoring case and surrounding blanks; aliases are accepted.
      *
      * @throws InputException naming the unknown name and listing the valid ones

@@ -3,7 +3,6 @@ package org.treeproof.study;
 import java.util.List;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.distance.CondensedDistances;
-import org.treeproof.distance.Metric;
 import org.treeproof.resample.ReferenceData;
 import org.treeproof.resample.ReplicateExecutor;
 import org.treeproof.resample.Seeds;
@@ -18,7 +17,7 @@ import org.treeproof.tree.MergeTree;
  * every linkage, and log W_k recorded for k = 1..maxK; reference sets run in parallel.
  *
  * <p>W_k = Σ_r D_r / (2 n_r) with D_r the sum of d over ordered pairs in cluster r. The paper takes d as
- * squared Euclidean distance, so for the Euclidean metrics W_k is the pooled within-cluster sum of
+ * squared Euclidean distance, so for the rotation-invariant (Euclidean) metrics W_k is the pooled within-cluster sum of
  * squares around the centroids; for any other metric d is that metric's dissimilarity.
  */
 final class GapRun {
@@ -64,7 +63,10 @@ final class GapRun {
 
     /** Row 0 holds the index; row 1 + l the log W_k of linkage l for k = 1..maxK. */
     private double[][] referenceLogW(ReferenceData generator, int index) {
-        DataMatrix ref = generator.draw(Seeds.seedFor(settings.seed(), Seeds.Purpose.GAP_REFERENCE, index));
+        long seed = Seeds.seedFor(settings.seed(), Seeds.Purpose.GAP_REFERENCE, index);
+        // Euclidean distances and sums of squares are the same in the reference's own coordinates (an exact
+        // rotation), which skips the back-transform to the features.
+        DataMatrix ref = settings.metric().rotationInvariant() ? generator.drawCoordinates(seed) : generator.draw(seed);
         CondensedDistances rd = settings.metric().compute(ref, 1);
         double[][] out = new double[refs.size() + 1][];
         out[0] = new double[] {index};
@@ -85,8 +87,7 @@ final class GapRun {
     }
 
     private double within(DataMatrix x, CondensedDistances d, int[] labels, int k) {
-        Metric m = settings.metric();
-        if (m == Metric.EUCLIDEAN || m == Metric.SQEUCLIDEAN) {
+        if (settings.metric().rotationInvariant()) {
             return GapStatistic.withinSumOfSquares(x, labels);
         }
         // Σ_r (1 / n_r) Σ_{i<i' in r} d(i, i')

@@ -116,7 +116,11 @@ public final class StudyRunner {
         double[][][] pac = new double[linkages][maxK - 1][sets];
         progress.stage("null data sets", sets);
         for (int j = 0; j < sets; j++) {
-            DataMatrix nullData = generator.draw(Seeds.seedFor(settings.seed(), Seeds.Purpose.NULL_DATA, j));
+            long seed = Seeds.seedFor(settings.seed(), Seeds.Purpose.NULL_DATA, j);
+            // Without feature resampling only distances matter, and Euclidean ones are the same in the null's
+            // principal coordinates (an exact rotation), which skips the back-transform to the features.
+            DataMatrix nullData = settings.metric().rotationInvariant() && !settings.resamplesFeatures()
+                    ? generator.drawCoordinates(seed) : generator.draw(seed);
             CondensedDistances nd = settings.metric().compute(nullData, kernelThreads);
             List<ReferenceSolution> nullRefs = ReferenceSolution.all(settings.linkages(), nd, maxK, executor);
             StabilityTally t = stability(nullData, nd, nullRefs, settings.nullReplicates(),
