@@ -27,9 +27,11 @@ final class GapRun {
     private final List<ReferenceSolution> refs;
     private final ReplicateExecutor executor;
     private final StudyProgress progress;
+    private final Checkpoint checkpoint;
 
     GapRun(DataMatrix data, CondensedDistances distances, StudySettings settings, List<ReferenceSolution> refs,
-            ReplicateExecutor executor, StudyProgress progress) {
+            ReplicateExecutor executor, StudyProgress progress, Checkpoint checkpoint) {
+        this.checkpoint = checkpoint;
         this.data = data;
         this.distances = distances;
         this.settings = settings;
@@ -45,11 +47,25 @@ final class GapRun {
         double[][][] refLogW = new double[l][b][];
         ReferenceData generator = settings.gapReference().prepare(data);
         progress.stage("reference data sets (gap statistic)", b);
-        executor.run(0, b, i -> referenceLogW(generator, i), row -> {
+        int first = 0;
+        for (double[] kept : checkpoint.rows(Checkpoint.Stage.GAP_SETS)) {
+            if (first >= b) {
+                break;
+            }
+            for (int li = 0; li < l; li++) {
+                refLogW[li][first] = java.util.Arrays.copyOfRange(kept, li * maxK, (li + 1) * maxK);
+            }
+            first++;
+            progress.step();
+        }
+        executor.run(first, b, i -> referenceLogW(generator, i), row -> {
             int index = (int) row[0][0];
+            double[] flat = new double[l * maxK];
             for (int li = 0; li < l; li++) {
                 refLogW[li][index] = row[li + 1];
+                System.arraycopy(row[li + 1], 0, flat, li * maxK, maxK);
             }
+            checkpoint.rowDone(Checkpoint.Stage.GAP_SETS, index, flat);
             progress.step();
         });
         GapResult[] out = new GapResult[l];

@@ -3,8 +3,9 @@ package org.treeproof.study;
 import org.treeproof.score.BranchSupport;
 
 /**
- * The compact result of one replicate: everything the study accumulates from it, and nothing it
- * can recompute. Small enough to send between machines (a few bytes per sample and linkage).
+ * The compact result of one replicate: everything the study accumulates from it, and nothing it can
+ * recompute. Small enough to keep in a checkpoint or send between machines (a few bytes per sample and
+ * linkage).
  *
  * @param index    the replicate's index
  * @param distinct the distinct samples it held, sorted
@@ -13,5 +14,5 @@ import org.treeproof.score.BranchSupport;
  * @param support  per linkage, which reference clades this replicate counted and reproduced; {@code null}
  *                 when branch support is not computed (null calibration)
  */
-record ReplicateOutcome(int index, int[] distinct, int[][][] labels, BranchSupport.Replicate[] support) {
+public record ReplicateOutcome(int index, int[] distinct, int[][][] labels, BranchSupport.Replicate[] support) {
 }

@@ -36,6 +36,7 @@ public final class StudyRunner {
     private final ReplicateExecutor executor;
     private final int kernelThreads;
     private final StudyProgress progress;
+    private Checkpoint checkpoint = Checkpoint.NONE;
 
     /**
      * @param kernelThreads threads for whole-matrix distance computations (the replicates are parallel
@@ -49,6 +50,12 @@ public final class StudyRunner {
         this.kernelThreads = kernelThreads;
         this.progress = progress;
         settings.checkAgainst(input.samples(), input.hasData());
+    }
+
+    /** Keeps finished work in {@code checkpoint} and replays what it already holds. */
+    public StudyRunner withCheckpoint(Checkpoint checkpoint) {
+        this.checkpoint = java.util.Objects.requireNonNull(checkpoint);
+        return this;
     }
 
     /** Runs the study. */
@@ -69,7 +76,7 @@ public final class StudyRunner {
                 "replicates");
         NullTable nulls = data != null && settings.nullSets() > 0 ? nullCalibration(data, refs.size()) : null;
         GapResult[] gaps = data != null && settings.referenceSets() > 0
-                ? new GapRun(data, d, settings, refs, executor, progress).run() : null;
+                ? new GapRun(data, d, settings, refs, executor, progress, checkpoint).run() : null;
 
         var linkages = new ArrayList<LinkageEvidence>();
         for (int l = 0; l < refs.size(); l++) {
@@ -95,8 +102,22 @@ public final class StudyRunner {
         if (stage != null) {
             progress.stage(stage, replicates);
         }
-        executor.run(0, replicates, work::run, r -> {
+        int first = 0;
+        if (full) {
+            for (ReplicateOutcome kept : checkpoint.replicates()) {
+                if (kept.index() != first || first >= replicates) {
+                    break;
+                }
+                tally.add(kept);
+                first++;
+                progress.step();
+            }
+        }
+        executor.run(first, replicates, work::run, r -> {
             tally.add(r);
+            if (full) {
+                checkpoint.replicateDone(r);
+            }
             if (stage != null) {
                 progress.step();
             }
@@ -115,7 +136,16 @@ public final class StudyRunner {
         double[][][] meanAri = new double[linkages][maxK - 1][sets];
         double[][][] pac = new double[linkages][maxK - 1][sets];
         progress.stage("null data sets", sets);
-        for (int j = 0; j < sets; j++) {
+        int kept = 0;
+        for (double[] row : checkpoint.rows(Checkpoint.Stage.NULL_SETS)) {
+            if (kept >= sets) {
+                break;
+            }
+            unpackNullRow(row, kept, meanAri, pac);
+            kept++;
+            progress.step();
+        }
+        for (int j = kept; j < sets; j++) {
             long seed = Seeds.seedFor(settings.seed(), Seeds.Purpose.NULL_DATA, j);
             // Without feature resampling only distances matter, and Euclidean ones are the same in the null's
             // principal coordinates (an exact rotation), which skips the back-transform to the features.
@@ -132,9 +162,40 @@ public final class StudyRunner {
                     pac[l][k - 2][j] = cm.pac(k, pacLow(), pacHigh());
                 }
             }
+            checkpoint.rowDone(Checkpoint.Stage.NULL_SETS, j, packNullRow(j, meanAri, pac));
             progress.step();
         }
         return new NullTable(meanAri, pac);
+    }
+
+    /** One null set's results as a row: mean ARI then PAC, for every linkage and k. */
+    private static double[] packNullRow(int j, double[][][] meanAri, double[][][] pac) {
+        int l = meanAri.length;
+        int ks = meanAri[0].length;
+        double[] row = new double[2 * l * ks];
+        int t = 0;
+        for (int a = 0; a < l; a++) {
+            for (int k = 0; k < ks; k++) {
+                row[t++] = meanAri[a][k][j];
+                row[t++] = pac[a][k][j];
+            }
+        }
+        return row;
+    }
+
+    private static void unpackNullRow(double[] row, int j, double[][][] meanAri, double[][][] pac) {
+        int l = meanAri.length;
+        int ks = meanAri[0].length;
+        if (row.length != 2 * l * ks) {
+            throw new IllegalStateException("a kept null-set row has the wrong length");
+        }
+        int t = 0;
+        for (int a = 0; a < l; a++) {
+            for (int k = 0; k < ks; k++) {
+                meanAri[a][k][j] = row[t++];
+                pac[a][k][j] = row[t++];
+            }
+        }
     }
 
     private BigDecimal pacLow() {
