@@ -22,17 +22,12 @@ import javax.imageio.ImageIO;
  *
  * <p>The PNG is opaque RGB on white: the same input gives the same pixels and, since the PNG writer adds
  * no time stamp, the same bytes.
+ *
+ * <p>Nothing here sets {@code java.awt.headless}: loading a class should not change a process-wide property.
+ * {@link StudyCharts#drawAll} sets it at its entry; other callers run with {@code -Djava.awt.headless=true}.
  */
 final class ChartFiles {
     private static final Pattern BASE_NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]{0,120}");
-
-    static {
-        // charts are drawn off screen; without this a set but unreachable DISPLAY can stop AWT from starting.
-        // Only set when the caller has not chosen, so an explicit setting always wins.
-        if (System.getProperty("java.awt.headless") == null) {
-            System.setProperty("java.awt.headless", "true");
-        }
-    }
 
     private ChartFiles() {
     }

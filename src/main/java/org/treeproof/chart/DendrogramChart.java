@@ -148,7 +148,9 @@ public final class DendrogramChart {
         Look.textCentredBelow(g, axisTitle, plot.getCenterX(), y + 6);
 
         List<Key.Entry> entries = new ArrayList<>(Clusters.entries(Clusters.sizes(in.clusterView(), k), "samples"));
-        entries.add(Key.Entry.line(ChartColors.ABOVE_CUT, new BasicStroke(2f), "branches that join clusters"));
+        if (k > 1) {
+            entries.add(Key.Entry.line(ChartColors.ABOVE_CUT, new BasicStroke(2f), "branches that join clusters"));
+        }
         if (Double.isFinite(in.cutHeight())) {
             entries.add(Key.Entry.line(Look.RULE, Look.DASHED, "cut at height " + Ticks.compact(in.cutHeight())));
         }
@@ -160,7 +162,8 @@ public final class DendrogramChart {
             entries.add(Key.Entry.fill(ChartColors.tint(ChartColors.ABOVE_CUT, TreeDrawing.WEDGE_TINT),
                     "shaded wedge: a small group whose leaves are too close to draw apart, up to its merge height"));
         }
-        Key.list(g, plotRight + 28, plot.getY(), KEY_WIDTH - 20, "Clusters at the cut (k = " + k + ")", entries);
+        Key.list(g, plotRight + 28, plot.getY(), KEY_WIDTH - 20, k > 1 ? "Clusters at the cut (k = " + k + ")"
+                : "One cluster: the tree is not cut", entries);
     }
 
     /** Support numbers at the highest forks, skipping any that would cover one already placed. */

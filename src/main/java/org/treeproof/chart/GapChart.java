@@ -43,7 +43,8 @@ public final class GapChart {
         }
         double[] gap = in.gap();
         double[] se = in.standardError();
-        Color colour = ChartColors.series(0);
+        Color colour = in.linkage() == null ? ChartColors.series(0) : ChartColors.linkage(in.linkage(), 0);
+        // the title names the linkage; a longer key entry would narrow the plot
         XYSeries s = chart.addSeries("Gap(k) \u00b1 one standard error", x, gap, se);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
         s.setLineColor(colour);
@@ -69,7 +70,8 @@ public final class GapChart {
             XYSeries mark = chart.addSeries("chosen k = " + c, new double[] {c}, new double[] {gap[c - 1]});
             mark.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             mark.setMarker(SeriesMarkers.DIAMOND);
-            mark.setMarkerColor(ChartColors.series(1));
+            // ink, not a series colour: another colour would read as another linkage
+            mark.setMarkerColor(Look.INK);
             chart.addAnnotation(new AnnotationLine(c, true, false));
             chart.addAnnotation(XCharts.besideRule("chosen k = " + c, c, kMax, PLOT_WIDTH_GUESS,
                     hi + pad * 0.4));

@@ -10,8 +10,10 @@ import java.util.Objects;
  * @param gap           Gap(k) at index k-1, finite, at least one value
  * @param standardError s_k at index k-1, finite and non-negative
  * @param chosenK       the number of clusters the gap rule picked, 1..K, or 0 for none
+ * @param linkage       the linkage whose tree was cut, which gives the line its colour
+ *                      ({@link ChartColors#linkage}), or {@code null} for the first series colour
  */
-public record GapInput(String title, double[] gap, double[] standardError, int chosenK) {
+public record GapInput(String title, double[] gap, double[] standardError, int chosenK, String linkage) {
 
     public GapInput {
         Check.text(title, "title");
@@ -24,6 +26,14 @@ public record GapInput(String title, double[] gap, double[] standardError, int c
         if (chosenK < 0 || chosenK > gap.length) {
             throw new IllegalArgumentException("chosenK " + chosenK + " is outside 1.." + gap.length + " (0 for none)");
         }
+        if (linkage != null) {
+            Check.text(linkage, "linkage");
+        }
+    }
+
+    /** A gap chart that names no linkage. */
+    public GapInput(String title, double[] gap, double[] standardError, int chosenK) {
+        this(title, gap, standardError, chosenK, null);
     }
 
     /** K, the largest number of clusters shown. */
@@ -44,16 +54,17 @@ public record GapInput(String title, double[] gap, double[] standardError, int c
     @Override
     public boolean equals(Object o) {
         return o instanceof GapInput g && g.title.equals(title) && Arrays.equals(g.gap, gap)
-                && Arrays.equals(g.standardError, standardError) && g.chosenK == chosenK;
+                && Arrays.equals(g.standardError, standardError) && g.chosenK == chosenK
+                && Objects.equals(g.linkage, linkage);
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(title, Arrays.hashCode(gap), Arrays.hashCode(standardError), chosenK);
+        return Objects.hash(title, Arrays.hashCode(gap), Arrays.hashCode(standardError), chosenK, linkage);
     }
 
     @Override
     public String toString() {
-        return "GapInput[" + title + ", K=" + gap.length + ", chosen=" + chosenK + "]";
+        return "GapInput[" + title + ", K=" + gap.length + ", chosen=" + chosenK + (linkage == null ? "" : ", " + linkage) + "]";
     }
 }

@@ -59,7 +59,7 @@ public final class LinkageComparisonChart {
             Look.textRight(g, row.linkage(), rowsLeft - 12, mid - 7);
             g.setColor(Look.MUTED);
             g.setFont(Look.font(Look.SMALL_SIZE));
-            Look.textRight(g, "best k = " + row.k(), rowsLeft - 12, mid + 8);
+            Look.textRight(g, row.k() > 1 ? "best k = " + row.k() : "k = 1: no split", rowsLeft - 12, mid + 8);
             g.setFont(Look.font(Look.TICK_SIZE));
             g.setColor(Look.INK);
         }
@@ -104,7 +104,8 @@ public final class LinkageComparisonChart {
             g.setFont(Look.font(Look.SMALL_SIZE));
             if (Double.isNaN(v)) {
                 g.setColor(Look.MUTED);
-                Look.textLeft(g, "not defined", axes.x(0) + 4, y0 + h / 2);
+                Look.textLeft(g, rows.get(r).k() == 1 ? "not defined for one cluster" : "not defined", axes.x(0) + 4,
+                        y0 + h / 2);
                 continue;
             }
             double a = Math.min(axes.x(0), axes.x(v));
@@ -192,5 +193,21 @@ public final class LinkageComparisonChart {
         g.setColor(Look.MUTED);
         Look.textCentredBelow(g, "1 = the same clusters, 0 = no more alike than chance", x0 + barWidth / 2,
                 barTop + 28);
+        if (hasUndefinedAgreement()) {
+            Look.textCentredBelow(g, "\u2013 = not defined: one of the two is a single cluster", x0 + barWidth / 2,
+                    barTop + 43);
+        }
+    }
+
+    private boolean hasUndefinedAgreement() {
+        int m = in.rows().size();
+        for (int a = 0; a < m; a++) {
+            for (int b = 0; b < m; b++) {
+                if (Double.isNaN(in.agreementAt(a, b))) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 }

@@ -14,7 +14,7 @@ import java.util.Set;
  * @param rows      one row per linkage, in the order to show them; names distinct
  * @param agreement the adjusted Rand index between the chosen clusterings of linkages {@code a} and
  *                  {@code b}, {@code rows.size()} square, symmetric, values in [-1, 1] or NaN where undefined
- *                  (both clusterings with one cluster), diagonal 1
+ *                  (where a clustering has a single cluster), diagonal 1
  */
 public record LinkageComparisonInput(String title, List<LinkageComparisonInput.Row> rows, double[][] agreement) {
 

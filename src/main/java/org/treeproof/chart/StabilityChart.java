@@ -5,22 +5,20 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Objects;
-import org.knowm.xchart.AnnotationLine;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * Stability against the number of clusters: per linkage the mean adjusted Rand index between replicate and
  * full-data clusterings as a line, its 95% interval over replicates as a shaded band, the no-structure
- * reference as a grey band with a dashed line, and the chosen k as a vertical rule. The adjusted Rand
- * index is that of L. Hubert and P. Arabie, "Comparing partitions", J. Classification 2 (1985) 193-218,
- * doi:10.1007/BF01908075. Drawn with XChart; {@value #WIDTH} by {@value #HEIGHT} pixels, PNG and SVG.
+ * reference as a grey band with a dashed line, and the chosen k as a vertical rule named in the key. The
+ * adjusted Rand index is that of L. Hubert and P. Arabie, "Comparing partitions", J. Classification 2 (1985)
+ * 193-218, doi:10.1007/BF01908075. Drawn with XChart; {@value #WIDTH} by {@value #HEIGHT} pixels, PNG and SVG.
  */
 public final class StabilityChart {
     public static final int WIDTH = 1000;
     public static final int HEIGHT = 620;
-    /** Roughly the plot's width in pixels, to set a label beside the chosen-k rule. */
-    private static final double PLOT_WIDTH_GUESS = WIDTH - 300;
 
     private final StabilityInput in;
 
@@ -77,9 +75,16 @@ public final class StabilityChart {
         st.setXAxisMax(k[k.length - 1] + pad);
         st.setXAxisDecimalPattern("#0");
         if (in.chosenK() > 0) {
-            chart.addAnnotation(new AnnotationLine(in.chosenK(), true, false));
-            chart.addAnnotation(XCharts.besideRule("chosen k = " + in.chosenK(), in.chosenK(),
-                    k[k.length - 1] - k[0] + 2 * pad, PLOT_WIDTH_GUESS, 0.975));
+            // a series rather than a label beside the rule: a label near the top sits on the curves, which
+            // crowd towards 1 exactly where the chosen k is; the key has room. It runs past both ends of the
+            // axis, as the plot clips it, so that it spans the plot's padding too
+            double c = in.chosenK();
+            XYSeries rule = chart.addSeries("chosen k = " + in.chosenK(), new double[] {c, c},
+                    new double[] {st.getYAxisMin() - 1, 2.0});
+            rule.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+            rule.setMarker(SeriesMarkers.NONE);
+            rule.setLineColor(Look.RULE);
+            rule.setLineStyle(Look.DASHED);
         }
         return chart;
     }

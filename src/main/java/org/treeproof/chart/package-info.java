@@ -13,7 +13,12 @@
  * control of thousands of marks. Colours: {@link org.treeproof.chart.ChartColors} and
  * {@link org.treeproof.chart.ColorScale}.
  *
- * <p>Rendering is headless (set {@code java.awt.headless=true}) and deterministic: the same input gives the
- * same PNG bytes.
+ * <p>{@link org.treeproof.chart.StudyCharts#drawAll} draws every figure of a study from its
+ * {@code Evidence} and {@code Recommendation} and returns one {@link org.treeproof.chart.Figure} per fixed id,
+ * drawn or skipped with the reason.
+ *
+ * <p>Rendering is headless and deterministic: the same input gives the same PNG bytes. {@code StudyCharts}
+ * sets {@code java.awt.headless=true} at its entry when the caller has not chosen; callers of the renderers
+ * themselves run with {@code -Djava.awt.headless=true} (the build's tests do).
  */
 package org.treeproof.chart;

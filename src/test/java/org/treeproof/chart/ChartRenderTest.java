@@ -101,7 +101,22 @@ class ChartRenderTest {
         BufferedImage img = RenderChecks.check(new GapChart(in)::write, tmp, "gap", GapChart.WIDTH, GapChart.HEIGHT,
                 true);
         assertTrue(RenderChecks.count(img, ChartColors.series(0)) > 100);
-        assertTrue(RenderChecks.count(img, ChartColors.series(1)) > 20, "the chosen k marker is missing");
+        BufferedImage none = ChartFiles.image(GapChart.WIDTH, GapChart.HEIGHT, g -> new GapChart(new GapInput("Gap",
+                in.gap(), in.standardError(), 0)).chart().paint(g, GapChart.WIDTH, GapChart.HEIGHT));
+        assertTrue(RenderChecks.count(img, Look.INK) > RenderChecks.count(none, Look.INK) + 40,
+                "the chosen k marker and its key entry are missing");
+    }
+
+    @Test
+    void gapTakesItsLinkagesColourAndNoOther(@TempDir Path tmp) throws Exception {
+        GapInput in = new GapInput("Gap, ward linkage", new double[] {0.2, 0.5, 0.8, 0.85, 0.86}, new double[] {0.02,
+            0.03, 0.03, 0.03, 0.04}, 3, "ward");
+        BufferedImage img = RenderChecks.check(new GapChart(in)::write, tmp, "gap", GapChart.WIDTH, GapChart.HEIGHT,
+                true);
+        assertTrue(RenderChecks.count(img, ChartColors.linkage("ward", 0)) > 100);
+        for (String other : new String[] {"average", "complete"}) {
+            assertEquals(0, RenderChecks.count(img, ChartColors.linkage(other, 0)), other + "'s colour on ward's chart");
+        }
     }
 
     @Test
