@@ -9,6 +9,7 @@ import java.util.concurrent.Callable;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.data.InputException;
 import org.treeproof.distance.Metric;
+import org.treeproof.io.CheckpointFile;
 import org.treeproof.io.CsvOutputs;
 import org.treeproof.io.LabelsReader;
 import org.treeproof.io.LoadedInput;
@@ -66,6 +67,11 @@ final class AssessCommand implements Callable<Integer> {
     @Option(names = "--force", description = "Replace DIR if it exists (only once the new results are complete).")
     boolean force;
 
+    @Option(names = "--resume", description = "Continue a run of the same study that was interrupted, from the "
+            + "replicates it had finished (kept beside DIR as .DIR.checkpoint); the result is identical to an "
+            + "uninterrupted run.")
+    boolean resume;
+
     @Option(names = "--no-progress", description = "Do not show progress.")
     boolean noProgress;
 
@@ -80,6 +86,21 @@ final class AssessCommand implements Callable<Integer> {
         var args = new ArrayList<String>(List.of("treeproof", "assess"));
         args.addAll(spec.commandLine().getParseResult().originalArgs());
         return args.toArray(String[]::new);
+    }
+
+    /**
+     * What makes two runs the same study: tool version, input bytes, input preparation and every setting
+     * (not the thread count, which cannot change a result).
+     */
+    private static String fingerprint(LoadedInput loaded, StudySettings settings) {
+        String text = Main.toolVersion() + "\n" + loaded.source().sha256() + "\n"
+                + loaded.preparation().map(p -> p.settings().toString()).orElse("distances") + "\n" + settings;
+        try {
+            var md = java.security.MessageDigest.getInstance("SHA-256");
+            return java.util.HexFormat.of().formatHex(md.digest(text.getBytes(StandardCharsets.UTF_8)));
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException(e);
+        }
     }
 
     @Override
@@ -100,9 +121,18 @@ final class AssessCommand implements Callable<Integer> {
         MemoryEstimate.of(studyInput.samples(), loaded.features(), settings, nThreads, studyInput.hasData())
                 .requireFits(Runtime.getRuntime().maxMemory(), studyInput.samples());
 
+        String fingerprint = fingerprint(loaded, settings);
         Evidence evidence;
+        CheckpointFile checkpoint = CheckpointFile.open(out, fingerprint, resume);
         try (var progress = new ProgressReporter(System.err, quiet || noProgress)) {
-            evidence = new StudyRunner(studyInput, settings, new LocalExecutor(nThreads), nThreads, progress).run();
+            if (resume && !quiet) {
+                System.err.println("treeproof: resuming with " + checkpoint.resumedReplicates()
+                        + " replicates kept from the interrupted run");
+            }
+            evidence = new StudyRunner(studyInput, settings, new LocalExecutor(nThreads), nThreads, progress)
+                    .withCheckpoint(checkpoint).run();
+        } finally {
+            checkpoint.close();
         }
         Recommendation rec = Recommender.of(evidence, DecisionRule.DEFAULT).recommend();
         var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine(), nThreads,
@@ -111,6 +141,7 @@ final class AssessCommand implements Callable<Integer> {
             outputs.writeInto(dir);
             dir.commit();
         }
+        checkpoint.discard();
         if (!quiet) {
             System.out.println(outputs.headline());
             System.out.println("report: " + out.resolve("report.html"));

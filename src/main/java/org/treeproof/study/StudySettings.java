@@ -38,6 +38,11 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
     /** The defaults a study uses when an option is not given. */
     public static final List<Linkage> DEFAULT_LINKAGES = List.of(Linkage.AVERAGE, Linkage.COMPLETE, Linkage.WARD);
 
+    /** The most replicates a study takes (the consensus counters' limit). */
+    public static final int MAX_REPLICATES = org.treeproof.score.ConsensusAccumulator.MAX_REPLICATES;
+    /** The largest number of clusters a study assesses. */
+    public static final int MAX_K = 100;
+
     public StudySettings {
         linkages = List.copyOf(linkages);
         Objects.requireNonNull(metric, "metric");
@@ -66,11 +71,14 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
                         + metric.id());
             }
         }
-        if (maxK < 2) {
-            p.add("--max-k must be at least 2, got " + maxK);
+        if (maxK < 2 || maxK > MAX_K) {
+            p.add("--max-k must be between 2 and " + MAX_K + ", got " + maxK);
         }
-        if (replicates < 2) {
-            p.add("--replicates must be at least 2, got " + replicates);
+        if (replicates < 2 || replicates > MAX_REPLICATES) {
+            p.add("--replicates must be between 2 and " + MAX_REPLICATES + ", got " + replicates);
+        }
+        if (nullReplicates > MAX_REPLICATES) {
+            p.add("--null-replicates must be at most " + MAX_REPLICATES + ", got " + nullReplicates);
         }
         if (!(sampleFraction > 0 && sampleFraction <= 1)) {
             p.add("--sample-fraction must be in (0, 1], got " + sampleFraction);
