@@ -33,7 +33,7 @@ public final class CsvOutputs {
     public static final List<String> SCORE_COLUMNS = List.of("linkage", "k", "cutHeightLow", "cutHeightHigh",
             "cutHeightChosen", "tieDependent", "silhouette", "calinskiHarabasz", "daviesBouldin", "dunn", "gap", "gapSE",
             "ariMean", "ariSD", "ariLow", "ariHigh", "pac", "nullAriMean", "nullAriLow", "nullAriHigh", "nullPacMean",
-            "pValueAri", "pValuePac", "smallestJaccard", "doubtfulClusters", "dissolvedClusters", "verdict");
+            "nullSilhouetteMean", "pValueAri", "pValuePac", "pValueSilhouette", "pValueCombined", "smallestJaccard", "doubtfulClusters", "dissolvedClusters", "verdict");
 
     /** {@code clusters.csv}: per sample, its cluster in the recommended solution and its flags. */
     public static String clusters(Evidence evidence, Recommendation r) {
@@ -101,8 +101,11 @@ public final class CsvOutputs {
                 row.add(ns == null ? "" : num(ns.ariLow()));
                 row.add(ns == null ? "" : num(ns.ariHigh()));
                 row.add(ns == null ? "" : num(ns.pacMean()));
+                row.add(ns == null ? "" : num(ns.silhouetteMean()));
                 row.add(ns == null ? "" : num(ns.pValueAri()));
                 row.add(ns == null ? "" : num(ns.pValuePac()));
+                row.add(ns == null ? "" : num(ns.pValueSilhouette()));
+                row.add(ns == null ? "" : num(ns.pValueCombined()));
                 row.add(num(e.worstJaccard()));
                 row.add(String.valueOf(doubtful));
                 row.add(String.valueOf(dissolved));

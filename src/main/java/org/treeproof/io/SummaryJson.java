@@ -241,8 +241,13 @@ public final class SummaryJson {
             number(g, "pacMean", n.pacMean());
             number(g, "pacLow", n.pacLow());
             number(g, "pacHigh", n.pacHigh());
+            number(g, "silhouetteMean", n.silhouetteMean());
+            number(g, "silhouetteLow", n.silhouetteLow());
+            number(g, "silhouetteHigh", n.silhouetteHigh());
             number(g, "pValueAri", n.pValueAri());
             number(g, "pValuePac", n.pValuePac());
+            number(g, "pValueSilhouette", n.pValueSilhouette());
+            number(g, "pValueCombined", n.pValueCombined());
             g.writeEndObject();
         }
         g.writeEndObject();

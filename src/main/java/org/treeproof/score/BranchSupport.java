@@ -64,11 +64,11 @@ public final class BranchSupport {
             return supported.clone();
         }
 
-        boolean counted(int s) {
+        public boolean counted(int s) {
             return (counted[s >>> 6] & (1L << s)) != 0;
         }
 
-        boolean supported(int s) {
+        public boolean supported(int s) {
             return (supported[s >>> 6] & (1L << s)) != 0;
         }
     }

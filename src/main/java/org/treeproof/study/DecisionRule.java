@@ -4,8 +4,9 @@ package org.treeproof.study;
  * The thresholds that turn evidence into a verdict. The defaults, and where each comes from:
  *
  * <ul>
- *   <li>{@code alpha = 0.05}: the Monte Carlo p-value of the observed mean ARI against null data must be at
- *       most this (with 19 null sets: the observed stability beats every null set). Conventional level.</li>
+ *   <li>{@code alpha = 0.05}: the Monte Carlo p-value against null data of the observed mean ARI plus average
+ *       silhouette ({@link NullStability#combined}) must be at most this (with 19 null sets: the observed
+ *       solution beats every null set). Conventional level.</li>
  *   <li>{@code stableJaccard = 0.75} and {@code dissolvedJaccard = 0.5}: the bands of C. Hennig,
  *       "Cluster-wise assessment of cluster stability", Comput. Stat. Data Anal. 52 (2007) 258-271,
  *       doi:10.1016/j.csda.2006.11.025.</li>
@@ -20,7 +21,7 @@ package org.treeproof.study;
  *
  * <p>The rule, for one linkage and one k:
  * <ol>
- *   <li>Eligible when the stability beats the null ({@code pValueAri <= alpha}), the mean ARI reaches
+ *   <li>Eligible when the solution beats the null ({@code pValueCombined <= alpha}), the mean ARI reaches
  *       {@code stableJaccard} (a solution that replicates reproduce only partly is not a finding, however much
  *       better than the null it is; the value borrows Hennig's stable band and is our choice), and no cluster
  *       dissolves (every mean Jaccard above {@code dissolvedJaccard}). Without null calibration (distances given

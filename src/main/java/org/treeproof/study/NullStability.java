@@ -17,9 +17,28 @@ package org.treeproof.study;
  * @param pacMean          mean over null sets of their PAC
  * @param pacLow           2.5% quantile of the null sets' PAC
  * @param pacHigh          97.5% quantile of the null sets' PAC
- * @param pValueAri        share of null sets whose mean ARI reaches the observed one (Monte Carlo p-value)
- * @param pValuePac        share of null sets whose PAC is at most the observed one (Monte Carlo p-value)
+ * @param silhouetteMean   mean over null sets of the average silhouette of their own reference cut at this k
+ * @param silhouetteLow    2.5% quantile of the null sets' average silhouette
+ * @param silhouetteHigh   97.5% quantile of the null sets' average silhouette
+ * @param pValueAri        Monte Carlo p-value of the observed mean ARI (null sets reaching it)
+ * @param pValuePac        Monte Carlo p-value of the observed PAC (null sets at most as ambiguous)
+ * @param pValueSilhouette Monte Carlo p-value of the observed average silhouette
+ * @param pValueCombined   Monte Carlo p-value of {@link #combined} (stability plus separation), the one test the
+ *                         decision rule uses
  */
 public record NullStability(int sets, int replicatesPerSet, double ariMean, double ariLow, double ariHigh,
-        double pacMean, double pacLow, double pacHigh, double pValueAri, double pValuePac) {
+        double pacMean, double pacLow, double pacHigh, double silhouetteMean, double silhouetteLow,
+        double silhouetteHigh, double pValueAri, double pValuePac, double pValueSilhouette, double pValueCombined) {
+
+    /**
+     * The statistic the decision rule tests against the null: mean ARI plus average silhouette width. Stability
+     * alone has little power against a null whose covariance makes one split as reproducible as a real one (two
+     * well-separated groups put most of the variance on one axis, and a Gaussian elongated along it is split
+     * the same way every time); separation alone ignores reproducibility. Their sum, both on [-1, 1], is large
+     * only when a solution is both reproducible and separated, and its null distribution is simulated like the
+     * others, so the test is valid for any such statistic. The choice of statistic is ours.
+     */
+    public static double combined(double meanAri, double silhouette) {
+        return meanAri + silhouette;
+    }
 }

@@ -88,10 +88,14 @@ final class Reasons {
             }
             String why;
             NullStability ns = bestStab.stability().nullModel();
-            if (ns != null && ns.pValueAri() > rule.alpha()) {
-                why = f("its most stable cut (k = %d, mean ARI %.2f) is no more stable than on null data without "
-                        + "clusters (null mean %.2f, p = %.2f)", bestStab.k(), bestStab.stability().ari().mean(),
-                        ns.ariMean(), ns.pValueAri());
+            if (bestStab.stability().ari().mean() < rule.stableJaccard()) {
+                why = f("even its most stable cut (k = %d) is reproduced only partly by replicates (mean ARI %.2f, "
+                        + "below %.2f)", bestStab.k(), bestStab.stability().ari().mean(), rule.stableJaccard());
+            } else if (ns != null && ns.pValueCombined() > rule.alpha()) {
+                why = f("its most stable cut (k = %d, mean ARI %.2f, silhouette %.2f) is no more stable and separated "
+                        + "than null data without clusters (null mean ARI %.2f, silhouette %.2f, p = %.2f)",
+                        bestStab.k(), bestStab.stability().ari().mean(), bestStab.silhouette(), ns.ariMean(),
+                        ns.silhouetteMean(), ns.pValueCombined());
             } else if (!(bestStab.worstJaccard() > rule.dissolvedJaccard())) {
                 why = f("even its most stable cut (k = %d) dissolves a cluster (smallest mean Jaccard %.2f)",
                         bestStab.k(), bestStab.worstJaccard());
@@ -115,8 +119,11 @@ final class Reasons {
             return base + "; no null calibration was run, so this stability cannot be compared with structureless data.";
         }
         return base + f(", against a mean ARI of %.2f (%.2f to %.2f) and PAC of %.3f on %d null data sets with the "
-                + "same covariance but no clusters (Monte Carlo p = %.3f for ARI, %.3f for PAC).", n.ariMean(),
-                n.ariLow(), n.ariHigh(), n.pacMean(), n.sets(), n.pValueAri(), n.pValuePac());
+                + "same covariance but no clusters (Monte Carlo p = %.3f for ARI, %.3f for PAC). Stability plus "
+                + "separation (mean ARI + average silhouette, %.2f here, %.2f on the null sets on average) beats the "
+                + "null with p = %.3f.", n.ariMean(), n.ariLow(), n.ariHigh(), n.pacMean(), n.sets(), n.pValueAri(),
+                n.pValuePac(), NullStability.combined(s.ari().mean(), e.silhouette()),
+                NullStability.combined(n.ariMean(), n.silhouetteMean()), n.pValueCombined());
     }
 
     private String jaccardSentence(KEvidence e) {

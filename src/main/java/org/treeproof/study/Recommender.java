@@ -49,7 +49,7 @@ public final class Recommender {
         boolean beats;
         boolean calibrated = s.nullModel() != null;
         if (calibrated) {
-            beats = s.nullModel().pValueAri() <= rule.alpha() + 1e-12 && s.ari().mean() >= rule.stableJaccard();
+            beats = s.nullModel().pValueCombined() <= rule.alpha() + 1e-12 && s.ari().mean() >= rule.stableJaccard();
         } else {
             beats = s.ari().mean() >= rule.stableJaccard();
         }

@@ -126,7 +126,7 @@ public final class StudyRunner {
     }
 
     /** Mean ARI and PAC of every null set, per linkage and k: {@code [l][k-2][set]}. */
-    private record NullTable(double[][][] meanAri, double[][][] pac) {
+    private record NullTable(double[][][] meanAri, double[][][] pac, double[][][] silhouette) {
     }
 
     private NullTable nullCalibration(DataMatrix data, int linkages) {
@@ -135,13 +135,14 @@ public final class StudyRunner {
         var generator = org.treeproof.resample.ReferenceData.gaussian(data);
         double[][][] meanAri = new double[linkages][maxK - 1][sets];
         double[][][] pac = new double[linkages][maxK - 1][sets];
+        double[][][] sil = new double[linkages][maxK - 1][sets];
         progress.stage("null data sets", sets);
         int kept = 0;
         for (double[] row : checkpoint.rows(Checkpoint.Stage.NULL_SETS)) {
             if (kept >= sets) {
                 break;
             }
-            unpackNullRow(row, kept, meanAri, pac);
+            unpackNullRow(row, kept, meanAri, pac, sil);
             kept++;
             progress.step();
         }
@@ -160,33 +161,36 @@ public final class StudyRunner {
                 for (int k = 2; k <= maxK; k++) {
                     meanAri[l][k - 2][j] = ReplicateSummary.of(t.ari(l, k)).mean();
                     pac[l][k - 2][j] = cm.pac(k, pacLow(), pacHigh());
+                    sil[l][k - 2][j] = Silhouette.of(nd, nullRefs.get(l).cut(k).partition()).compute().mean();
                 }
             }
-            checkpoint.rowDone(Checkpoint.Stage.NULL_SETS, j, packNullRow(j, meanAri, pac));
+            checkpoint.rowDone(Checkpoint.Stage.NULL_SETS, j, packNullRow(j, meanAri, pac, sil));
             progress.step();
         }
-        return new NullTable(meanAri, pac);
+        return new NullTable(meanAri, pac, sil);
     }
 
     /** One null set's results as a row: mean ARI then PAC, for every linkage and k. */
-    private static double[] packNullRow(int j, double[][][] meanAri, double[][][] pac) {
+    private static double[] packNullRow(int j, double[][][] meanAri, double[][][] pac, double[][][] sil) {
         int l = meanAri.length;
         int ks = meanAri[0].length;
-        double[] row = new double[2 * l * ks];
+        double[] row = new double[3 * l * ks];
         int t = 0;
         for (int a = 0; a < l; a++) {
             for (int k = 0; k < ks; k++) {
                 row[t++] = meanAri[a][k][j];
                 row[t++] = pac[a][k][j];
+                row[t++] = sil[a][k][j];
             }
         }
         return row;
     }
 
-    private static void unpackNullRow(double[] row, int j, double[][][] meanAri, double[][][] pac) {
+    private static void unpackNullRow(double[] row, int j, double[][][] meanAri, double[][][] pac,
+            double[][][] sil) {
         int l = meanAri.length;
         int ks = meanAri[0].length;
-        if (row.length != 2 * l * ks) {
+        if (row.length != 3 * l * ks) {
             throw new IllegalStateException("a kept null-set row has the wrong length");
         }
         int t = 0;
@@ -194,6 +198,7 @@ public final class StudyRunner {
             for (int k = 0; k < ks; k++) {
                 meanAri[a][k][j] = row[t++];
                 pac[a][k][j] = row[t++];
+                sil[a][k][j] = row[t++];
             }
         }
     }
@@ -219,7 +224,7 @@ public final class StudyRunner {
             double dunn = DunnIndex.of(d, p).compute().value();
             double pac = consensus.pac(k, pacLow(), pacHigh());
             ReplicateSummary ari = ReplicateSummary.of(tally.ari(l, k));
-            NullStability ns = nulls == null ? null : nullStability(nulls, l, k, ari.mean(), pac);
+            NullStability ns = nulls == null ? null : nullStability(nulls, l, k, ari.mean(), pac, sil.mean());
             JaccardStability.Result jac = tally.jaccard(l, k);
             int[] sizes = p.clusterSizes();
             var clusters = new ArrayList<ClusterEvidence>();
@@ -238,22 +243,32 @@ public final class StudyRunner {
         return new LinkageEvidence(ref.linkage(), ref.tree(), cophenetic, gap, byK, tally.branchSupport(l), consensus);
     }
 
-    private NullStability nullStability(NullTable nulls, int l, int k, double observedAri, double observedPac) {
+    private NullStability nullStability(NullTable nulls, int l, int k, double observedAri, double observedPac,
+            double observedSilhouette) {
         double[] a = nulls.meanAri()[l][k - 2];
         double[] c = nulls.pac()[l][k - 2];
+        double[] s = nulls.silhouette()[l][k - 2];
+        double observedCombined = NullStability.combined(observedAri, observedSilhouette);
         int atLeast = 0;
         int atMost = 0;
+        int silAtLeast = 0;
+        int combinedAtLeast = 0;
         for (int j = 0; j < a.length; j++) {
-            if (a[j] >= observedAri) {
-                atLeast++;
-            }
-            if (c[j] <= observedPac) {
-                atMost++;
-            }
+            atLeast += a[j] >= observedAri ? 1 : 0;
+            atMost += c[j] <= observedPac ? 1 : 0;
+            silAtLeast += !(s[j] < observedSilhouette) ? 1 : 0;
+            combinedAtLeast += !(NullStability.combined(a[j], s[j]) < observedCombined) ? 1 : 0;
         }
+        double sets = a.length;
         ReplicateSummary as = ReplicateSummary.of(a);
         ReplicateSummary cs = ReplicateSummary.of(c);
+        ReplicateSummary ss = ReplicateSummary.of(finite(s));
         return new NullStability(a.length, settings.nullReplicates(), as.mean(), as.low(), as.high(), cs.mean(),
-                cs.low(), cs.high(), (1.0 + atLeast) / (1.0 + a.length), (1.0 + atMost) / (1.0 + a.length));
+                cs.low(), cs.high(), ss.mean(), ss.low(), ss.high(), (1.0 + atLeast) / (1.0 + sets),
+                (1.0 + atMost) / (1.0 + sets), (1.0 + silAtLeast) / (1.0 + sets), (1.0 + combinedAtLeast) / (1.0 + sets));
+    }
+
+    private static double[] finite(double[] v) {
+        return java.util.Arrays.stream(v).filter(Double::isFinite).toArray();
     }
 }
