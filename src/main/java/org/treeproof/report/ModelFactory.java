@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import java.util.regex.Pattern;
 import org.treeproof.resample.Resampling;
 import org.treeproof.study.ClusterEvidence;
 import org.treeproof.study.DecisionRule;
@@ -102,7 +103,7 @@ final class ModelFactory {
             criteria.add(new Decision.CriterionRow(c.criterion(), c.k(), c.basis(), c.k() == rec.k()));
         }
         return new Decision(rec.verdict(), headline, rec.linkage(), rec.k(), rec.cutHeight(), rec.levels(),
-                rec.reasons(), criteria);
+                reasons(), criteria);
     }
 
     private LinkageComparison comparison() {
@@ -113,7 +114,7 @@ final class ModelFactory {
         }
         // the recommendation's own sentences on the linkages, when it wrote them; otherwise one of ours
         var why = new ArrayList<String>();
-        for (String r : rec.reasons()) {
+        for (String r : reasons()) {
             if (r.startsWith("Among the linkages") || startsWithLinkage(r)) {
                 why.add(r);
             }
@@ -129,6 +130,16 @@ final class ModelFactory {
         }
         return new LinkageComparison(rows, rec.agreement(), rec.linkage(), why);
     }
+
+    /**
+     * The recommendation's sentences as the report prints them: a value that was not a number (a cluster that no
+     * replicate held has no mean Jaccard) shows as the report's dash, never as "NaN".
+     */
+    private List<String> reasons() {
+        return rec.reasons().stream().map(r -> NOT_A_NUMBER.matcher(r).replaceAll(Numbers.MISSING)).toList();
+    }
+
+    private static final Pattern NOT_A_NUMBER = Pattern.compile("-?\\b(?:NaN|Infinity)\\b");
 
     private boolean startsWithLinkage(String reason) {
         for (LinkageEvidence le : evidence.linkages()) {

@@ -166,6 +166,19 @@ class ReportModelTest {
     }
 
     @Test
+    void aReasonWithANonNumberPrintsTheDash() {
+        Studies.Study s = Studies.separated();
+        Recommendation r = s.recommendation();
+        var reasons = new java.util.ArrayList<>(r.reasons());
+        reasons.add("Not every cluster is stable: cluster 2 (15 samples) is not assessed with mean Jaccard NaN.");
+        var odd = new Recommendation(r.linkage(), r.k(), r.cutHeight(), r.verdict(), r.levels(), reasons, r.criteria(),
+                r.flaggedClusters(), r.flaggedSamples(), r.linkages(), r.agreement(), r.rule());
+        List<String> shown = ReportModel.of(s.evidence(), odd, s.run()).decision().reasons();
+        assertEquals("Not every cluster is stable: cluster 2 (15 samples) is not assessed with mean Jaccard –.",
+                shown.get(shown.size() - 1));
+    }
+
+    @Test
     void cautionSaysFitIsNotValidation() {
         for (Studies.Study s : List.of(Studies.separated(), Studies.noise())) {
             String c = s.model().caution();
