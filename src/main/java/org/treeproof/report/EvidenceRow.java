@@ -1,0 +1,56 @@
+package org.treeproof.report;
+
+import java.util.Objects;
+import org.treeproof.study.CutHeight;
+import org.treeproof.study.Verdict;
+
+/**
+ * One line of the evidence table: one linkage cut into k clusters. Values that were not computed are
+ * {@code NaN} (the null-data columns without null calibration, the feature-space indices and the gap statistic
+ * without a data table).
+ *
+ * @param k                the number of clusters
+ * @param cutHeight        the heights that give k clusters, in the metric's units
+ * @param tieDependent     true when tied merge heights make the k clusters depend on tie order
+ * @param ariMean          mean adjusted Rand index of the replicates with the full-data solution
+ * @param ariLow           its 95% percentile interval, lower end
+ * @param ariHigh          its 95% percentile interval, upper end
+ * @param replicates       replicates behind the ARI summary
+ * @param nullAriMean      mean over null data sets of their mean ARI
+ * @param nullAriLow       2.5% quantile of the null sets' mean ARI
+ * @param nullAriHigh      97.5% quantile of the null sets' mean ARI
+ * @param pValueAri        Monte Carlo p-value of the observed mean ARI against the null sets
+ * @param pac              proportion of ambiguous clustering of the consensus matrix
+ * @param nullPac          mean PAC over the null sets
+ * @param pValuePac        Monte Carlo p-value of the observed PAC against the null sets
+ * @param worstJaccard     the smallest mean Jaccard over the clusters
+ * @param silhouette       average silhouette width
+ * @param calinskiHarabasz Calinski-Harabasz index
+ * @param daviesBouldin    Davies-Bouldin index
+ * @param dunn             Dunn index
+ * @param gap              Gap(k)
+ * @param gapSE            s_k
+ * @param verdict          the decision rule's verdict on this solution alone
+ * @param recommended      true for the recommended solution
+ */
+public record EvidenceRow(int k, CutHeight cutHeight, boolean tieDependent, double ariMean, double ariLow,
+        double ariHigh, int replicates, double nullAriMean, double nullAriLow, double nullAriHigh, double pValueAri,
+        double pac, double nullPac, double pValuePac, double worstJaccard, double silhouette, double calinskiHarabasz,
+        double daviesBouldin, double dunn, double gap, double gapSE, Verdict verdict, boolean recommended) {
+
+    public EvidenceRow {
+        Objects.requireNonNull(cutHeight, "cutHeight");
+        Objects.requireNonNull(verdict, "verdict");
+        if (k < 2) {
+            throw new IllegalArgumentException("evidence rows start at k = 2, got " + k);
+        }
+        if (recommended && verdict == Verdict.UNSUPPORTED) {
+            throw new IllegalArgumentException("an unsupported solution cannot be the recommended one");
+        }
+    }
+
+    /** Whether null calibration was run for this row. */
+    public boolean calibrated() {
+        return !Double.isNaN(pValueAri);
+    }
+}

@@ -1,0 +1,78 @@
+package org.treeproof.report;
+
+import java.util.Objects;
+
+/**
+ * A published source the report cites: how it is cited in the text, the full entry, and its DOI.
+ *
+ * <p>The entries are those cited in the javadoc of the classes that implement each method; Şenbabaoğlu et al. and
+ * Ward were checked against the publishers' pages, the rest are as the implementing classes cite them.
+ *
+ * @param cite  the citation in running text, e.g. "Hubert &amp; Arabie, 1985"
+ * @param entry the full entry without the DOI
+ * @param doi   the DOI, without a resolver prefix
+ */
+public record Reference(String cite, String entry, String doi) {
+    public Reference {
+        Objects.requireNonNull(cite, "cite");
+        Objects.requireNonNull(entry, "entry");
+        Objects.requireNonNull(doi, "doi");
+    }
+
+    /** The citation as the subject of a sentence: "Hubert &amp; Arabie (1985)". */
+    public String narrative() {
+        int comma = cite.lastIndexOf(", ");
+        return cite.substring(0, comma) + " (" + cite.substring(comma + 2) + ")";
+    }
+
+    /** The DOI as a resolvable address. */
+    public String url() {
+        return "https://doi.org/" + doi;
+    }
+
+    static final Reference HUBERT_ARABIE = new Reference("Hubert & Arabie, 1985",
+            "Hubert, L. & Arabie, P. (1985). Comparing partitions. Journal of Classification, 2, 193–218.",
+            "10.1007/BF01908075");
+    static final Reference MONTI = new Reference("Monti et al., 2003",
+            "Monti, S., Tamayo, P., Mesirov, J. & Golub, T. (2003). Consensus clustering: a resampling-based method "
+                    + "for class discovery and visualization of gene expression microarray data. Machine Learning, 52, "
+                    + "91–118.", "10.1023/A:1023949509487");
+    static final Reference SENBABAOGLU = new Reference("Şenbabaoğlu et al., 2014",
+            "Şenbabaoğlu, Y., Michailidis, G. & Li, J. Z. (2014). Critical limitations of consensus clustering in "
+                    + "class discovery. Scientific Reports, 4, 6207.", "10.1038/srep06207");
+    static final Reference HENNIG = new Reference("Hennig, 2007",
+            "Hennig, C. (2007). Cluster-wise assessment of cluster stability. Computational Statistics & Data "
+                    + "Analysis, 52, 258–271.", "10.1016/j.csda.2006.11.025");
+    static final Reference ROUSSEEUW = new Reference("Rousseeuw, 1987",
+            "Rousseeuw, P. J. (1987). Silhouettes: a graphical aid to the interpretation and validation of cluster "
+                    + "analysis. Journal of Computational and Applied Mathematics, 20, 53–65.",
+            "10.1016/0377-0427(87)90125-7");
+    static final Reference TIBSHIRANI = new Reference("Tibshirani et al., 2001",
+            "Tibshirani, R., Walther, G. & Hastie, T. (2001). Estimating the number of clusters in a data set via the "
+                    + "gap statistic. Journal of the Royal Statistical Society: Series B, 63, 411–423.",
+            "10.1111/1467-9868.00293");
+    static final Reference KAUFMAN_ROUSSEEUW = new Reference("Kaufman & Rousseeuw, 1990",
+            "Kaufman, L. & Rousseeuw, P. J. (1990). Finding Groups in Data: An Introduction to Cluster Analysis. "
+                    + "Wiley, New York.", "10.1002/9780470316801");
+    static final Reference CALINSKI_HARABASZ = new Reference("Caliński & Harabasz, 1974",
+            "Caliński, T. & Harabasz, J. (1974). A dendrite method for cluster analysis. Communications in "
+                    + "Statistics, 3, 1–27.", "10.1080/03610927408827101");
+    static final Reference DAVIES_BOULDIN = new Reference("Davies & Bouldin, 1979",
+            "Davies, D. L. & Bouldin, D. W. (1979). A cluster separation measure. IEEE Transactions on Pattern "
+                    + "Analysis and Machine Intelligence, 1, 224–227.", "10.1109/TPAMI.1979.4766909");
+    static final Reference DUNN = new Reference("Dunn, 1974",
+            "Dunn, J. C. (1974). Well-separated clusters and optimal fuzzy partitions. Journal of Cybernetics, 4, "
+                    + "95–104.", "10.1080/01969727408546059");
+    static final Reference HOPE = new Reference("Hope, 1968",
+            "Hope, A. C. A. (1968). A simplified Monte Carlo significance test procedure. Journal of the Royal "
+                    + "Statistical Society: Series B, 30, 582–598.", "10.1111/j.2517-6161.1968.tb00759.x");
+    static final Reference MULLNER = new Reference("Müllner, 2011",
+            "Müllner, D. (2011). Modern hierarchical, agglomerative clustering algorithms. arXiv:1109.2378.",
+            "10.48550/arXiv.1109.2378");
+    static final Reference WARD = new Reference("Ward, 1963",
+            "Ward, J. H. (1963). Hierarchical grouping to optimize an objective function. Journal of the American "
+                    + "Statistical Association, 58, 236–244.", "10.1080/01621459.1963.10500845");
+    static final Reference MURTAGH_LEGENDRE = new Reference("Murtagh & Legendre, 2014",
+            "Murtagh, F. & Legendre, P. (2014). Ward's hierarchical agglomerative clustering method: which algorithms "
+                    + "implement Ward's criterion? Journal of Classification, 31, 274–295.", "10.1007/s00357-014-9161-z");
+}

@@ -1,0 +1,199 @@
+package org.treeproof.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.treeproof.report.Fixtures.assertPrinted;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.junit.jupiter.api.Test;
+import org.treeproof.score.JaccardStability;
+import org.treeproof.study.ClusterEvidence;
+import org.treeproof.study.KEvidence;
+import org.treeproof.study.LinkageEvidence;
+import org.treeproof.study.NullStability;
+import org.treeproof.study.Recommendation;
+
+class MethodsParagraphTest {
+    private static final String NUM = "(-?[0-9]+(?:\\.[0-9]+)?(?:e[+-][0-9]+)?)";
+
+    private static Matcher find(String text, String regex) {
+        Matcher m = Pattern.compile(regex).matcher(text);
+        assertTrue(m.find(), "no match for /" + regex + "/ in:\n" + text);
+        return m;
+    }
+
+    private static KEvidence chosen(Studies.Study s) {
+        Recommendation r = s.recommendation();
+        return s.evidence().linkages().stream().filter(l -> l.linkage() == r.linkage()).findFirst().orElseThrow()
+                .at(r.k());
+    }
+
+    @Test
+    void theChosenSolutionsFiguresEqualTheEvidenceAtThePrintedPrecision() {
+        for (Studies.Study s : List.of(Studies.separated(), Studies.bridged())) {
+            String md = MethodsParagraph.of(s.model()).render();
+            KEvidence e = chosen(s);
+            NullStability n = e.stability().nullModel();
+            Matcher cut = find(md, "k = " + e.k() + " clusters with \\S+ linkage \\(tree cut at height " + NUM
+                    + "; every height from " + NUM + " up to " + NUM + " gives the same clusters\\)");
+            assertPrinted(cut.group(1), e.cutHeight().chosen(), "cut height");
+            assertPrinted(cut.group(2), e.cutHeight().low(), "lowest height");
+            assertPrinted(cut.group(3), e.cutHeight().high(), "highest height");
+            Matcher ari = find(md, "Across the ([0-9]+) replicates the mean ARI was " + NUM + " \\(95% interval " + NUM
+                    + " to " + NUM + "\\) against " + NUM + " on null data \\(Monte Carlo p = " + NUM + "\\); PAC was "
+                    + NUM + " \\(" + NUM + " on null data\\)");
+            assertEquals(e.stability().ari().count(), Integer.parseInt(ari.group(1)));
+            assertPrinted(ari.group(2), e.stability().ari().mean(), "mean ARI");
+            assertPrinted(ari.group(3), e.stability().ari().low(), "ARI interval low");
+            assertPrinted(ari.group(4), e.stability().ari().high(), "ARI interval high");
+            assertPrinted(ari.group(5), n.ariMean(), "null mean ARI");
+            assertPrinted(ari.group(6), n.pValueAri(), "p-value");
+            assertPrinted(ari.group(7), e.stability().pac(), "PAC");
+            assertPrinted(ari.group(8), n.pacMean(), "null PAC");
+            Matcher fit = find(md, "The smallest cluster Jaccard was " + NUM + " and the average silhouette " + NUM);
+            assertPrinted(fit.group(1), e.worstJaccard(), "smallest Jaccard");
+            assertPrinted(fit.group(2), e.silhouette(), "silhouette");
+            LinkageEvidence le = s.evidence().linkages().stream()
+                    .filter(l -> l.linkage() == s.recommendation().linkage()).findFirst().orElseThrow();
+            assertEquals(le.gapChoice(), Integer.parseInt(find(md, "The gap statistic chose k = ([0-9]+)").group(1)));
+        }
+    }
+
+    @Test
+    void theProcedureIsDescribedFromTheSettings() {
+        Studies.Study s = Studies.separated();
+        String md = MethodsParagraph.of(s.model()).render();
+        var st = s.evidence().settings();
+        for (String expected : List.of("treeproof 0.1.0 (seed 11)", "45 samples, 4 features after preparation",
+                "log2(x+1) applied; 2 constant features dropped", "Euclidean distances",
+                "average (UPGMA), complete and Ward linkage", "k = 2 to 5 clusters", "from 20 replicates",
+                "a subsample of 80% of the samples drawn without replacement", "(5 replicates each)",
+                "19 null data sets", "(1 + 19)", "10 reference data sets", "principal axes", "(0.1, 0.9]",
+                "p ≤ 0.05", "mean Jaccard at least 0.75", "above 0.5", "every mean Jaccard above 0.5", "Ward2")) {
+            assertTrue(md.contains(expected), "missing '" + expected + "' in\n" + md);
+        }
+        assertEquals(20, st.replicates());
+        assertTrue(md.contains("The evidence supported k = 3 clusters with average linkage"), md);
+    }
+
+    @Test
+    void everyCriterionIsCitedAndEveryReferenceHasItsDoi() {
+        String md = MethodsParagraph.of(Studies.separated().model()).render();
+        int split = md.indexOf("## References");
+        String text = md.substring(0, split);
+        String refs = md.substring(split);
+        // the criteria's papers, with the DOIs their publishers give
+        String[][] required = {{"Hubert & Arabie, 1985", "10.1007/BF01908075"},
+            {"Monti et al., 2003", "10.1023/A:1023949509487"}, {"Şenbabaoğlu et al., 2014", "10.1038/srep06207"},
+            {"Hennig, 2007", "10.1016/j.csda.2006.11.025"}, {"Rousseeuw, 1987", "10.1016/0377-0427(87)90125-7"},
+            {"Tibshirani et al., 2001", "10.1111/1467-9868.00293"},
+            {"Kaufman & Rousseeuw, 1990", "10.1002/9780470316801"}};
+        for (String[] r : required) {
+            assertTrue(text.contains(r[0]), "not cited: " + r[0]);
+            assertTrue(refs.contains("https://doi.org/" + r[1]), "no DOI for " + r[0]);
+        }
+        List<String> entries = refs.lines().filter(l -> l.startsWith("- ")).toList();
+        for (String entry : entries) {
+            assertTrue(entry.matches(".* https://doi\\.org/10\\.\\S+$"), entry);
+            String firstAuthor = entry.substring(2, entry.indexOf(','));
+            assertTrue(text.contains(firstAuthor), "listed but not cited: " + entry);
+        }
+        var sorted = new ArrayList<>(entries);
+        sorted.sort(java.text.Collator.getInstance(Locale.ENGLISH));
+        assertEquals(sorted, entries);
+    }
+
+    @Test
+    void noConvincingStructureIsSaidPlainlyWithEachLinkagesBestAttempt() {
+        Studies.Study s = Studies.noise();
+        String md = MethodsParagraph.of(s.model()).render();
+        assertTrue(md.contains("No convincing cluster structure was found"), md);
+        assertTrue(md.contains("treated as a single group"), md);
+        assertFalse(md.contains("The evidence supported"));
+        for (LinkageEvidence le : s.evidence().linkages()) {
+            KEvidence best = le.byK().get(0);
+            for (KEvidence e : le.byK()) {
+                best = e.stability().ari().mean() > best.stability().ari().mean() ? e : best;
+            }
+            Matcher m = find(md, "With " + Names.linkage(le.linkage()) + " linkage the most stable cut \\(k = ([0-9]+)\\) "
+                    + "had a mean ARI of " + NUM + " \\(95% interval " + NUM + " to " + NUM + "\\) against " + NUM
+                    + " on null data \\(Monte Carlo p = " + NUM + "\\)");
+            assertEquals(best.k(), Integer.parseInt(m.group(1)));
+            assertPrinted(m.group(2), best.stability().ari().mean(), "mean ARI");
+            assertPrinted(m.group(3), best.stability().ari().low(), "ARI low");
+            assertPrinted(m.group(4), best.stability().ari().high(), "ARI high");
+            assertPrinted(m.group(5), best.stability().nullModel().ariMean(), "null ARI");
+            assertPrinted(m.group(6), best.stability().nullModel().pValueAri(), "p-value");
+        }
+    }
+
+    @Test
+    void aTentativeSolutionSaysWhatHeldItBack() {
+        Studies.Study s = Studies.tentative();
+        String md = MethodsParagraph.of(s.model()).render();
+        KEvidence e = chosen(s);
+        assertTrue(md.contains("tentatively supported k = " + e.k()), md);
+        Matcher m = find(md, "It is tentative because its average silhouette \\(" + NUM + "\\) is not above 0.5");
+        assertPrinted(m.group(1), e.silhouette(), "silhouette");
+    }
+
+    @Test
+    void distancesAloneAndTheBootstrapAreDescribedAsSuch() {
+        String md = MethodsParagraph.of(Studies.distancesOnly().model()).render();
+        assertTrue(md.contains("a matrix of dissimilarities between 45 samples, used as given"), md);
+        assertTrue(md.contains("a bootstrap sample of n = 45 draws with replacement"), md);
+        assertTrue(md.contains("not calibrated against null data"), md);
+        assertTrue(md.contains("It is tentative because, without null calibration"), md);
+        assertFalse(md.contains("Tibshirani"));
+        assertFalse(md.contains("Calinski"));
+        assertFalse(md.contains("Ward"));
+    }
+
+    @Test
+    void eachFlaggedClusterGetsASentence() {
+        ReportModel m = Studies.separated().model();
+        var clusters = new ArrayList<>(m.clusters());
+        ClusterEvidence c = clusters.get(1);
+        clusters.set(1, new ClusterEvidence(c.id(), c.size(), 0.6234, 0.2, 0.35, JaccardStability.Status.DOUBTFUL));
+        String md = MethodsParagraph.of(Fixtures.withClusters(m, clusters)).render();
+        assertTrue(md.contains("Cluster 2 (15 samples) was doubtful: mean Jaccard 0.62; it dissolved in 20% and was "
+                + "recovered in 35% of the replicates."), md);
+        assertFalse(md.contains("Cluster 1 ("));
+    }
+
+    @Test
+    void theTextDependsOnlyOnTheStudyNotOnTheRunsTimingOrLocale() {
+        Studies.Study s = Studies.bridged();
+        String a = MethodsParagraph.of(ReportModel.of(s.evidence(), s.recommendation(),
+                s.run("input.csv", "2024-01-01T00:00:00Z", 1, 3.0))).render();
+        Locale before = Locale.getDefault();
+        String b;
+        try {
+            Locale.setDefault(Locale.GERMANY);
+            b = MethodsParagraph.of(ReportModel.of(s.evidence(), s.recommendation(),
+                    s.run("input.csv", "2031-07-09T12:34:56Z", 2, 97.5))).render();
+        } finally {
+            Locale.setDefault(before);
+        }
+        assertEquals(a, b);
+        assertFalse(a.contains("2024-01-01"));
+        assertFalse(a.matches("(?s).*[0-9],[0-9].*"), "a decimal comma");
+        assertTrue(a.contains("2 samples were flagged"), a);
+    }
+
+    @Test
+    void markupInPreparationStepsIsEscaped() {
+        Studies.Study s = Studies.separated();
+        RunInfo r = s.run();
+        RunInfo marked = new RunInfo(r.toolName(), r.toolVersion(), r.inputFile(), r.inputSha256(), r.samples(),
+                r.features(), List.of("kept the *top* 500 [variable] features_x <b>"), r.metric(), r.commandLine(),
+                r.seed(), r.threads(), r.wallSeconds(), r.generatedAt());
+        String md = MethodsParagraph.of(ReportModel.of(s.evidence(), s.recommendation(), marked)).render();
+        assertTrue(md.contains("kept the \\*top\\* 500 \\[variable\\] features\\_x \\<b\\>"), md);
+    }
+}

@@ -1,0 +1,248 @@
+package org.treeproof.report;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.treeproof.score.JaccardStability;
+import org.treeproof.study.Evidence;
+import org.treeproof.study.KEvidence;
+import org.treeproof.study.LinkageEvidence;
+import org.treeproof.study.NullStability;
+import org.treeproof.study.Recommendation;
+import org.treeproof.study.Recommender;
+import org.treeproof.study.Verdict;
+
+class ReportModelTest {
+
+    private static List<String> ids(ReportModel m) {
+        return m.figures().stream().map(Figure::id).toList();
+    }
+
+    @Test
+    void threeSeparatedGroupsAreSupportedAndEveryFigureIsShown() {
+        Studies.Study s = Studies.separated();
+        ReportModel m = s.model();
+        assertEquals(Verdict.SUPPORTED, m.decision().verdict());
+        assertEquals(3, m.decision().k());
+        assertEquals(s.recommendation().linkage(), m.decision().linkage());
+        assertEquals(s.recommendation().reasons(), m.decision().reasons());
+        assertEquals(Figure.IDS, ids(m));
+        for (Figure f : m.figures()) {
+            assertEquals(f.id() + ".png", f.fileName());
+            assertEquals("charts/" + f.id() + ".png", f.path());
+        }
+        assertTrue(m.notes().isEmpty(), m.notes().toString());
+        assertEquals(3, m.recommendedRow().orElseThrow().k());
+        assertEquals(3, m.clusters().size());
+        assertTrue(m.flaggedClusters().isEmpty());
+        assertTrue(m.nullCalibrated());
+        assertTrue(m.gapComputed());
+        assertTrue(m.hasData());
+        assertTrue(m.decision().criteria().stream().allMatch(Decision.CriterionRow::agrees));
+    }
+
+    @Test
+    void uniformNoiseIsUnsupportedAndTheClusterFiguresAreLeftOutWithANote() {
+        ReportModel m = Studies.noise().model();
+        assertEquals(Verdict.UNSUPPORTED, m.decision().verdict());
+        assertEquals(1, m.decision().k());
+        assertFalse(m.decision().hasClusters());
+        assertTrue(m.recommendedRow().isEmpty());
+        assertTrue(m.clusters().isEmpty());
+        assertTrue(m.flaggedSamples().isEmpty());
+        assertEquals(List.of("dendrogram", "stability", "gap", "linkages", "heatmap"), ids(m));
+        assertTrue(m.notes().stream().anyMatch(n -> n.contains("silhouette") && n.contains("left out")), m.notes().toString());
+        for (EvidenceTable t : m.evidence()) {
+            assertTrue(t.recommended().isEmpty());
+        }
+        assertTrue(m.caution().contains("does not prove that none exists"));
+    }
+
+    @Test
+    void distancesAloneLeaveOutTheGapHeatMapAndNullColumnsAndSaySo() {
+        Studies.Study s = Studies.distancesOnly();
+        ReportModel m = s.model();
+        assertEquals(List.of("dendrogram", "silhouette", "stability", "consensus", "jaccard"), ids(m));
+        assertFalse(m.nullCalibrated());
+        assertFalse(m.gapComputed());
+        assertFalse(m.hasData());
+        // without null calibration nothing can be more than tentative (DecisionRule, step 1)
+        assertEquals(Verdict.TENTATIVE, m.decision().verdict());
+        String notes = String.join(" ", m.notes());
+        assertTrue(notes.contains("gap statistic chart is left out"), notes);
+        assertTrue(notes.contains("heat map is left out"), notes);
+        assertTrue(notes.contains("only one linkage"), notes);
+        for (EvidenceRow r : m.evidence().get(0).rows()) {
+            assertTrue(Double.isNaN(r.calinskiHarabasz()) && Double.isNaN(r.gap()) && Double.isNaN(r.pValueAri()));
+            assertFalse(r.calibrated());
+        }
+    }
+
+    @Test
+    void evidenceRowsCarryTheStudysValuesAndMarkOnlyTheRecommendedSolution() {
+        for (Studies.Study s : List.of(Studies.separated(), Studies.noise(), Studies.tentative())) {
+            Evidence e = s.evidence();
+            Recommendation rec = s.recommendation();
+            Recommender judge = Recommender.of(e, rec.rule());
+            ReportModel m = s.model();
+            int recommended = 0;
+            for (LinkageEvidence le : e.linkages()) {
+                EvidenceTable t = m.table(le.linkage());
+                assertEquals(le.copheneticCorrelation(), t.copheneticCorrelation());
+                assertEquals(le.gapChoice(), t.gapChoice());
+                assertEquals(e.settings().maxK() - 1, t.rows().size());
+                for (KEvidence k : le.byK()) {
+                    EvidenceRow r = t.at(k.k());
+                    NullStability n = k.stability().nullModel();
+                    assertEquals(k.cutHeight(), r.cutHeight());
+                    assertEquals(k.stability().ari().mean(), r.ariMean());
+                    assertEquals(k.stability().ari().low(), r.ariLow());
+                    assertEquals(k.stability().ari().high(), r.ariHigh());
+                    assertEquals(k.stability().ari().count(), r.replicates());
+                    assertEquals(n.ariMean(), r.nullAriMean());
+                    assertEquals(n.pValueAri(), r.pValueAri());
+                    assertEquals(n.pacMean(), r.nullPac());
+                    assertEquals(k.stability().pac(), r.pac());
+                    assertEquals(k.worstJaccard(), r.worstJaccard());
+                    assertEquals(k.silhouette(), r.silhouette());
+                    assertEquals(k.calinskiHarabasz(), r.calinskiHarabasz());
+                    assertEquals(k.daviesBouldin(), r.daviesBouldin());
+                    assertEquals(k.dunn(), r.dunn());
+                    assertEquals(k.gap(), r.gap());
+                    assertEquals(k.gapSE(), r.gapSE());
+                    assertEquals(judge.verdictOf(k), r.verdict());
+                    boolean isRec = rec.k() > 1 && le.linkage() == rec.linkage() && k.k() == rec.k();
+                    assertEquals(isRec, r.recommended());
+                    recommended += r.recommended() ? 1 : 0;
+                }
+            }
+            assertEquals(rec.k() > 1 ? 1 : 0, recommended);
+            LinkageComparison c = m.linkages();
+            assertEquals(rec.linkages().size(), c.rows().size());
+            for (int i = 0; i < c.rows().size(); i++) {
+                assertEquals(rec.linkages().get(i).k(), c.rows().get(i).k());
+                assertEquals(rec.linkages().get(i).verdict(), c.rows().get(i).verdict());
+                assertArrayEquals(rec.agreement()[i], c.agreement()[i]);
+            }
+            assertEquals(1, c.rows().stream().filter(LinkageComparison.Row::recommended).count());
+            assertFalse(c.why().isEmpty());
+        }
+    }
+
+    @Test
+    void clustersAndFlagsAreThoseOfTheRecommendedSolution() {
+        Studies.Study s = Studies.bridged();
+        ReportModel m = s.model();
+        Recommendation rec = s.recommendation();
+        KEvidence chosen = s.evidence().linkages().stream().filter(l -> l.linkage() == rec.linkage()).findFirst()
+                .orElseThrow().at(rec.k());
+        assertEquals(chosen.clusters(), m.clusters());
+        assertEquals(rec.flaggedSamples(), m.flaggedSamples());
+        assertFalse(m.flaggedSamples().isEmpty(), "the samples between two groups are flagged");
+        assertEquals(m.clusters().stream().filter(c -> c.status() != JaccardStability.Status.STABLE).toList(),
+                m.flaggedClusters());
+        assertEquals(chosen.partition(), ReportModel.recommendedPartition(s.evidence(), rec));
+    }
+
+    @Test
+    void unsupportedRecommendsOneGroupOfAllSamples() {
+        Studies.Study s = Studies.noise();
+        var p = ReportModel.recommendedPartition(s.evidence(), s.recommendation());
+        assertEquals(1, p.clusterCount());
+        assertEquals(s.evidence().samples(), p.size());
+    }
+
+    @Test
+    void tentativeSolutionsSayWhyInTheCaution() {
+        ReportModel m = Studies.tentative().model();
+        assertEquals(Verdict.TENTATIVE, m.decision().verdict());
+        assertTrue(m.decision().headline().contains("tentatively"));
+        assertTrue(m.caution().contains("hypotheses"));
+    }
+
+    @Test
+    void aReasonWithANonNumberPrintsTheDash() {
+        Studies.Study s = Studies.separated();
+        Recommendation r = s.recommendation();
+        var reasons = new java.util.ArrayList<>(r.reasons());
+        reasons.add("Not every cluster is stable: cluster 2 (15 samples) is not assessed with mean Jaccard NaN.");
+        var odd = new Recommendation(r.linkage(), r.k(), r.cutHeight(), r.verdict(), r.levels(), reasons, r.criteria(),
+                r.flaggedClusters(), r.flaggedSamples(), r.linkages(), r.agreement(), r.rule());
+        List<String> shown = ReportModel.of(s.evidence(), odd, s.run()).decision().reasons();
+        assertEquals("Not every cluster is stable: cluster 2 (15 samples) is not assessed with mean Jaccard –.",
+                shown.get(shown.size() - 1));
+    }
+
+    @Test
+    void cautionSaysFitIsNotValidation() {
+        for (Studies.Study s : List.of(Studies.separated(), Studies.noise())) {
+            String c = s.model().caution();
+            assertTrue(c.contains("not validation of subtypes"), c);
+            assertTrue(c.contains("independent data"), c);
+            assertTrue(c.contains("clinical"), c);
+        }
+    }
+
+    @Test
+    void everyEffectiveSettingIsListed() {
+        ReportModel m = Studies.separated().model();
+        var values = m.effectiveSettings().stream().collect(java.util.stream.Collectors.toMap(ReportModel.Setting::name,
+                ReportModel.Setting::value));
+        assertEquals("average, complete, ward", values.get("Linkages compared"));
+        assertEquals("euclidean", values.get("Dissimilarity (metric)"));
+        assertEquals("2 to 5", values.get("Numbers of clusters assessed"));
+        assertEquals("20", values.get("Stability replicates"));
+        assertEquals("subsample", values.get("Resampling of samples"));
+        assertEquals("0.8", values.get("Sample fraction"));
+        assertTrue(values.get("Feature fraction").startsWith("1 "));
+        assertEquals("10", values.get("Gap statistic reference sets"));
+        assertEquals("principal-box", values.get("Gap statistic reference data"));
+        assertEquals("19", values.get("Null data sets"));
+        assertEquals("5", values.get("Replicates per null data set"));
+        assertEquals("(0.1, 0.9]", values.get("PAC interval"));
+        assertEquals("11", values.get("Seed"));
+        assertEquals("0.05", values.get("Null test level (p at most)"));
+        assertEquals("0.75", values.get("Stable cluster (mean Jaccard at least)"));
+        assertEquals("0.5", values.get("Dissolved cluster (mean Jaccard at most)"));
+        // one line per component of StudySettings and of DecisionRule, the PAC interval's two ends sharing one:
+        // a setting added to either record without a line here fails this count
+        int components = org.treeproof.study.StudySettings.class.getRecordComponents().length
+                + org.treeproof.study.DecisionRule.class.getRecordComponents().length;
+        assertEquals(components - 1, m.effectiveSettings().size());
+    }
+
+    @Test
+    void partsOfDifferentStudiesAreRefused() {
+        Studies.Study a = Studies.separated();
+        Studies.Study b = Studies.noise();
+        assertThrows(IllegalArgumentException.class, () -> ReportModel.of(b.evidence(), a.recommendation(), b.run()));
+        assertThrows(IllegalArgumentException.class, () -> ReportModel.of(a.evidence(), a.recommendation(), b.run()));
+        RunInfo r = a.run();
+        RunInfo otherSeed = new RunInfo(r.toolName(), r.toolVersion(), r.inputFile(), r.inputSha256(), r.samples(),
+                r.features(), r.preparation(), r.metric(), r.commandLine(), r.seed() + 1, r.threads(), r.wallSeconds(),
+                r.generatedAt());
+        assertThrows(IllegalArgumentException.class, () -> ReportModel.of(a.evidence(), a.recommendation(), otherSeed));
+        RunInfo otherMetric = new RunInfo(r.toolName(), r.toolVersion(), r.inputFile(), r.inputSha256(), r.samples(),
+                r.features(), r.preparation(), "manhattan", r.commandLine(), r.seed(), r.threads(), r.wallSeconds(),
+                r.generatedAt());
+        assertThrows(IllegalArgumentException.class, () -> ReportModel.of(a.evidence(), a.recommendation(), otherMetric));
+        int n = a.evidence().samples();
+        // a comparison made for one cluster cannot belong to the three-cluster decision
+        var oneCluster = LabelComparison.of(org.treeproof.partition.Partition.of(new int[n]), twoClassLabels(n));
+        assertThrows(IllegalArgumentException.class,
+                () -> ReportModel.of(a.evidence(), a.recommendation(), a.run(), oneCluster));
+    }
+
+    private static String[] twoClassLabels(int n) {
+        String[] l = new String[n];
+        for (int i = 0; i < n; i++) {
+            l[i] = i % 2 == 0 ? "even" : "odd";
+        }
+        return l;
+    }
+}
