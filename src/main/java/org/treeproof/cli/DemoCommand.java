@@ -50,12 +50,15 @@ final class DemoCommand implements Callable<Integer> {
             throw new org.treeproof.data.InputException("--data " + table + ": not a demo table; use yeast-batches.csv, "
                     + "single-strain-batches.csv or nested-strains.csv");
         }
-        Path dir = Files.createTempDirectory("treeproof-demo-input");
-        try {
+        // The demo table is unpacked beside the output (kept, so that the report's input file can be opened).
+        Path dir = out.toAbsolutePath().normalize().resolveSibling(out.getFileName() + "-input");
+        Files.createDirectories(dir);
+        {
             Path data = copy(table, dir);
             Path labels = copy(table.replace(".csv", "-truth.csv"), dir);
-            var args = new ArrayList<>(List.of("assess", data.toString(), "--log2", "--out", out.toString(),
-                    "--labels", labels.toString()));
+            Path cwd = Path.of("").toAbsolutePath();
+            var args = new ArrayList<>(List.of("assess", relative(cwd, data), "--log2", "--out", out.toString(),
+                    "--labels", relative(cwd, labels)));
             if (force) {
                 args.add("--force");
             }
@@ -69,14 +72,11 @@ final class DemoCommand implements Callable<Integer> {
             System.out.println("treeproof demo: assessing the bundled table " + table + " (invented data; see "
                     + "demo-data/README.md)");
             return Main.run(args.toArray(String[]::new));
-        } finally {
-            try (var files = Files.list(dir)) {
-                for (Path p : files.toList()) {
-                    Files.deleteIfExists(p);
-                }
-            }
-            Files.deleteIfExists(dir);
         }
+    }
+
+    private static String relative(Path cwd, Path p) {
+        return p.startsWith(cwd) ? cwd.relativize(p).toString() : p.toString();
     }
 
     private static Path copy(String name, Path dir) {

@@ -1,19 +1,29 @@
 package org.treeproof.cli;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.time.ZonedDateTime;
+import java.time.format.DateTimeFormatter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.TreeSet;
 import org.treeproof.data.Preparation;
 import org.treeproof.io.CsvOutputs;
 import org.treeproof.io.LoadedInput;
 import org.treeproof.io.OutputDirectory;
 import org.treeproof.io.SummaryJson;
-import org.treeproof.partition.ContingencyTable;
-import org.treeproof.partition.Partition;
-import org.treeproof.score.AdjustedRandIndex;
+import org.treeproof.chart.Figure;
+import org.treeproof.chart.StudyCharts;
+import org.treeproof.data.DataMatrix;
+import org.treeproof.report.EmbeddedImage;
+import org.treeproof.report.HtmlReport;
+import org.treeproof.report.LabelComparison;
+import org.treeproof.report.MethodsParagraph;
+import org.treeproof.report.ReportModel;
+import org.treeproof.report.RunInfo;
 import org.treeproof.study.Evidence;
 import org.treeproof.study.Recommendation;
 
@@ -40,32 +50,14 @@ final class StudyOutputs {
         this.seconds = seconds;
     }
 
-    /** The recommended partition on all samples (one cluster for k = 1). */
-    Partition recommendedPartition() {
-        if (rec.k() == 1) {
-            return new Partition(new int[evidence.samples()], 1);
-        }
-        return evidence.linkages().stream().filter(l -> l.linkage() == rec.linkage()).findFirst().orElseThrow()
-                .at(rec.k()).partition();
+    LabelComparison labels() {
+        return classes == null ? null
+                : LabelComparison.of(ReportModel.recommendedPartition(evidence, rec), classes);
     }
 
-    SummaryJson.LabelsSummary labelsSummary() {
-        if (classes == null) {
-            return null;
-        }
-        List<String> names = new ArrayList<>(new TreeSet<>(List.of(classes)));
-        int[] codes = new int[classes.length];
-        for (int i = 0; i < classes.length; i++) {
-            codes[i] = names.indexOf(classes[i]);
-        }
-        Partition clusters = recommendedPartition();
-        Partition known = Partition.of(codes);
-        double ari = AdjustedRandIndex.of(clusters, known).compute().value();
-        int[][] table = new int[clusters.clusterCount()][names.size()];
-        for (int i = 0; i < codes.length; i++) {
-            table[clusters.label(i)][codes[i]]++;
-        }
-        return new SummaryJson.LabelsSummary(labelsFile.toString(), ari, names, table);
+    SummaryJson.LabelsSummary labelsSummary(LabelComparison l) {
+        return l == null ? null : new SummaryJson.LabelsSummary(labelsFile.toString(), l.ari(), l.classNames(),
+                l.table());
     }
 
     List<String> preparationSteps() {
@@ -86,16 +78,42 @@ final class StudyOutputs {
         return o;
     }
 
-    SummaryJson summary() {
+    SummaryJson summary(LabelComparison labels) {
         var provenance = new SummaryJson.Provenance("treeproof", Main.toolVersion(), loaded.source().path(),
-                loaded.source().sha256(), preparationSteps(), inputOptions(), labelsSummary());
+                loaded.source().sha256(), preparationSteps(), inputOptions(), labelsSummary(labels));
         return new SummaryJson(evidence, rec, provenance);
     }
 
+    RunInfo runInfo() {
+        return new RunInfo("treeproof", Main.toolVersion(), loaded.source().path(), loaded.source().sha256(),
+                evidence.samples(), evidence.features(), preparationSteps(), evidence.settings().metric().id(),
+                String.join(" ", commandLine), evidence.settings().seed(), threads, seconds,
+                DateTimeFormatter.ISO_OFFSET_DATE_TIME.format(ZonedDateTime.now().withNano(0)));
+    }
+
+    /** Writes every output into the (staging) directory. */
     void writeInto(OutputDirectory dir) {
-        dir.write("summary.json", summary().toBytes());
+        LabelComparison labels = labels();
+        dir.write("summary.json", summary(labels).toBytes());
         dir.write("clusters.csv", CsvOutputs.clusters(evidence, rec).getBytes(StandardCharsets.UTF_8));
         dir.write("scores.csv", CsvOutputs.scores(evidence, rec).getBytes(StandardCharsets.UTF_8));
+        ReportModel model = ReportModel.of(evidence, rec, runInfo(), labels);
+        dir.write("methods.md", MethodsParagraph.of(model).render().getBytes(StandardCharsets.UTF_8));
+        List<EmbeddedImage> images = new ArrayList<>();
+        try {
+            Path charts = dir.file("charts/.keep").getParent();
+            Files.deleteIfExists(charts.resolve(".keep"));
+            DataMatrix data = loaded.matrix().orElse(null);
+            for (Figure f : StudyCharts.drawAll(evidence, rec, data, charts, threads)) {
+                String png = f.files().stream().filter(n -> n.endsWith(".png")).findFirst().orElse(null);
+                if (png != null && model.figure(f.id()).isPresent()) {
+                    images.add(new EmbeddedImage(f.id(), "image/png", Files.readAllBytes(charts.resolve(png))));
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the charts", e);
+        }
+        dir.write("report.html", HtmlReport.of(model, images).render().getBytes(StandardCharsets.UTF_8));
     }
 
     /** One line for the terminal: the verdict and the decision. */

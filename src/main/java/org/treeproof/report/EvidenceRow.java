@@ -20,6 +20,8 @@ import org.treeproof.study.Verdict;
  * @param nullAriLow       2.5% quantile of the null sets' mean ARI
  * @param nullAriHigh      97.5% quantile of the null sets' mean ARI
  * @param pValueAri        Monte Carlo p-value of the observed mean ARI against the null sets
+ * @param nullSilhouette   mean over null data sets of the average silhouette of their own cut at this k
+ * @param pValueCombined   Monte Carlo p-value of mean ARI + average silhouette, the test the decision rule uses
  * @param pac              proportion of ambiguous clustering of the consensus matrix
  * @param nullPac          mean PAC over the null sets
  * @param pValuePac        Monte Carlo p-value of the observed PAC against the null sets
@@ -35,7 +37,7 @@ import org.treeproof.study.Verdict;
  */
 public record EvidenceRow(int k, CutHeight cutHeight, boolean tieDependent, double ariMean, double ariLow,
         double ariHigh, int replicates, double nullAriMean, double nullAriLow, double nullAriHigh, double pValueAri,
-        double pac, double nullPac, double pValuePac, double worstJaccard, double silhouette, double calinskiHarabasz,
+        double pac, double nullPac, double pValuePac, double nullSilhouette, double pValueCombined, double worstJaccard, double silhouette, double calinskiHarabasz,
         double daviesBouldin, double dunn, double gap, double gapSE, Verdict verdict, boolean recommended) {
 
     public EvidenceRow {

@@ -42,7 +42,8 @@ final class HtmlTables {
                 + "clusters, with the replicates' 95%% interval; PAC is the share of sample pairs clustered together "
                 + "in some replicates and apart in others (consensus in (%s, %s]); the smallest Jaccard is the least "
                 + "stable cluster's mean best match. Null columns are the same measures on data without clusters, "
-                + "and p is the Monte Carlo p-value of the observed mean ARI against them. Cut heights are in the "
+                + "and p is the Monte Carlo p-value of the observed value against them; the decision rule tests mean ARI plus "
+                + "average silhouette (stability plus separation). Cut heights are in the "
                 + "units of the dissimilarity.", model.settings().replicates(), Numbers.plain(model.settings().pacLow()),
                 Numbers.plain(model.settings().pacHigh())));
         boolean tie = false;
@@ -52,7 +53,8 @@ final class HtmlTables {
                     Numbers.fixed(t.copheneticCorrelation(), 3), t.monotone() ? ""
                             : "; the tree has inversions, so each row is the state after the first n − k merges"),
                     "#k", "#Cut height", "#Range giving k", "#Mean ARI [95% interval]", "#Null ARI [95% range]",
-                    "#p (ARI)", "#PAC", "#Null PAC", "#Smallest Jaccard", "#Silhouette", "#Calinski-Harabasz",
+                    "#p (ARI)", "#PAC", "#Null PAC", "#Smallest Jaccard", "#Silhouette", "#Null silhouette",
+                    "#p (ARI + silhouette)", "#Calinski-Harabasz",
                     "#Davies-Bouldin", "#Dunn", "#Gap ± s_k", "Verdict");
             for (EvidenceRow r : t.rows()) {
                 h.open("tr", "class", r.recommended() ? "recommended" : null);
@@ -63,6 +65,7 @@ final class HtmlTables {
                         .num(interval(r.nullAriMean(), r.nullAriLow(), r.nullAriHigh())).num(Numbers.p(r.pValueAri()))
                         .num(Numbers.fixed(r.pac(), 3)).num(Numbers.fixed(r.nullPac(), 3))
                         .num(Numbers.fixed(r.worstJaccard(), 2)).num(Numbers.fixed(r.silhouette(), 2))
+                        .num(Numbers.fixed(r.nullSilhouette(), 2)).num(Numbers.p(r.pValueCombined()))
                         .num(Numbers.scaled(r.calinskiHarabasz())).num(Numbers.fixed(r.daviesBouldin(), 2))
                         .num(Numbers.fixed(r.dunn(), 3)).num(Double.isFinite(r.gap()) ? Numbers.fixed(r.gap(), 3)
                                 + " ± " + Numbers.fixed(r.gapSE(), 3) : Numbers.MISSING);

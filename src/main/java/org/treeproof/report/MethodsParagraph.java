@@ -77,16 +77,16 @@ public final class MethodsParagraph {
         var out = new ArrayList<String>();
         out.add(f("Samples were clustered hierarchically with %s %s (seed %d).", md(run.toolName()),
                 md(run.toolVersion()), s.seed()));
-        String steps = String.join("; ", run.preparation().stream().map(MethodsParagraph::md).toList());
+        String steps = String.join(" ", run.preparation().stream().map(MethodsParagraph::md).toList());
         if (model.hasData()) {
             out.add(run.preparation().isEmpty()
                     ? f("The data (%d samples, %d features) were used as given.", run.samples(), run.features())
-                    : f("The data (%d samples, %d features after preparation) were prepared as follows: %s.",
+                    : f("The data (%d samples, %d features after preparation) were prepared in these steps. %s",
                             run.samples(), run.features(), steps));
             out.add(f("Dissimilarities between samples were %s.", Names.metricProse(s.metric())));
         } else {
             out.add(f("The input was a matrix of dissimilarities between %d samples%s.", run.samples(),
-                    run.preparation().isEmpty() ? ", used as given" : ", prepared as follows: " + steps));
+                    run.preparation().isEmpty() ? ", used as given" : ". " + steps));
         }
         out.add(f("Trees were built with %s linkage by the algorithms of %s, and each tree was cut into k = 2 to %d "
                 + "clusters.%s", Prose.and(s.linkages().stream().map(Names::linkageProse).toList()), narrative(c,
@@ -141,14 +141,17 @@ public final class MethodsParagraph {
         String kr = model.nullCalibrated() ? cite(c, Reference.KAUFMAN_ROUSSEEUW)
                 : narrative(c, Reference.KAUFMAN_ROUSSEEUW);
         if (model.nullCalibrated()) {
-            return f("A solution was called supported when its mean ARI exceeded the null data's (p ≤ %s), every cluster "
-                    + "was stable (mean Jaccard at least %s; %s) and its average silhouette was above %s (%s); "
-                    + "tentative when its stability exceeded the null and no cluster dissolved (every mean Jaccard above "
-                    + "%s) but the other conditions were not met; and unsupported otherwise. Among the eligible "
-                    + "solutions the better verdict was preferred, then the higher average silhouette, the higher "
-                    + "smallest cluster Jaccard and the higher cophenetic correlation.", Numbers.plain(r.alpha()),
+            return f("A solution was eligible when it beat the null data on stability plus separation (its mean ARI plus "
+                    + "its average silhouette width exceeded that of the null data sets, each clustered and resampled "
+                    + "the same way; Monte Carlo p ≤ %s), its mean ARI was at least %s, and no cluster dissolved (every "
+                    + "mean Jaccard above %s). An eligible solution was called supported when, in addition, every "
+                    + "cluster was stable (mean Jaccard at least %s; %s) and its average silhouette was above %s (%s); "
+                    + "tentative otherwise; when no solution was eligible the verdict was unsupported (k = 1). Among the "
+                    + "eligible solutions the better verdict was preferred, then the higher average silhouette, the "
+                    + "higher smallest cluster Jaccard and the higher cophenetic correlation.", Numbers.plain(r.alpha()),
+                    Numbers.plain(r.stableJaccard()), Numbers.plain(r.dissolvedJaccard()),
                     Numbers.plain(r.stableJaccard()), Reference.HENNIG.cite(), Numbers.plain(r.reasonableSilhouette()),
-                    kr, Numbers.plain(r.dissolvedJaccard()));
+                    kr);
         }
         return f("Without null calibration a solution was eligible when its mean ARI was at least %s and no cluster "
                 + "dissolved (every mean Jaccard above %s; %s), and could be called no more than tentative; the "
@@ -228,8 +231,9 @@ public final class MethodsParagraph {
         String s = f("mean ARI " + verb + " %s (95%% interval %s to %s)", Numbers.fixed(r.ariMean(), 2), Numbers.fixed(r.ariLow(), 2),
                 Numbers.fixed(r.ariHigh(), 2));
         if (r.calibrated()) {
-            s += f(" against %s on null data (Monte Carlo p = %s)", Numbers.fixed(r.nullAriMean(), 2),
-                    Numbers.p(r.pValueAri()));
+            s += f(" against %s on null data (Monte Carlo p = %s); mean ARI plus average silhouette beat the null data "
+                    + "with p = %s", Numbers.fixed(r.nullAriMean(), 2), Numbers.p(r.pValueAri()),
+                    Numbers.p(r.pValueCombined()));
         }
         return s;
     }

@@ -83,7 +83,8 @@ final class ModelFactory {
                     e.stability().ari().low(), e.stability().ari().high(), e.stability().ari().count(),
                     n == null ? nan : n.ariMean(), n == null ? nan : n.ariLow(), n == null ? nan : n.ariHigh(),
                     n == null ? nan : n.pValueAri(), e.stability().pac(), n == null ? nan : n.pacMean(),
-                    n == null ? nan : n.pValuePac(), e.worstJaccard(), e.silhouette(), e.calinskiHarabasz(),
+                    n == null ? nan : n.pValuePac(), n == null ? nan : n.silhouetteMean(),
+                    n == null ? nan : n.pValueCombined(), e.worstJaccard(), e.silhouette(), e.calinskiHarabasz(),
                     e.daviesBouldin(), e.dunn(), e.gap(), e.gapSE(), v, recommended));
         }
         return new EvidenceTable(le.linkage(), le.copheneticCorrelation(), le.tree().monotone(), le.gapChoice(),

@@ -172,8 +172,10 @@ class HtmlReportTest {
         assertPrinted(cells.get(6).text(), e.stability().pac(), "PAC");
         assertPrinted(cells.get(8).text(), e.worstJaccard(), "smallest Jaccard");
         assertPrinted(cells.get(9).text(), e.silhouette(), "silhouette");
-        assertPrinted(cells.get(12).text(), e.dunn(), "Dunn");
-        String[] gap = cells.get(13).text().split(" ± ");
+        assertPrinted(cells.get(10).text(), e.stability().nullModel().silhouetteMean(), "null silhouette");
+        assertPrinted(cells.get(11).text(), e.stability().nullModel().pValueCombined(), "p (ARI + silhouette)");
+        assertPrinted(cells.get(14).text(), e.dunn(), "Dunn");
+        String[] gap = cells.get(15).text().split(" ± ");
         assertPrinted(gap[0], e.gap(), "gap");
         assertPrinted(gap[1], e.gapSE(), "s_k");
         assertTrue(cells.last().text().contains("recommended"));

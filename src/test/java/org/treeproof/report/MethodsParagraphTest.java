@@ -45,16 +45,18 @@ class MethodsParagraphTest {
             assertPrinted(cut.group(2), e.cutHeight().low(), "lowest height");
             assertPrinted(cut.group(3), e.cutHeight().high(), "highest height");
             Matcher ari = find(md, "Across the ([0-9]+) replicates the mean ARI was " + NUM + " \\(95% interval " + NUM
-                    + " to " + NUM + "\\) against " + NUM + " on null data \\(Monte Carlo p = " + NUM + "\\); PAC was "
-                    + NUM + " \\(" + NUM + " on null data\\)");
+                    + " to " + NUM + "\\) against " + NUM + " on null data \\(Monte Carlo p = " + NUM + "\\); mean ARI plus "
+                    + "average silhouette beat the null data with p = " + NUM + "; PAC was " + NUM + " \\(" + NUM
+                    + " on null data\\)");
             assertEquals(e.stability().ari().count(), Integer.parseInt(ari.group(1)));
             assertPrinted(ari.group(2), e.stability().ari().mean(), "mean ARI");
             assertPrinted(ari.group(3), e.stability().ari().low(), "ARI interval low");
             assertPrinted(ari.group(4), e.stability().ari().high(), "ARI interval high");
             assertPrinted(ari.group(5), n.ariMean(), "null mean ARI");
             assertPrinted(ari.group(6), n.pValueAri(), "p-value");
-            assertPrinted(ari.group(7), e.stability().pac(), "PAC");
-            assertPrinted(ari.group(8), n.pacMean(), "null PAC");
+            assertPrinted(ari.group(7), n.pValueCombined(), "combined p-value");
+            assertPrinted(ari.group(8), e.stability().pac(), "PAC");
+            assertPrinted(ari.group(9), n.pacMean(), "null PAC");
             Matcher fit = find(md, "The smallest cluster Jaccard was " + NUM + " and the average silhouette " + NUM);
             assertPrinted(fit.group(1), e.worstJaccard(), "smallest Jaccard");
             assertPrinted(fit.group(2), e.silhouette(), "silhouette");
@@ -70,11 +72,11 @@ class MethodsParagraphTest {
         String md = MethodsParagraph.of(s.model()).render();
         var st = s.evidence().settings();
         for (String expected : List.of("treeproof 0.1.0 (seed 11)", "45 samples, 4 features after preparation",
-                "log2(x+1) applied; 2 constant features dropped", "Euclidean distances",
+                "log2(x+1) applied. 2 constant features dropped.", "Euclidean distances",
                 "average (UPGMA), complete and Ward linkage", "k = 2 to 5 clusters", "from 20 replicates",
                 "a subsample of 80% of the samples drawn without replacement", "(5 replicates each)",
                 "19 null data sets", "(1 + 19)", "10 reference data sets", "principal axes", "(0.1, 0.9]",
-                "p ≤ 0.05", "mean Jaccard at least 0.75", "above 0.5", "every mean Jaccard above 0.5", "Ward2")) {
+                "p ≤ 0.05", "mean Jaccard at least 0.75", "above 0.5", "every mean Jaccard above 0.5", "its mean ARI was at least 0.75", "Ward2")) {
             assertTrue(md.contains(expected), "missing '" + expected + "' in\n" + md);
         }
         assertEquals(20, st.replicates());

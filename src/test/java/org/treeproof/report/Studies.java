@@ -32,7 +32,7 @@ final class Studies {
         RunInfo run(String file, String generatedAt, int threads, double wall) {
             var s = evidence.settings();
             return new RunInfo("treeproof", "0.1.0", file, "ab".repeat(32), evidence.samples(), evidence.features(),
-                    evidence.features() == 0 ? List.of() : List.of("log2(x+1) applied", "2 constant features dropped"),
+                    evidence.features() == 0 ? List.of() : List.of("log2(x+1) applied.", "2 constant features dropped."),
                     s.metric().id(),
                     "treeproof assess " + file + " --out result", s.seed(), threads, wall, generatedAt);
         }
