@@ -111,6 +111,7 @@ final class AssessCommand implements Callable<Integer> {
         if (OutputDirectory.exists(out) && !force) {
             throw new InputException("--out " + out + ": already exists; choose another directory or add --force");
         }
+        inputOptions.requireUntransformedFor(settings.metric());
         LoadedInput loaded = inputOptions.load(input);
         StudyInput studyInput = loaded.isDistanceTable()
                 ? StudyInput.ofDistances(loaded.sampleIds(), loaded.distances().orElseThrow())
@@ -131,6 +132,10 @@ final class AssessCommand implements Callable<Integer> {
             }
             evidence = new StudyRunner(studyInput, settings, new LocalExecutor(nThreads), nThreads, progress)
                     .withCheckpoint(checkpoint).run();
+        } catch (InputException e) {
+            // the input cannot be studied as asked: nothing worth resuming
+            checkpoint.discard();
+            throw e;
         } finally {
             checkpoint.close();
         }

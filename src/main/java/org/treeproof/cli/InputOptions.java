@@ -104,6 +104,21 @@ public final class InputOptions {
         return LoadedInput.of(table, preparation.apply(table.matrix(), table.locator()));
     }
 
+    /**
+     * Refuses a preparation that would turn 0/1 data into other values before a 0/1 measure sees them
+     * (log2 and any scaling do).
+     */
+    public void requireUntransformedFor(org.treeproof.distance.Metric metric) {
+        if (!metric.binaryOnly() || distances) {
+            return;
+        }
+        Preparation p = preparation();
+        if (p.log2() || p.scale() != Scale.NONE) {
+            throw new InputException("--metric " + metric.id() + " takes 0/1 data as they are; add --scale none"
+                    + (p.log2() ? " and drop --log2" : "") + " (the default z-scoring changes 0/1 values)");
+        }
+    }
+
     private static void addIf(List<String> list, boolean condition, String option) {
         if (condition) {
             list.add(option);

@@ -56,6 +56,9 @@ final class TreeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         Linkage link = Linkage.parse(linkage);
+        if (!inputOptions.distances()) {
+            inputOptions.requireUntransformedFor(Metric.parse(metric));
+        }
         var loaded = inputOptions.load(input);
         CondensedDistances d;
         String metricId;

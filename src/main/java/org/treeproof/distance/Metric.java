@@ -140,6 +140,11 @@ public enum Metric {
         return euclidean;
     }
 
+    /** Whether this measure takes only 0/1 data (Jaccard, Hamming). */
+    public boolean binaryOnly() {
+        return this == JACCARD || this == HAMMING;
+    }
+
     /**
      * Whether this measure depends on the samples only through their Euclidean geometry, so it is unchanged by
      * rotating and shifting the feature space (Euclidean and squared Euclidean distance). Such data may be handled
