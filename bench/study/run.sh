@@ -33,7 +33,7 @@ echo " replicates, all scores: ARI, consensus, Jaccard, per-sample stability, br
 
 echo
 echo "full evidence table from the jar: n = $N, p = $P, average,complete,ward, k = 2..10, 200 replicates,"
-echo "50 reference sets, 19 null sets x 20 replicates (all defaults):"
+echo "50 reference sets, 19 null sets x 10 replicates (all defaults):"
 rm -rf "$out/full"
 start=$(date +%s.%N)
 [ "${SKIP_FULL:-}" = 1 ] || java -Xmx8g -jar "$jar" assess "$prefix.csv" --scale none --out "$out/full" --no-progress --quiet

@@ -254,4 +254,114 @@ public final class GapStatistic {
         }
         return w;
     }
+
+    /**
+     * W_1 .. W_K of nested partitions in one pass over the data: {@code nested[k - 1]} labels (0..k-1) the
+     * partition into k clusters, each a coarsening of the next, as the cuts of one tree are. The finest
+     * partition's centroids and within sums of squares are computed as {@link #withinSumOfSquares(DataMatrix,
+     * int[])} does; coarser ones follow exactly from Huygens' decomposition,
+     * W(C) = Σ_{f ⊂ C} [W(f) + n_f ||m_f − m_C||²], which costs O(K² p) instead of O(n p) per k.
+     *
+     * @throws IllegalArgumentException if the partitions are not nested
+     */
+    public static double[] withinSumsOfSquaresNested(DataMatrix data, int[][] nested) {
+        int n = data.samples();
+        int p = data.features();
+        int maxK = nested.length;
+        int[] finest = nested[maxK - 1];
+        int kf = 0;
+        for (int l : finest) {
+            kf = Math.max(kf, l + 1);
+        }
+        double[] x = data.rowMajorCopy();
+        int[] size = new int[kf];
+        double[] mean = new double[kf * p];
+        for (int i = 0; i < n; i++) {
+            size[finest[i]]++;
+            int o = finest[i] * p;
+            for (int j = 0; j < p; j++) {
+                mean[o + j] += x[i * p + j];
+            }
+        }
+        for (int f = 0; f < kf; f++) {
+            for (int j = 0; j < p; j++) {
+                mean[f * p + j] /= Math.max(1, size[f]);
+            }
+        }
+        double[] wf = new double[kf];
+        double[] sumSq = new double[p];
+        double[] sum = new double[p];
+        int[][] members = new int[kf][];
+        int[] fill = new int[kf];
+        for (int f = 0; f < kf; f++) {
+            members[f] = new int[size[f]];
+        }
+        for (int i = 0; i < n; i++) {
+            members[finest[i]][fill[finest[i]]++] = i;
+        }
+        for (int f = 0; f < kf; f++) {
+            java.util.Arrays.fill(sumSq, 0);
+            java.util.Arrays.fill(sum, 0);
+            for (int i : members[f]) {
+                for (int j = 0; j < p; j++) {
+                    double d = x[i * p + j] - mean[f * p + j];
+                    sumSq[j] += d * d;
+                    sum[j] += d;
+                }
+            }
+            for (int j = 0; j < p; j++) {
+                wf[f] += Math.max(0.0, sumSq[j] - sum[j] * sum[j] / Math.max(1, size[f]));
+            }
+        }
+        double[] out = new double[maxK];
+        for (int k = 1; k <= maxK; k++) {
+            int[] labels = nested[k - 1];
+            int[] coarseOf = new int[kf];
+            java.util.Arrays.fill(coarseOf, -1);
+            for (int i = 0; i < n; i++) {
+                int f = finest[i];
+                if (coarseOf[f] < 0) {
+                    coarseOf[f] = labels[i];
+                } else if (coarseOf[f] != labels[i]) {
+                    throw new IllegalArgumentException("the partition at k = " + k + " splits a cluster of the finest");
+                }
+            }
+            int kc = 0;
+            for (int l : labels) {
+                kc = Math.max(kc, l + 1);
+            }
+            double[] cm = new double[kc * p];
+            int[] cn = new int[kc];
+            for (int f = 0; f < kf; f++) {
+                int c = coarseOf[f];
+                if (c < 0) {
+                    continue;
+                }
+                cn[c] += size[f];
+                for (int j = 0; j < p; j++) {
+                    cm[c * p + j] += size[f] * mean[f * p + j];
+                }
+            }
+            for (int c = 0; c < kc; c++) {
+                for (int j = 0; j < p; j++) {
+                    cm[c * p + j] /= Math.max(1, cn[c]);
+                }
+            }
+            double w = 0;
+            for (int f = 0; f < kf; f++) {
+                int c = coarseOf[f];
+                if (c < 0) {
+                    continue;
+                }
+                double between = 0;
+                for (int j = 0; j < p; j++) {
+                    double d = mean[f * p + j] - cm[c * p + j];
+                    between += d * d;
+                }
+                w += wf[f] + size[f] * between;
+            }
+            out[k - 1] = w;
+        }
+        return out;
+    }
 }

@@ -95,17 +95,21 @@ final class GapRun {
 
     private double[] logW(DataMatrix x, CondensedDistances d, MergeTree tree, int maxK) {
         double[] out = new double[maxK];
+        if (settings.metric().rotationInvariant()) {
+            double[] w = GapStatistic.withinSumsOfSquaresNested(x, tree.cutLabelsUpTo(maxK));
+            for (int k = 1; k <= maxK; k++) {
+                out[k - 1] = StrictMath.log(w[k - 1]);
+            }
+            return out;
+        }
         for (int k = 1; k <= maxK; k++) {
             int[] labels = tree.cutLabelsAtK(k);
-            out[k - 1] = StrictMath.log(within(x, d, labels, k));
+            out[k - 1] = StrictMath.log(within(d, labels, k));
         }
         return out;
     }
 
-    private double within(DataMatrix x, CondensedDistances d, int[] labels, int k) {
-        if (settings.metric().rotationInvariant()) {
-            return GapStatistic.withinSumOfSquares(x, labels);
-        }
+    private static double within(CondensedDistances d, int[] labels, int k) {
         // Σ_r (1 / n_r) Σ_{i<i' in r} d(i, i')
         int n = labels.length;
         int[] size = new int[k];

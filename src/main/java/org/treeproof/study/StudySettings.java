@@ -143,7 +143,7 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         private int referenceSets = 50;
         private ReferenceData.Kind gapReference = ReferenceData.Kind.PRINCIPAL_BOX;
         private int nullSets = 19;
-        private int nullReplicates = 20;
+        private int nullReplicates = 10;
         private double pacLow = 0.1;
         private double pacHigh = 0.9;
         private long seed = 1;
