@@ -62,11 +62,11 @@ public record MemoryEstimate(long persistent, long peakPhase, String phase) {
     }
 
     /**
-     * Fails with advice when the estimate (plus a quarter for the JVM's own needs and fragmentation) exceeds
+     * Fails with advice when the estimate (plus a tenth and 64 MiB for the JVM's own needs and fragmentation) exceeds
      * {@code heapBytes}.
      */
     public void requireFits(long heapBytes, int n) {
-        long needed = total() + total() / 4;
+        long needed = total() + total() / 10 + (64L << 20);
         if (needed > heapBytes) {
             throw new NotEnoughMemoryException(String.format(Locale.ROOT,
                     "this study needs about %s of memory (%s for the data, distances and consensus counters, %s more "
