@@ -75,7 +75,7 @@ enum Engine {
         this.id = id;
     }
 
-    /** Fails with a one-line message if this engine cannot run here; cheap, so it is checked before the input is read. */
+    /** Fails with a one-line message if this engine cannot run here; cheap, so checked before the input is read. */
     abstract void requireAvailable();
 
     /** Starts the engine; {@code threads} is the thread count of a local engine. */

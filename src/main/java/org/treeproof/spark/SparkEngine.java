@@ -17,8 +17,8 @@ import org.treeproof.resample.ReplicateExecutor;
  *       broadcast data, and every replicate gathers from it; {@code replicate} has each replicate compute its own
  *       distances over its samples, which saves 8·n(n−1)/2 bytes per executor at the price of computing the
  *       distances again for every replicate. Results are identical either way.</li>
- *   <li>{@value #CHUNK}: indices per Spark job (default: twice the default parallelism), which bounds the results
- *       the driver holds.</li>
+ *   <li>{@value #CHUNK}: indices per Spark job (default: twice the default parallelism, at least 16), which
+ *       bounds the results the driver holds.</li>
  * </ul>
  */
 public final class SparkEngine implements AutoCloseable {

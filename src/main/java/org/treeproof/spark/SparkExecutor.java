@@ -22,7 +22,7 @@ import org.treeproof.resample.ReplicateTask;
  * is one Spark job with one partition per index, and at most two chunks are in flight (the second keeps the
  * cluster busy while the first one's last tasks finish). The driver decodes a finished chunk's results one by
  * one in index order, so it holds at most two chunks of results. A chunk is {@code 2 ×} the default parallelism
- * (one wave per core and one waiting), smaller when the results seen so far suggest a chunk would exceed a
+ * (one wave per core and one waiting) and at least 16 indices, smaller when the results seen so far suggest a chunk would exceed a
  * quarter of {@code spark.driver.maxResultSize}; the first chunks are one wave, before any size is known.
  *
  * <p>Spark retries failed tasks ({@code spark.task.maxFailures}); a task is a pure function of its index, so a
@@ -67,6 +67,8 @@ public final class SparkExecutor implements ReplicateExecutor {
     }
 
     private static final int IN_FLIGHT = 2;
+    /** Below this many indices per job, a job's own cost (some milliseconds) starts to show on small clusters. */
+    private static final int MIN_DEFAULT_CHUNK = 16;
 
     private final JavaSparkContext context;
     private final Preparation preparation;
@@ -76,7 +78,7 @@ public final class SparkExecutor implements ReplicateExecutor {
     /**
      * @param context     the running context; its master, resources and retry policy come from its configuration
      * @param preparation whether executors prepare tasks once
-     * @param chunk       indices per Spark job, at least 1; 0 for twice the default parallelism
+     * @param chunk       indices per Spark job, at least 1; 0 for twice the default parallelism (at least 16)
      */
     public SparkExecutor(JavaSparkContext context, Preparation preparation, int chunk) {
         this.context = Objects.requireNonNull(context, "context");
@@ -84,12 +86,12 @@ public final class SparkExecutor implements ReplicateExecutor {
         if (chunk < 0) {
             throw new IllegalArgumentException("chunk must be at least 1 (or 0 for the default): " + chunk);
         }
-        this.chunk = chunk == 0 ? Math.max(1, 2 * context.defaultParallelism()) : chunk;
+        this.chunk = chunk == 0 ? Math.max(MIN_DEFAULT_CHUNK, 2 * context.defaultParallelism()) : chunk;
         long maxResult = context.getConf().getSizeAsBytes("spark.driver.maxResultSize", "1g");
         this.resultBudget = maxResult <= 0 ? Long.MAX_VALUE : Math.max(1, maxResult / 4);
     }
 
-    /** Executors prepare tasks once; chunks of twice the default parallelism. */
+    /** Executors prepare tasks once; chunks of the default size. */
     public SparkExecutor(JavaSparkContext context) {
         this(context, Preparation.ONCE_PER_EXECUTOR, 0);
     }
