@@ -15,7 +15,6 @@ import org.treeproof.io.LabelsReader;
 import org.treeproof.io.LoadedInput;
 import org.treeproof.io.OutputDirectory;
 import org.treeproof.io.SummaryJson;
-import org.treeproof.resample.LocalExecutor;
 import org.treeproof.resample.ReferenceData;
 import org.treeproof.resample.Resampling;
 import org.treeproof.study.DecisionRule;
@@ -64,6 +63,11 @@ final class AssessCommand implements Callable<Integer> {
             + "depend on it.")
     Integer threads;
 
+    @Option(names = "--engine", paramLabel = "local|spark", description = "Where replicates run: local (threads of "
+            + "this machine, default) or spark (Spark tasks; run treeproof under spark-submit, which supplies the "
+            + "master). Results do not depend on it.")
+    String engine;
+
     @Option(names = "--force", description = "Replace DIR if it exists (only once the new results are complete).")
     boolean force;
 
@@ -107,6 +111,8 @@ final class AssessCommand implements Callable<Integer> {
     public Integer call() {
         long started = System.nanoTime();
         int nThreads = Threads.resolve(threads, "--threads");
+        Engine chosen = engine == null ? Engine.LOCAL : Engine.parse(engine);
+        chosen.requireAvailable();
         StudySettings settings = study.settings();
         if (OutputDirectory.exists(out) && !force) {
             throw new InputException("--out " + out + ": already exists; choose another directory or add --force");
@@ -125,12 +131,16 @@ final class AssessCommand implements Callable<Integer> {
         String fingerprint = fingerprint(loaded, settings);
         Evidence evidence;
         CheckpointFile checkpoint = CheckpointFile.open(out, fingerprint, resume);
-        try (var progress = new ProgressReporter(System.err, quiet || noProgress)) {
+        try (Engine.Run run = chosen.start(nThreads);
+                var progress = new ProgressReporter(System.err, quiet || noProgress)) {
             if (resume && !quiet) {
                 System.err.println("treeproof: resuming with " + checkpoint.resumedReplicates()
                         + " replicates kept from the interrupted run");
             }
-            evidence = new StudyRunner(studyInput, settings, new LocalExecutor(nThreads), nThreads, progress)
+            if (!run.description().isEmpty() && !quiet) {
+                System.err.println("treeproof: replicates run on " + run.description());
+            }
+            evidence = new StudyRunner(studyInput, settings, run.executor(), nThreads, progress)
                     .withCheckpoint(checkpoint).run();
         } catch (InputException e) {
             // the input cannot be studied as asked: nothing worth resuming

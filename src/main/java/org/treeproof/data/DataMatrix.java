@@ -1,5 +1,7 @@
 package org.treeproof.data;
 
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
@@ -10,8 +12,13 @@ import java.util.Objects;
  * <p>Values are held row-major: sample {@code i}, feature {@code j} is at {@code i * features() + j}.
  * The array given to the constructor is copied; {@link #rowMajorCopy()} returns a copy, so no caller
  * can change a matrix after it is made. Sample ids and feature names must be unique and non-empty.
+ *
+ * <p>Serializable (to run replicates on other machines) through a proxy that goes back through the
+ * constructor, so a deserialized matrix is checked like any other.
  */
-public final class DataMatrix {
+public final class DataMatrix implements Serializable {
+    private static final long serialVersionUID = 1L;
+
     private final List<String> sampleIds;
     private final List<String> featureNames;
     private final double[] values;
@@ -150,6 +157,22 @@ public final class DataMatrix {
             }
         }
         return new DataMatrix(featureNames, sampleIds, t);
+    }
+
+    private Object writeReplace() {
+        return new SerialForm(sampleIds, featureNames, values);
+    }
+
+    private void readObject(ObjectInputStream in) throws java.io.InvalidObjectException {
+        throw new java.io.InvalidObjectException("a DataMatrix is read through its serial form");
+    }
+
+    /** What is written for a matrix: its names and values, read back through the constructor. */
+    private record SerialForm(List<String> sampleIds, List<String> featureNames, double[] values)
+            implements Serializable {
+        private Object readResolve() {
+            return new DataMatrix(sampleIds, featureNames, values);
+        }
     }
 
     @Override

@@ -1,5 +1,7 @@
 package org.treeproof.distance;
 
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Arrays;
 import java.util.Objects;
 
@@ -9,8 +11,13 @@ import java.util.Objects;
  * <p>The layout is the conventional condensed one (as in scipy's {@code pdist}): for {@code i < j}
  * the pair {@code (i, j)} is at {@code n*i - i*(i+1)/2 + (j - i - 1)}. Length {@code n(n-1)/2}, held
  * in one {@code double[]}, so the largest supported {@code n} is about 65 000.
+ *
+ * <p>Serializable through a proxy that is checked again when read; a study ships distances only when it has
+ * no data table to compute them from.
  */
-public final class CondensedDistances {
+public final class CondensedDistances implements Serializable {
+    private static final long serialVersionUID = 1L;
+
     private final int n;
     private final double[] values;
 
@@ -116,6 +123,21 @@ public final class CondensedDistances {
     /** Bytes needed to hold a condensed matrix over {@code n} items. */
     public static long bytesFor(long n) {
         return n * (n - 1) / 2 * Double.BYTES;
+    }
+
+    private Object writeReplace() {
+        return new SerialForm(n, values);
+    }
+
+    private void readObject(ObjectInputStream in) throws java.io.InvalidObjectException {
+        throw new java.io.InvalidObjectException("CondensedDistances are read through their serial form");
+    }
+
+    /** What is written: the size and the condensed values, checked again by {@link #wrap}. */
+    private record SerialForm(int n, double[] values) implements Serializable {
+        private Object readResolve() {
+            return wrap(n, values);
+        }
     }
 
     @Override

@@ -14,7 +14,8 @@ import java.util.function.IntFunction;
  *
  * <p>At most {@code 2 × threads} tasks are in flight at once, which bounds the memory held by finished
  * results waiting for an earlier index: each thread works on one replicate and at most one more result
- * per thread waits in the queue. With one thread the tasks run on the calling thread.
+ * per thread waits in the queue. With one thread the tasks run on the calling thread. Tasks are never
+ * serialized, so they use what they hold in place (a study's replicates gather from the full distance matrix).
  */
 public final class LocalExecutor implements ReplicateExecutor {
     private final int threads;
@@ -32,7 +33,15 @@ public final class LocalExecutor implements ReplicateExecutor {
     }
 
     @Override
-    public <T> void run(int first, int count, IntFunction<T> task, Consumer<? super T> inOrder) {
+    public <T> void run(int first, int count, ReplicateTask<T> task, Consumer<? super T> inOrder) {
+        runHere(first, count, task, inOrder);
+    }
+
+    /**
+     * Like {@link #run} for any function of the index, shippable or not: this executor never leaves the JVM.
+     * For work that needs what only this JVM holds, such as trees built from the full distance matrix.
+     */
+    public <T> void runHere(int first, int count, IntFunction<T> task, Consumer<? super T> inOrder) {
         if (threads == 1) {
             for (int i = first; i < count; i++) {
                 inOrder.accept(task.apply(i));

@@ -1,5 +1,6 @@
 package org.treeproof.resample;
 
+import java.io.Serializable;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
@@ -38,9 +39,11 @@ import org.treeproof.data.InputException;
  * <p><b>Cost per draw.</b> Method (a): {@code n·p} uniforms. Methods (b) and (c): {@code n·r} variates and
  * an {@code n·r·p} back-rotation, plus one {@link PrincipalAxes#of} when the generator is prepared.
  *
- * <p>Instances are immutable and may be shared between threads.
+ * <p>Instances are immutable and may be shared between threads; they are serializable (a few vectors of
+ * length p, plus the r × p axes), so reference sets can be drawn on other machines.
  */
-public final class ReferenceData {
+public final class ReferenceData implements Serializable {
+    private static final long serialVersionUID = 1L;
 
     /**
      * The reference distributions offered for the gap statistic, by the names users type

@@ -1,11 +1,13 @@
 package org.treeproof.resample;
 
+import java.io.Serializable;
 import java.util.Arrays;
 import java.util.SplittableRandom;
 
 /**
  * Makes the plan of any replicate from the master seed alone: plan {@code b} is a pure function of
- * (master seed, purpose, b, sizes, fractions), so replicates can be drawn in any order, on any thread.
+ * (master seed, purpose, b, sizes, fractions), so replicates can be drawn in any order, on any thread or
+ * machine.
  *
  * @param samples         the number of samples in the full data
  * @param features        the number of features (0 when only distances are known)
@@ -16,7 +18,7 @@ import java.util.SplittableRandom;
  * @param purpose         the seed stream the plans come from
  */
 public record ReplicatePlanner(int samples, int features, Resampling scheme, double sampleFraction,
-        double featureFraction, long masterSeed, Seeds.Purpose purpose) {
+        double featureFraction, long masterSeed, Seeds.Purpose purpose) implements Serializable {
 
     public ReplicatePlanner {
         if (samples < 2) {

@@ -1,5 +1,6 @@
 package org.treeproof.score;
 
+import java.io.Serializable;
 import java.util.Arrays;
 import java.util.SplittableRandom;
 import org.treeproof.tree.MergeTree;
@@ -19,8 +20,11 @@ import org.treeproof.tree.MergeTree;
  * hashes to a sample set's hash exactly when it holds every copy of each of its samples. Two different
  * sets share a hash with probability about 2^-61 per comparison; with at most 10^5 clades and 10^4
  * replicates the chance of any false match in a study is below 10^-9.
+ *
+ * <p>Serializable (the reference tree and the keys), so that replicates can be scored on other machines.
  */
-public final class BranchSupport {
+public final class BranchSupport implements Serializable {
+    private static final long serialVersionUID = 1L;
     private static final long P = (1L << 61) - 1;
 
     private final MergeTree reference;
@@ -48,7 +52,7 @@ public final class BranchSupport {
      * @param counted   bit s set when the replicate holds at least two members of merge s's clade
      * @param supported bit s set when, in addition, the replicate tree has a clade with exactly those members
      */
-    public record Replicate(long[] counted, long[] supported) {
+    public record Replicate(long[] counted, long[] supported) implements Serializable {
         public Replicate {
             counted = counted.clone();
             supported = supported.clone();

@@ -4,10 +4,13 @@ import java.util.List;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.distance.CondensedDistances;
 import org.treeproof.resample.ReferenceData;
+import org.treeproof.distance.Metric;
 import org.treeproof.resample.ReplicateExecutor;
+import org.treeproof.resample.ReplicateTask;
 import org.treeproof.resample.Seeds;
 import org.treeproof.score.GapResult;
 import org.treeproof.score.GapStatistic;
+import org.treeproof.tree.Linkage;
 import org.treeproof.tree.MergeTree;
 
 /**
@@ -58,7 +61,8 @@ final class GapRun {
             first++;
             progress.step();
         }
-        executor.run(first, b, i -> referenceLogW(generator, i), row -> {
+        var task = new ReferenceSet(generator, settings.metric(), settings.seed(), maxK, settings.linkages());
+        executor.run(first, b, task, row -> {
             int index = (int) row[0][0];
             double[] flat = new double[l * maxK];
             for (int li = 0; li < l; li++) {
@@ -71,31 +75,43 @@ final class GapRun {
         GapResult[] out = new GapResult[l];
         for (int li = 0; li < l; li++) {
             MergeTree tree = refs.get(li).tree();
-            double[] observed = logW(data, distances, tree, maxK);
+            double[] observed = logW(settings.metric(), data, distances, tree, maxK);
             out[li] = GapStatistic.compute(observed, refLogW[li]);
         }
         return out;
     }
 
-    /** Row 0 holds the index; row 1 + l the log W_k of linkage l for k = 1..maxK. */
-    private double[][] referenceLogW(ReferenceData generator, int index) {
-        long seed = Seeds.seedFor(settings.seed(), Seeds.Purpose.GAP_REFERENCE, index);
-        // Euclidean distances and sums of squares are the same in the reference's own coordinates (an exact
-        // rotation), which skips the back-transform to the features.
-        DataMatrix ref = settings.metric().rotationInvariant() ? generator.drawCoordinates(seed) : generator.draw(seed);
-        CondensedDistances rd = settings.metric().compute(ref, 1);
-        double[][] out = new double[refs.size() + 1][];
-        out[0] = new double[] {index};
-        for (int li = 0; li < refs.size(); li++) {
-            MergeTree tree = refs.get(li).linkage().cluster(rd);
-            out[li + 1] = logW(ref, rd, tree, settings.maxK());
+    /**
+     * One reference set as a task: drawn from its seed, its distances computed, clustered with every linkage.
+     * Row 0 of the result holds the index; row 1 + l the log W_k of linkage l for k = 1..maxK. Carries the
+     * generator (a few vectors and the principal axes), so it can run on another machine.
+     */
+    private record ReferenceSet(ReferenceData generator, Metric metric, long masterSeed, int maxK,
+            List<Linkage> linkages) implements ReplicateTask<double[][]> {
+        ReferenceSet {
+            linkages = List.copyOf(linkages);
         }
-        return out;
+
+        @Override
+        public double[][] apply(int index) {
+            long seed = Seeds.seedFor(masterSeed, Seeds.Purpose.GAP_REFERENCE, index);
+            // Euclidean distances and sums of squares are the same in the reference's own coordinates (an exact
+            // rotation), which skips the back-transform to the features.
+            DataMatrix ref = metric.rotationInvariant() ? generator.drawCoordinates(seed) : generator.draw(seed);
+            CondensedDistances rd = metric.compute(ref, 1);
+            double[][] out = new double[linkages.size() + 1][];
+            out[0] = new double[] {index};
+            for (int li = 0; li < linkages.size(); li++) {
+                MergeTree tree = linkages.get(li).cluster(rd);
+                out[li + 1] = logW(metric, ref, rd, tree, maxK);
+            }
+            return out;
+        }
     }
 
-    private double[] logW(DataMatrix x, CondensedDistances d, MergeTree tree, int maxK) {
+    private static double[] logW(Metric metric, DataMatrix x, CondensedDistances d, MergeTree tree, int maxK) {
         double[] out = new double[maxK];
-        if (settings.metric().rotationInvariant()) {
+        if (metric.rotationInvariant()) {
             double[] w = GapStatistic.withinSumsOfSquaresNested(x, tree.cutLabelsUpTo(maxK));
             for (int k = 1; k <= maxK; k++) {
                 out[k - 1] = StrictMath.log(w[k - 1]);

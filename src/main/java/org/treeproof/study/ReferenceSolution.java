@@ -2,7 +2,7 @@ package org.treeproof.study;
 
 import java.util.List;
 import org.treeproof.distance.CondensedDistances;
-import org.treeproof.resample.ReplicateExecutor;
+import org.treeproof.resample.LocalExecutor;
 import org.treeproof.tree.KCut;
 import org.treeproof.tree.Linkage;
 import org.treeproof.tree.MergeTree;
@@ -38,11 +38,14 @@ record ReferenceSolution(Linkage linkage, MergeTree tree, KCut[] cuts) {
         return new ReferenceSolution(linkage, tree, cuts);
     }
 
-    /** The reference solutions of every linkage, built in parallel (one linkage per task). */
+    /**
+     * The reference solutions of every linkage, built in parallel (one linkage per task) in this JVM, where the
+     * full matrix is.
+     */
     static List<ReferenceSolution> all(List<Linkage> linkages, CondensedDistances d, int maxK,
-            ReplicateExecutor executor) {
+            LocalExecutor executor) {
         var out = new java.util.ArrayList<ReferenceSolution>(linkages.size());
-        executor.run(0, linkages.size(), i -> of(linkages.get(i), d, maxK), out::add);
+        executor.runHere(0, linkages.size(), i -> of(linkages.get(i), d, maxK), out::add);
         return List.copyOf(out);
     }
 }

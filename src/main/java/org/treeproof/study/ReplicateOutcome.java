@@ -1,5 +1,6 @@
 package org.treeproof.study;
 
+import java.io.Serializable;
 import org.treeproof.score.BranchSupport;
 
 /**
@@ -14,5 +15,6 @@ import org.treeproof.score.BranchSupport;
  * @param support  per linkage, which reference clades this replicate counted and reproduced; {@code null}
  *                 when branch support is not computed (null calibration)
  */
-public record ReplicateOutcome(int index, int[] distinct, int[][][] labels, BranchSupport.Replicate[] support) {
+public record ReplicateOutcome(int index, int[] distinct, int[][][] labels, BranchSupport.Replicate[] support)
+        implements Serializable {
 }

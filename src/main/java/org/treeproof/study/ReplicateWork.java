@@ -1,62 +1,86 @@
 package org.treeproof.study;
 
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.List;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.distance.CondensedDistances;
 import org.treeproof.distance.Metric;
 import org.treeproof.resample.ReplicatePlan;
 import org.treeproof.resample.ReplicatePlanner;
+import org.treeproof.resample.ReplicateTask;
 import org.treeproof.score.BranchSupport;
+import org.treeproof.tree.Linkage;
 import org.treeproof.tree.MergeTree;
 
 /**
- * The replicate function: a pure function of (data, distances, reference solutions, plan) that draws
- * the replicate, reclusters it with every linkage and cuts it at k = 2..maxK.
+ * The replicate function: a pure function of (data, distances, linkages, plan) that draws the replicate,
+ * reclusters it with every linkage and cuts it at k = 2..maxK.
  *
  * <p>Sample replicates gather their rows of the full distance matrix and never recompute a distance;
  * feature replicates recompute distances over their features, on one thread (the replicates themselves
  * run in parallel). Memory per running replicate: one condensed matrix over its draws, the linkage's
  * working copy of it, and O(n · maxK) labels.
+ *
+ * <p><b>Shipped to other machines</b>, the work carries the data table but not the full n² matrix (unless
+ * there is no table, as for an input of distances). A copy without the matrix computes each replicate's
+ * distances over its distinct samples, or, once {@link #prepare}d, the full matrix once and gathers from it as
+ * here. Either way it gives the same bits: the kernel folds every pair alone, in feature order, so a pair's
+ * distance does not depend on which other samples are computed with it.
  */
-final class ReplicateWork {
+final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
+    private static final long serialVersionUID = 1L;
+
     private final DataMatrix data;
     private final CondensedDistances distances;
     private final Metric metric;
-    private final List<ReferenceSolution> references;
+    private final List<Linkage> linkages;
     private final List<BranchSupport> supports;
     private final ReplicatePlanner planner;
     private final int maxK;
 
     /**
-     * @param supports per reference, the branch-support counter, or {@code null} to skip branch support
+     * @param data      the data table, or {@code null} when only distances are known
+     * @param distances the full matrix under {@code metric}, or {@code null} to compute distances from {@code data}
+     * @param supports  per linkage, the branch-support counter of its reference tree, or {@code null} to skip
+     *                  branch support
      */
-    ReplicateWork(DataMatrix data, CondensedDistances distances, Metric metric, List<ReferenceSolution> references,
+    ReplicateWork(DataMatrix data, CondensedDistances distances, Metric metric, List<Linkage> linkages,
             List<BranchSupport> supports, ReplicatePlanner planner, int maxK) {
+        if (data == null && distances == null) {
+            throw new IllegalArgumentException("replicate work needs data or distances");
+        }
+        if (planner.resamplesFeatures() && data == null) {
+            throw new IllegalArgumentException("feature replicates need the data table");
+        }
         this.data = data;
         this.distances = distances;
         this.metric = metric;
-        this.references = references;
-        this.supports = supports;
+        this.linkages = List.copyOf(linkages);
+        this.supports = supports == null ? null : List.copyOf(supports);
         this.planner = planner;
         this.maxK = maxK;
     }
 
-    ReplicateOutcome run(int index) {
+    @Override
+    public ReplicateOutcome apply(int index) {
         ReplicatePlan plan = planner.plan(index);
         int[] draws = plan.draws();
         int[] distinct = plan.distinct();
         CondensedDistances d;
-        if (plan.resamplesFeatures()) {
-            CondensedDistances onDistinct = metric.compute(data.selectSamples(distinct), plan.features(), 1);
+        if (plan.resamplesFeatures() || distances == null) {
+            DataMatrix rows = data.selectSamples(distinct);
+            CondensedDistances onDistinct = plan.resamplesFeatures() ? metric.compute(rows, plan.features(), 1)
+                    : metric.compute(rows, 1);
             d = draws.length == distinct.length ? onDistinct : onDistinct.gather(plan.drawToDistinct());
         } else {
             d = distances.gather(draws);
         }
         int[] firstDrawOf = firstDrawOfDistinct(plan);
-        int[][][] labels = new int[references.size()][][];
-        BranchSupport.Replicate[] support = supports == null ? null : new BranchSupport.Replicate[references.size()];
-        for (int l = 0; l < references.size(); l++) {
-            MergeTree tree = references.get(l).linkage().cluster(d);
+        int[][][] labels = new int[linkages.size()][][];
+        BranchSupport.Replicate[] support = supports == null ? null : new BranchSupport.Replicate[linkages.size()];
+        for (int l = 0; l < linkages.size(); l++) {
+            MergeTree tree = linkages.get(l).cluster(d);
             labels[l] = new int[maxK - 1][];
             for (int k = 2; k <= maxK; k++) {
                 int[] onDraws = tree.cutLabelsAtK(k);
@@ -67,6 +91,19 @@ final class ReplicateWork {
             }
         }
         return new ReplicateOutcome(index, distinct, labels, support);
+    }
+
+    /**
+     * With the data but not the full matrix, the same work holding the full matrix, computed once here with
+     * {@code threads} threads: each replicate then gathers instead of recomputing (worth it when a JVM runs more
+     * than one or two replicates; it costs one n² matrix). Feature replicates recompute anyway.
+     */
+    @Override
+    public ReplicateTask<ReplicateOutcome> prepare(int threads) {
+        if (distances != null || planner.resamplesFeatures()) {
+            return this;
+        }
+        return new ReplicateWork(data, metric.compute(data, threads), metric, linkages, supports, planner, maxK);
     }
 
     /** For each distinct sample, the position of its first draw; null when there are no repeats. */
@@ -95,5 +132,21 @@ final class ReplicateWork {
             raw[a] = onDraws[firstDrawOf[a]];
         }
         return org.treeproof.partition.Partition.of(raw).labels();
+    }
+
+    /** The data travel; the full matrix only when there is no data table to compute it from. */
+    private Object writeReplace() {
+        return new SerialForm(data, data == null ? distances : null, metric, linkages, supports, planner, maxK);
+    }
+
+    private void readObject(ObjectInputStream in) throws java.io.InvalidObjectException {
+        throw new java.io.InvalidObjectException("replicate work is read through its serial form");
+    }
+
+    private record SerialForm(DataMatrix data, CondensedDistances distances, Metric metric, List<Linkage> linkages,
+            List<BranchSupport> supports, ReplicatePlanner planner, int maxK) implements Serializable {
+        private Object readResolve() {
+            return new ReplicateWork(data, distances, metric, linkages, supports, planner, maxK);
+        }
     }
 }

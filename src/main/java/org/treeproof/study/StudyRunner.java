@@ -7,6 +7,7 @@ import org.treeproof.data.DataMatrix;
 import org.treeproof.distance.CondensedDistances;
 import org.treeproof.distance.Metric;
 import org.treeproof.partition.Partition;
+import org.treeproof.resample.LocalExecutor;
 import org.treeproof.resample.ReplicateExecutor;
 import org.treeproof.resample.ReplicatePlanner;
 import org.treeproof.resample.Seeds;
@@ -29,11 +30,16 @@ import org.treeproof.tree.KCut;
  * <p>Every random draw comes from {@link Seeds#seedFor}, every replicate is a pure function of its index,
  * and results are accumulated in index order, so the evidence is identical for any executor and any
  * number of threads.
+ *
+ * <p>The executor runs the replicates, null-set replicates and gap reference sets, which it may ship to
+ * other machines; the full distance matrices and reference trees are built here, on {@code kernelThreads}
+ * threads of this JVM.
  */
 public final class StudyRunner {
     private final StudyInput input;
     private final StudySettings settings;
     private final ReplicateExecutor executor;
+    private final LocalExecutor here;
     private final int kernelThreads;
     private final StudyProgress progress;
     private Checkpoint checkpoint = Checkpoint.NONE;
@@ -47,6 +53,7 @@ public final class StudyRunner {
         this.input = input;
         this.settings = settings;
         this.executor = executor;
+        this.here = new LocalExecutor(kernelThreads);
         this.kernelThreads = kernelThreads;
         this.progress = progress;
         settings.checkAgainst(input.samples(), input.hasData());
@@ -67,7 +74,7 @@ public final class StudyRunner {
         progress.stage("distances and reference trees", 1 + settings.linkages().size());
         CondensedDistances d = input.distances() != null ? input.distances() : metric.compute(data, kernelThreads);
         progress.step();
-        List<ReferenceSolution> refs = ReferenceSolution.all(settings.linkages(), d, maxK, executor);
+        List<ReferenceSolution> refs = ReferenceSolution.all(settings.linkages(), d, maxK, here);
         for (int i = 0; i < refs.size(); i++) {
             progress.step();
         }
@@ -97,7 +104,8 @@ public final class StudyRunner {
                 supports.add(BranchSupport.of(refs.get(l).tree(), Seeds.seedFor(masterSeed, Seeds.Purpose.CLADE_KEYS, l)));
             }
         }
-        var work = new ReplicateWork(data, d, settings.metric(), refs, supports, planner, settings.maxK());
+        var work = new ReplicateWork(data, d, settings.metric(), settings.linkages(), supports, planner,
+                settings.maxK());
         var tally = new StabilityTally(refs, n, settings.maxK(), replicates, full);
         if (stage != null) {
             progress.stage(stage, replicates);
@@ -113,7 +121,7 @@ public final class StudyRunner {
                 progress.step();
             }
         }
-        executor.run(first, replicates, work::run, r -> {
+        executor.run(first, replicates, work, r -> {
             tally.add(r);
             if (full) {
                 checkpoint.replicateDone(r);
@@ -153,7 +161,7 @@ public final class StudyRunner {
             DataMatrix nullData = settings.metric().rotationInvariant() && !settings.resamplesFeatures()
                     ? generator.drawCoordinates(seed) : generator.draw(seed);
             CondensedDistances nd = settings.metric().compute(nullData, kernelThreads);
-            List<ReferenceSolution> nullRefs = ReferenceSolution.all(settings.linkages(), nd, maxK, executor);
+            List<ReferenceSolution> nullRefs = ReferenceSolution.all(settings.linkages(), nd, maxK, here);
             StabilityTally t = stability(nullData, nd, nullRefs, settings.nullReplicates(),
                     Seeds.seedFor(settings.seed(), Seeds.Purpose.NULL_REPLICATE, j), false, null);
             for (int l = 0; l < linkages; l++) {

@@ -1,5 +1,7 @@
 package org.treeproof.tree;
 
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Arrays;
 import java.util.Objects;
 import org.treeproof.distance.CondensedDistances;
@@ -16,8 +18,11 @@ import org.treeproof.partition.Partition;
  * members of any cluster are a contiguous run of {@link #leafOrder()}, which makes cuts O(n): two
  * neighbours in the leaf order are in the same cluster exactly when the merge that first joins them
  * has been applied.
+ *
+ * <p>Serializable as its merges alone; reading one back checks them and rebuilds the derived arrays.
  */
-public final class MergeTree {
+public final class MergeTree implements Serializable {
+    private static final long serialVersionUID = 1L;
     private final int n;
     private final int[] left;
     private final int[] right;
@@ -350,6 +355,21 @@ public final class MergeTree {
     @Override
     public int hashCode() {
         return Objects.hash(n, Arrays.hashCode(left), Arrays.hashCode(right), Arrays.hashCode(height));
+    }
+
+    private Object writeReplace() {
+        return new SerialForm(n, left, right, height);
+    }
+
+    private void readObject(ObjectInputStream in) throws java.io.InvalidObjectException {
+        throw new java.io.InvalidObjectException("a MergeTree is read through its serial form");
+    }
+
+    /** What is written for a tree: its merges, read back through the checking constructor. */
+    private record SerialForm(int leaves, int[] left, int[] right, double[] heights) implements Serializable {
+        private Object readResolve() {
+            return new MergeTree(leaves, left, right, heights, false);
+        }
     }
 
     @Override

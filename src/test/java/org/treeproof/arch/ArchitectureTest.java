@@ -10,8 +10,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Keeps the import directions of the package table in the design true: the pure core never reaches
- * the study, I/O, report, chart or CLI layers, only {@code chart} touches XChart, and nothing imports
- * the CLI.
+ * the study, I/O, report, chart or CLI layers, only {@code chart} touches XChart, only {@code spark} touches
+ * Apache Spark (and the one {@code cli} class that starts it), and nothing imports the CLI.
  */
 class ArchitectureTest {
     private static JavaClasses classes;
@@ -81,6 +81,32 @@ class ArchitectureTest {
     void onlyChartImportsXChart() {
         noClasses().that().resideOutsideOfPackage("org.treeproof.chart..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.knowm.xchart..", "de.erichseifert..")
+                .check(classes);
+    }
+
+    @Test
+    void onlySparkAndCliImportSpark() {
+        noClasses().that().resideOutsideOfPackages("org.treeproof.spark..", "org.treeproof.cli..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.apache.spark..", "scala..")
+                .check(classes);
+    }
+
+    @Test
+    void nothingButTheCliImportsTheSparkPackage() {
+        noClasses().that().resideOutsideOfPackages("org.treeproof.spark..", "org.treeproof.cli..")
+                .should().dependOnClassesThat().resideInAPackage("org.treeproof.spark..")
+                .check(classes);
+    }
+
+    /** Spark is loaded only when chosen: one small class of the command line stands between it and the rest. */
+    @Test
+    void theCliReachesSparkOnlyThroughSparkRun() {
+        noClasses().that().resideInAPackage("org.treeproof.cli..").and().doNotHaveSimpleName("SparkRun")
+                .should().dependOnClassesThat().resideInAnyPackage("org.treeproof.spark..", "org.apache.spark..",
+                        "scala..")
+                .check(classes);
+        noClasses().that().haveSimpleName("SparkRun")
+                .should().dependOnClassesThat().resideInAnyPackage("org.apache.spark..", "scala..")
                 .check(classes);
     }
 

@@ -12,7 +12,8 @@ import org.treeproof.data.DataMatrix;
 /**
  * Properties of the blocked, multi-threaded kernel on seeded random data large enough to span several
  * sample blocks and feature chunks: identical bits for any thread count, for any order of the samples,
- * for a pair computed alone and for a feature subset taken by index; and agreement with a direct
+ * for a pair computed alone, for a subset of the samples (which is how a replicate run on another machine
+ * gets its distances) and for a feature subset taken by index; and agreement with a direct
  * transcription of each definition (the formulas in {@link Metric}'s documentation).
  */
 class KernelInvarianceTest {
@@ -90,6 +91,30 @@ class KernelInvarianceTest {
                 if (i != j) {
                     assertEquals(d.get(i, j), m.between(data.row(i), data.row(j)), 0.0, m + " pair " + i + "," + j);
                 }
+            }
+        }
+    }
+
+    /**
+     * A replicate shipped without the full matrix computes its distances over its own samples; they must be the
+     * entries the replicate would gather from the full matrix, bit for bit, also when the subset falls into other
+     * blocks than its samples did in the full run, and also over a feature subset.
+     */
+    @Test
+    void aSubsetOfSamplesHasTheBitsOfItsGatheredEntries() {
+        SplittableRandom rnd = new SplittableRandom(19);
+        int[] features = rnd.ints(23, 0, P).toArray();
+        for (Metric m : Metric.values()) {
+            DataMatrix data = dataFor(m, 20);
+            CondensedDistances full = m.compute(data, 2);
+            CondensedDistances fullOnFeatures = m.compute(data, features, 3);
+            for (int size : new int[] {2, 37, 129, 240}) {
+                int[] subset = rnd.ints(0, N).distinct().limit(size).sorted().toArray();
+                DataMatrix rows = data.selectSamples(subset);
+                assertArrayEquals(full.gather(subset).toCondensedArray(), m.compute(rows, 1).toCondensedArray(),
+                        m + " on " + size + " samples");
+                assertArrayEquals(fullOnFeatures.gather(subset).toCondensedArray(),
+                        m.compute(rows, features, 1).toCondensedArray(), m + " on " + size + " samples, 23 features");
             }
         }
     }
