@@ -60,6 +60,10 @@ final class TreeCommand implements Callable<Integer> {
             inputOptions.requireUntransformedFor(Metric.parse(metric));
         }
         var loaded = inputOptions.load(input);
+        if (loaded.samples() > CondensedDistances.MAX_ITEMS) {
+            throw new org.treeproof.data.InputException(input + ": " + loaded.samples() + " samples; the tree command "
+                    + "holds at most " + CondensedDistances.MAX_ITEMS + " (their pairwise distances must fit one array)");
+        }
         CondensedDistances d;
         String metricId;
         if (loaded.isDistanceTable()) {

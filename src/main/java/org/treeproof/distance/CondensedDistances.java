@@ -55,6 +55,9 @@ public final class CondensedDistances implements Serializable {
         return new CondensedDistances(n, condensed);
     }
 
+    /** The most items a condensed matrix holds: n(n-1)/2 pairs must fit one Java array. */
+    public static final int MAX_ITEMS = 65_536;
+
     /** The condensed length for {@code n} items, {@code n(n-1)/2}; fails if it does not fit an array. */
     public static int length(int n) {
         long len = (long) n * (n - 1) / 2;

@@ -104,6 +104,11 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
     /** Checks the settings against the size of the input; every problem in one message. */
     public void checkAgainst(int samples, boolean hasData) {
         var p = new ArrayList<String>();
+        if (samples > org.treeproof.distance.CondensedDistances.MAX_ITEMS) {
+            throw new InputException("the input has " + samples + " samples; a study holds at most "
+                    + org.treeproof.distance.CondensedDistances.MAX_ITEMS + " (their pairwise distances must fit one "
+                    + "array); assess a subsample of the samples");
+        }
         int smallest = resampling == Resampling.SUBSAMPLE ? (int) Math.round(sampleFraction * samples) : samples;
         if (maxK > samples - 1) {
             p.add("--max-k " + maxK + " needs more than " + maxK + " samples; the input has " + samples);
