@@ -53,26 +53,24 @@ final class DemoCommand implements Callable<Integer> {
         // The demo table is unpacked beside the output (kept, so that the report's input file can be opened).
         Path dir = out.toAbsolutePath().normalize().resolveSibling(out.getFileName() + "-input");
         Files.createDirectories(dir);
-        {
-            Path data = copy(table, dir);
-            Path labels = copy(table.replace(".csv", "-truth.csv"), dir);
-            Path cwd = Path.of("").toAbsolutePath();
-            var args = new ArrayList<>(List.of("assess", relative(cwd, data), "--log2", "--out", out.toString(),
-                    "--labels", relative(cwd, labels)));
-            if (force) {
-                args.add("--force");
-            }
-            if (threads != null) {
-                args.add("--threads");
-                args.add(threads.toString());
-            }
-            if (noProgress) {
-                args.add("--no-progress");
-            }
-            System.out.println("treeproof demo: assessing the bundled table " + table + " (invented data; see "
-                    + "demo-data/README.md)");
-            return Main.run(args.toArray(String[]::new));
+        Path data = copy(table, dir);
+        Path labels = copy(table.replace(".csv", "-truth.csv"), dir);
+        Path cwd = Path.of("").toAbsolutePath();
+        var args = new ArrayList<>(List.of("assess", relative(cwd, data), "--log2", "--out", out.toString(),
+                "--labels", relative(cwd, labels)));
+        if (force) {
+            args.add("--force");
         }
+        if (threads != null) {
+            args.add("--threads");
+            args.add(threads.toString());
+        }
+        if (noProgress) {
+            args.add("--no-progress");
+        }
+        System.out.println("treeproof demo: assessing the bundled table " + table + " (invented data; see "
+                + "demo-data/README.md)");
+        return Main.run(args.toArray(String[]::new));
     }
 
     private static String relative(Path cwd, Path p) {

@@ -42,6 +42,29 @@ public record Partition(int[] labels, int clusterCount) {
     /** A partition from any integer labels (any values, any order), relabelled canonically. */
     public static Partition of(int[] anyLabels) {
         int[] out = new int[anyLabels.length];
+        if (anyLabels.length == 0) {
+            return new Partition(out, 0);
+        }
+        int min = Integer.MAX_VALUE;
+        int max = Integer.MIN_VALUE;
+        for (int l : anyLabels) {
+            min = Math.min(min, l);
+            max = Math.max(max, l);
+        }
+        if ((long) max - min < (1 << 20)) {
+            // labels in a small range (the usual case, on hot paths): relabel through an array, no boxing
+            int[] map = new int[max - min + 1];
+            java.util.Arrays.fill(map, -1);
+            int next = 0;
+            for (int i = 0; i < anyLabels.length; i++) {
+                int slot = anyLabels[i] - min;
+                if (map[slot] < 0) {
+                    map[slot] = next++;
+                }
+                out[i] = map[slot];
+            }
+            return new Partition(out, next);
+        }
         var map = new java.util.HashMap<Integer, Integer>();
         for (int i = 0; i < anyLabels.length; i++) {
             out[i] = map.computeIfAbsent(anyLabels[i], x -> map.size());
