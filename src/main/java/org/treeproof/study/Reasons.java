@@ -9,12 +9,10 @@ import org.treeproof.score.JaccardStability;
 final class Reasons {
     private final Evidence evidence;
     private final DecisionRule rule;
-    private final Recommender recommender;
 
-    Reasons(Evidence evidence, DecisionRule rule, Recommender recommender) {
+    Reasons(Evidence evidence, DecisionRule rule) {
         this.evidence = evidence;
         this.rule = rule;
-        this.recommender = recommender;
     }
 
     private static String f(String format, Object... args) {
@@ -22,6 +20,7 @@ final class Reasons {
     }
 
     List<String> forSolution(LinkageEvidence le, KEvidence e, Verdict verdict, List<Integer> levels,
+            List<Recommendation.CriterionChoice> criteria,
             List<Recommendation.LinkageSummary> others) {
         var out = new ArrayList<String>();
         String link = le.linkage().id();
@@ -37,7 +36,7 @@ final class Reasons {
                             le.gap().ruleMet() ? "" : " (the rule was not met up to the largest k)"));
         }
         var disagree = new ArrayList<String>();
-        for (Recommendation.CriterionChoice c : recommender.criteria(le)) {
+        for (Recommendation.CriterionChoice c : criteria) {
             if (c.k() != e.k() && !c.criterion().equals("gap statistic")) {
                 disagree.add(f("%s picks k = %d", c.criterion(), c.k()));
             }

@@ -110,10 +110,11 @@ public final class Recommender {
             levels.add(e.k());
             levels.sort(null);
         }
-        var reasons = new Reasons(evidence, rule, this).forSolution(le, e, winner.verdict, levels, perLinkage.length > 1
+        List<Recommendation.CriterionChoice> criteria = criteria(le);
+        var reasons = new Reasons(evidence, rule).forSolution(le, e, winner.verdict, levels, criteria, perLinkage.length > 1
                 ? summaries : List.of());
         return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict, levels, reasons,
-                criteria(le), flaggedClusters(e), flaggedSamples(e), summaries, agreement, rule);
+                criteria, flaggedClusters(e), flaggedSamples(e), summaries, agreement, rule);
     }
 
     /**
@@ -164,7 +165,7 @@ public final class Recommender {
         int n = le.tree().leaves();
         double root = le.tree().height(n - 2);
         var cut = new CutHeight(root, Double.POSITIVE_INFINITY, root);
-        var reasons = new Reasons(evidence, rule, this).forUnsupported();
+        var reasons = new Reasons(evidence, rule).forUnsupported();
         return new Recommendation(le.linkage(), 1, cut, Verdict.UNSUPPORTED, List.of(), reasons, criteria(le),
                 List.of(), List.of(), summaries, agreement, rule);
     }
