@@ -28,9 +28,27 @@ final class Clusters {
     static int[] sizes(int[] labels, int k) {
         int[] s = new int[k];
         for (int l : labels) {
-            s[l]++;
+            if (l >= 0) {
+                s[l]++;
+            }
         }
         return s;
+    }
+
+    /** The number of outliers (label -1). */
+    static int outliers(int[] labels) {
+        int c = 0;
+        for (int l : labels) {
+            c += l < 0 ? 1 : 0;
+        }
+        return c;
+    }
+
+    /** The key's swatch for outliers, or none when there are none. */
+    static List<Key.Entry> outlierEntry(int[] labels, String unit) {
+        int o = outliers(labels);
+        return o == 0 ? List.of() : List.of(Key.Entry.fill(ChartColors.OUTLIER, "outliers (no cluster): " + o + " "
+                + unit(unit, o)));
     }
 
     /** One swatch per cluster with its size, e.g. "cluster 2: 41 samples". */

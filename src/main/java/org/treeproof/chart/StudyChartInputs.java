@@ -76,7 +76,7 @@ final class StudyChartInputs {
                 + " linkage)";
         return new Plan("dendrogram", title, "", (dir, base) -> {
             var in = new DendrogramInput(title, chartTree(chosen.tree()), evidence.sampleIds().toArray(String[]::new),
-                    solution == null ? new int[n] : solution.partition().labels(),
+                    solution == null ? new int[n] : solution.clustering().labels(),
                     solution == null ? Double.NaN : rec.cutHeight().chosen(), chosen.branchSupport(), heightLabel);
             var chart = new DendrogramChart(in);
             return new Drawn(chart.write(dir, base), chart.width(), chart.height());
@@ -90,7 +90,7 @@ final class StudyChartInputs {
         }
         String title = "Silhouette of " + rec.k() + " clusters, " + linkage + " linkage";
         return new Plan("silhouette", title, "", (dir, base) -> {
-            var in = new SilhouetteInput(title, solution.sampleSilhouette(), solution.partition().labels());
+            var in = new SilhouetteInput(title, solution.sampleSilhouette(), solution.clustering().labels());
             return new Drawn(new SilhouetteChart(in).write(dir, base), SilhouetteChart.WIDTH, SilhouetteChart.HEIGHT);
         });
     }
@@ -149,7 +149,7 @@ final class StudyChartInputs {
         }
         return new Plan("consensus", title, "", (dir, base) -> {
             var in = new ConsensusInput(title, evidence.samples(), condensed(chosen.consensus(), k),
-                    chosen.tree().leafOrder(), chosen.at(k).partition().labels());
+                    chosen.tree().leafOrder(), chosen.at(k).clustering().labels());
             return new Drawn(new ConsensusChart(in).write(dir, base), ConsensusChart.WIDTH, ConsensusChart.HEIGHT);
         });
     }
@@ -219,7 +219,7 @@ final class StudyChartInputs {
         return new Plan("heatmap", title, note, (dir, base) -> {
             var in = new DataHeatmapInput(title, n, q, features.values(data), data.sampleIds().toArray(String[]::new),
                     features.names(data), chartTree(chosen.tree()), features.tree(),
-                    solution == null ? null : solution.partition().labels());
+                    solution == null ? null : solution.clustering().labels());
             var chart = new DataHeatmapChart(in);
             return new Drawn(chart.write(dir, base), DataHeatmapChart.WIDTH, chart.height());
         });

@@ -128,6 +128,11 @@ final class AssessCommand implements Callable<Integer> {
         MemoryEstimate.of(studyInput.samples(), loaded.features(), settings, nThreads, studyInput.hasData())
                 .requireFits(Runtime.getRuntime().maxMemory(), studyInput.samples());
 
+        if (!quiet) {
+            for (String w : StudyOutputs.loneFeatureWarnings(loaded)) {
+                System.err.println("treeproof: " + w);
+            }
+        }
         String fingerprint = fingerprint(loaded, settings);
         Evidence evidence;
         CheckpointFile checkpoint = CheckpointFile.open(out, fingerprint, resume);

@@ -57,6 +57,11 @@ final class StudyOptions {
     @Option(names = "--null-replicates", paramLabel = "B", description = "Replicates per null data set (default: 10, sized so that a 2000-sample study stays within a minute on two cores).")
     Integer nullReplicates;
 
+    @Option(names = "--min-cluster-size", paramLabel = "M", description = "Fewest samples a cluster holds; samples "
+            + "on smaller branches are reported as outliers, not clusters (default: the larger of 5 and 1% of the "
+            + "samples; 1 turns outliers off).")
+    Integer minClusterSize;
+
     @Option(names = "--seed", paramLabel = "S", description = "Master seed; every random draw derives from it "
             + "(default: 1).")
     Long seed;
@@ -117,6 +122,9 @@ final class StudyOptions {
         }
         if (nullReplicates != null) {
             b.nullReplicates(nullReplicates);
+        }
+        if (minClusterSize != null) {
+            b.minClusterSize(minClusterSize);
         }
         if (seed != null) {
             b.seed(seed);

@@ -15,7 +15,6 @@ import org.treeproof.study.KEvidence;
 import org.treeproof.study.LinkageEvidence;
 import org.treeproof.study.NullStability;
 import org.treeproof.study.Recommendation;
-import org.treeproof.study.Recommender;
 
 /**
  * Writes {@code clusters.csv} (one row per sample, the recommended solution) and {@code scores.csv} (one row
@@ -32,41 +31,52 @@ public final class CsvOutputs {
     /** The columns of {@code scores.csv}. */
     public static final List<String> SCORE_COLUMNS = List.of("linkage", "k", "cutHeightLow", "cutHeightHigh",
             "cutHeightChosen", "tieDependent", "silhouette", "calinskiHarabasz", "daviesBouldin", "dunn", "gap", "gapSE",
-            "ariMean", "ariSD", "ariLow", "ariHigh", "pac", "nullAriMean", "nullAriLow", "nullAriHigh", "nullPacMean",
-            "nullSilhouetteMean", "pValueAri", "pValuePac", "pValueSilhouette", "pValueCombined", "smallestJaccard", "doubtfulClusters", "dissolvedClusters", "verdict");
+            "ariMean", "ariSD", "ariLow", "ariHigh", "pac", "nullAriMean", "nullAriSD", "nullPacMean",
+            "nullSilhouetteMean", "nullSilhouetteSD", "excess", "pValueAdjusted", "smallestJaccard", "doubtfulClusters",
+            "dissolvedClusters", "outliers", "verdict");
 
-    /** {@code clusters.csv}: per sample, its cluster in the recommended solution and its flags. */
+    /**
+     * {@code clusters.csv}: per sample, its cluster in the recommended solution and its flags, as the
+     * recommendation made them: {@code outlier} (set aside, empty cluster), {@code unstable},
+     * {@code negative-silhouette}.
+     */
     public static String clusters(Evidence evidence, Recommendation r) {
         var rows = new ArrayList<List<String>>();
         int n = evidence.samples();
-        if (r.k() == 1) {
-            for (int i = 0; i < n; i++) {
-                rows.add(List.of(text(evidence.sampleIds().get(i)), "1", "", "", ""));
-            }
-            return csv(CLUSTER_COLUMNS, rows);
+        var flags = new java.util.HashMap<Integer, Recommendation.SampleFlag>();
+        for (Recommendation.SampleFlag f : r.flaggedSamples()) {
+            flags.put(f.sample(), f);
         }
-        KEvidence e = evidence.linkages().stream().filter(le -> le.linkage() == r.linkage()).findFirst()
-                .orElseThrow().at(r.k());
-        double[] st = e.sampleStability();
-        double[] sil = e.sampleSilhouette();
-        double unstable = r.rule().unstableSample();
+        KEvidence e = r.k() == 1 ? null : evidence.linkages().stream().filter(le -> le.linkage() == r.linkage())
+                .findFirst().orElseThrow().at(r.k());
+        double[] st = e == null ? null : e.sampleStability();
+        double[] sil = e == null ? null : e.sampleSilhouette();
         for (int i = 0; i < n; i++) {
-            var flags = new ArrayList<String>();
-            if (st[i] < unstable) {
-                flags.add("unstable");
+            String id = text(evidence.sampleIds().get(i));
+            if (r.clustering().isOutlier(i)) {
+                rows.add(List.of(id, "", "", "", "outlier"));
+                continue;
             }
-            if (sil[i] < 0) {
-                flags.add("negative-silhouette");
+            String cluster = String.valueOf(r.clustering().label(i) + 1);
+            if (e == null) {
+                rows.add(List.of(id, cluster, "", "", ""));
+                continue;
             }
-            rows.add(List.of(text(evidence.sampleIds().get(i)), String.valueOf(e.partition().label(i) + 1), num(st[i]),
-                    num(sil[i]), String.join(";", flags)));
+            var f = flags.get(i);
+            var words = new ArrayList<String>();
+            if (f != null && f.unstable()) {
+                words.add("unstable");
+            }
+            if (f != null && f.negativeSilhouette()) {
+                words.add("negative-silhouette");
+            }
+            rows.add(List.of(id, cluster, num(st[i]), num(sil[i]), String.join(";", words)));
         }
         return csv(CLUSTER_COLUMNS, rows);
     }
 
     /** {@code scores.csv}: every measure for every linkage and k. */
     public static String scores(Evidence evidence, Recommendation r) {
-        Recommender verdicts = Recommender.of(evidence, r.rule());
         var rows = new ArrayList<List<String>>();
         for (LinkageEvidence le : evidence.linkages()) {
             for (KEvidence e : le.byK()) {
@@ -98,18 +108,17 @@ public final class CsvOutputs {
                 row.add(num(a.high()));
                 row.add(num(e.stability().pac()));
                 row.add(ns == null ? "" : num(ns.ariMean()));
-                row.add(ns == null ? "" : num(ns.ariLow()));
-                row.add(ns == null ? "" : num(ns.ariHigh()));
+                row.add(ns == null ? "" : num(ns.ariSD()));
                 row.add(ns == null ? "" : num(ns.pacMean()));
                 row.add(ns == null ? "" : num(ns.silhouetteMean()));
-                row.add(ns == null ? "" : num(ns.pValueAri()));
-                row.add(ns == null ? "" : num(ns.pValuePac()));
-                row.add(ns == null ? "" : num(ns.pValueSilhouette()));
-                row.add(ns == null ? "" : num(ns.pValueCombined()));
+                row.add(ns == null ? "" : num(ns.silhouetteSD()));
+                row.add(ns == null ? "" : num(ns.excess()));
+                row.add(ns == null ? "" : num(ns.pValueAdjusted()));
                 row.add(num(e.worstJaccard()));
                 row.add(String.valueOf(doubtful));
                 row.add(String.valueOf(dissolved));
-                row.add(verdicts.verdictOf(e).id());
+                row.add(String.valueOf(e.outliers()));
+                row.add(r.assessment(le.linkage(), e.k()).verdict().id());
                 rows.add(row);
             }
         }

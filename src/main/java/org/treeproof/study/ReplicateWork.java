@@ -12,10 +12,12 @@ import org.treeproof.resample.ReplicateTask;
 import org.treeproof.score.BranchSupport;
 import org.treeproof.tree.Linkage;
 import org.treeproof.tree.MergeTree;
+import org.treeproof.tree.SizedCuts;
 
 /**
  * The replicate function: a pure function of (data, distances, linkages, plan) that draws the replicate,
- * reclusters it with every linkage and cuts it at k = 2..maxK.
+ * reclusters it with every linkage and cuts it into k = 1..maxK clusters of at least the (scaled) minimum size,
+ * smaller branches marked as outliers ({@link SizedCuts}).
  *
  * <p>Sample replicates gather their rows of the full distance matrix and never recompute a distance;
  * feature replicates recompute distances over their features, on one thread (the replicates themselves
@@ -38,15 +40,20 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
     private final List<BranchSupport> supports;
     private final ReplicatePlanner planner;
     private final int maxK;
+    private final int minClusterSize;
+    private final int samples;
 
     /**
      * @param data      the data table, or {@code null} when only distances are known
      * @param distances the full matrix under {@code metric}, or {@code null} to compute distances from {@code data}
      * @param supports  per linkage, the branch-support counter of its reference tree, or {@code null} to skip
      *                  branch support
+     * @param minClusterSize the study's smallest cluster, scaled to each replicate by
+     *                  {@link StudySettings#minClusterSizeFor}
+     * @param samples   the number of samples of the study
      */
     ReplicateWork(DataMatrix data, CondensedDistances distances, Metric metric, List<Linkage> linkages,
-            List<BranchSupport> supports, ReplicatePlanner planner, int maxK) {
+            List<BranchSupport> supports, ReplicatePlanner planner, int maxK, int minClusterSize, int samples) {
         if (data == null && distances == null) {
             throw new IllegalArgumentException("replicate work needs data or distances");
         }
@@ -60,6 +67,8 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         this.supports = supports == null ? null : List.copyOf(supports);
         this.planner = planner;
         this.maxK = maxK;
+        this.minClusterSize = minClusterSize;
+        this.samples = samples;
     }
 
     @Override
@@ -81,10 +90,12 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         BranchSupport.Replicate[] support = supports == null ? null : new BranchSupport.Replicate[linkages.size()];
         for (int l = 0; l < linkages.size(); l++) {
             MergeTree tree = linkages.get(l).cluster(d);
-            labels[l] = new int[maxK - 1][];
-            for (int k = 2; k <= maxK; k++) {
-                int[] onDraws = tree.cutLabelsAtK(k);
-                labels[l][k - 2] = firstDrawOf == null ? onDraws : onDistinct(onDraws, firstDrawOf);
+            int minSize = StudySettings.minClusterSizeFor(minClusterSize, samples, tree.leaves());
+            int[][] cuts = SizedCuts.of(tree, minSize, maxK).labelsUpTo(maxK);
+            labels[l] = new int[maxK][];
+            for (int k = 1; k <= maxK; k++) {
+                int[] onDraws = cuts[k - 1];
+                labels[l][k - 1] = firstDrawOf == null ? onDraws : onDistinct(onDraws, firstDrawOf);
             }
             if (support != null) {
                 support[l] = supports.get(l).score(draws, tree);
@@ -103,7 +114,8 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         if (distances != null || planner.resamplesFeatures()) {
             return this;
         }
-        return new ReplicateWork(data, metric.compute(data, threads), metric, linkages, supports, planner, maxK);
+        return new ReplicateWork(data, metric.compute(data, threads), metric, linkages, supports, planner, maxK,
+                minClusterSize, samples);
     }
 
     /** For each distinct sample, the position of its first draw; null when there are no repeats. */
@@ -131,12 +143,13 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         for (int a = 0; a < raw.length; a++) {
             raw[a] = onDraws[firstDrawOf[a]];
         }
-        return org.treeproof.partition.Partition.of(raw).labels();
+        return org.treeproof.partition.Clustering.of(raw).labels();
     }
 
     /** The data travel; the full matrix only when there is no data table to compute it from. */
     private Object writeReplace() {
-        return new SerialForm(data, data == null ? distances : null, metric, linkages, supports, planner, maxK);
+        return new SerialForm(data, data == null ? distances : null, metric, linkages, supports, planner, maxK,
+                minClusterSize, samples);
     }
 
     private void readObject(ObjectInputStream in) throws java.io.InvalidObjectException {
@@ -144,9 +157,11 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
     }
 
     private record SerialForm(DataMatrix data, CondensedDistances distances, Metric metric, List<Linkage> linkages,
-            List<BranchSupport> supports, ReplicatePlanner planner, int maxK) implements Serializable {
+            List<BranchSupport> supports, ReplicatePlanner planner, int maxK, int minClusterSize, int samples)
+            implements Serializable {
         private Object readResolve() {
-            return new ReplicateWork(data, distances, metric, linkages, supports, planner, maxK);
+            return new ReplicateWork(data, distances, metric, linkages, supports, planner, maxK, minClusterSize,
+                    samples);
         }
     }
 }

@@ -224,6 +224,16 @@ public final class MergeTree implements Serializable {
         return new KCut(k, new Partition(labels, k), low, high, KCut.chooseHeight(low, high), k < n && low == high);
     }
 
+    /** The lowest height of the cut at k ({@link KCut#low()}), without the labels. */
+    double cutLow(int k) {
+        return k == n ? 0.0 : prefixMax[n - k - 1];
+    }
+
+    /** The highest height of the cut at k ({@link KCut#high()}), without the labels. */
+    double cutHigh(int k) {
+        return k == 1 ? Double.POSITIVE_INFINITY : suffixMin[n - k];
+    }
+
     /**
      * The labels of {@link #cutAtK(int)} without the record: canonical (clusters numbered
      * {@code 0..k-1} in order of their first item), O(n).

@@ -65,7 +65,7 @@ class StudyRunnerTest {
             for (ClusterEvidence c : k3.clusters()) {
                 assertEquals(1.0, c.jaccard(), 1e-12);
             }
-            assertTrue(k3.stability().nullModel().pValueAri() <= 1.0 / 6 + 1e-12);
+            assertTrue(k3.stability().nullModel().pValueAdjusted() <= 1.0 / 6 + 1e-12);
         }
     }
 
