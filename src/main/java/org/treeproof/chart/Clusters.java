@@ -12,6 +12,11 @@ final class Clusters {
     private Clusters() {
     }
 
+    /** The strip's text for a run of one label: the 1-based cluster number, or "out" for outliers (-1). */
+    static String stripText(int label) {
+        return label < 0 ? "out" : Integer.toString(label + 1);
+    }
+
     /** Labels are 0-based inside the program and 1-based for readers, as on the command line. */
     static String name(int label) {
         return "cluster " + (label + 1);

@@ -29,11 +29,19 @@ public final class CsvOutputs {
     public static final List<String> CLUSTER_COLUMNS = List.of("sample", "cluster", "stability", "silhouette", "flag");
 
     /** The columns of {@code scores.csv}. */
-    public static final List<String> SCORE_COLUMNS = List.of("linkage", "k", "cutHeightLow", "cutHeightHigh",
-            "cutHeightChosen", "tieDependent", "silhouette", "calinskiHarabasz", "daviesBouldin", "dunn", "gap", "gapSE",
-            "ariMean", "ariSD", "ariLow", "ariHigh", "pac", "nullAriMean", "nullAriSD", "nullPacMean",
+    public static final List<String> SCORE_COLUMNS = columns();
+
+    private static List<String> columns() {
+        var c = new ArrayList<String>(List.of("linkage", "k", "cutHeightLow", "cutHeightHigh", "cutHeightChosen",
+                "tieDependent"));
+        for (org.treeproof.study.Criterion m : org.treeproof.study.Criterion.fitMeasures()) {
+            c.add(m.key());
+        }
+        c.addAll(List.of("gap", "gapSE", "ariMean", "ariSD", "ariLow", "ariHigh", "pac", "nullAriMean", "nullAriSD", "nullPacMean",
             "nullSilhouetteMean", "nullSilhouetteSD", "excess", "pValueAdjusted", "smallestJaccard", "doubtfulClusters",
-            "dissolvedClusters", "outliers", "verdict");
+            "dissolvedClusters", "outliers", "verdict"));
+        return List.copyOf(c);
+    }
 
     /**
      * {@code clusters.csv}: per sample, its cluster in the recommended solution and its flags, as the
@@ -96,10 +104,9 @@ public final class CsvOutputs {
                 row.add(num(e.cutHeight().high()));
                 row.add(num(e.cutHeight().chosen()));
                 row.add(String.valueOf(e.tieDependent()));
-                row.add(num(e.silhouette()));
-                row.add(num(e.calinskiHarabasz()));
-                row.add(num(e.daviesBouldin()));
-                row.add(num(e.dunn()));
+                for (org.treeproof.study.Criterion c : org.treeproof.study.Criterion.fitMeasures()) {
+                    row.add(num(c.of(e)));
+                }
                 row.add(num(e.gap()));
                 row.add(num(e.gapSE()));
                 row.add(num(a.mean()));

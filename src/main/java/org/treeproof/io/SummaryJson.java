@@ -237,10 +237,9 @@ public final class SummaryJson {
         }
         cutHeight(g, "cutHeight", e.cutHeight());
         g.writeBooleanField("tieDependent", e.tieDependent());
-        number(g, "silhouette", e.silhouette());
-        number(g, "calinskiHarabasz", e.calinskiHarabasz());
-        number(g, "daviesBouldin", e.daviesBouldin());
-        number(g, "dunn", e.dunn());
+        for (org.treeproof.study.Criterion c : org.treeproof.study.Criterion.fitMeasures()) {
+            number(g, c.key(), c.of(e));
+        }
         number(g, "gap", e.gap());
         number(g, "gapSE", e.gapSE());
         g.writeObjectFieldStart("stability");

@@ -116,7 +116,7 @@ public final class MethodsParagraph {
             out.add(f("To tell structure from noise, the same procedure (%d replicates each) was applied to %d null "
                     + "data sets drawn from a unimodal elliptical distribution with the data's principal axes, robust "
                     + "scales along them (normalised median absolute deviations, floored at the data's background "
-                    + "noise level as in %s) and the data's own distribution of distances from the centre, so that "
+                    + "noise level; %s) and the data's own distribution of distances from the centre, so that "
                     + "heavy tails and far samples are kept and clusters are not. For each linkage and k, the excess "
                     + "over the null was the mean ARI and the average silhouette, each standardised by the null sets' "
                     + "mean and standard deviation at that linkage and k, added together. Its p-value was adjusted "
@@ -126,7 +126,7 @@ public final class MethodsParagraph {
                     + "on the same number. The largest observed excess against the null sets' largest is the test of "
                     + "any cluster structure; beside its Monte Carlo p-value a p-value from a normal distribution "
                     + "fitted to the null sets' largest excess is reported.", s.nullReplicates(), s.nullSets(),
-                    narrative(c, Reference.LIU), cite(c, Reference.WESTFALL_YOUNG), s.nullSets(),
+                    cite(c, Reference.LIU), cite(c, Reference.WESTFALL_YOUNG), s.nullSets(),
                     cite(c, Reference.HOPE), s.nullReplicates()));
         } else {
             out.add("Stability was not calibrated against null data.");
@@ -160,12 +160,12 @@ public final class MethodsParagraph {
             return f("A solution was called supported when it beat the null data (adjusted p ≤ %s) and every cluster "
                     + "was stable (mean Jaccard at least %s; %s); tentative when it beat the null data and no cluster "
                     + "dissolved (every mean Jaccard above %s) but a cluster was only doubtful; and unsupported "
-                    + "otherwise. No silhouette threshold entered the verdict; the average silhouette is read as %s "
-                    + "suggest only as a description. Among the solutions the better verdict was preferred, then the "
+                    + "otherwise. No silhouette threshold entered the verdict; the average silhouette was read only as a "
+                    + "description (%s). Among the solutions the better verdict was preferred, then the "
                     + "larger excess over the null, the higher smallest cluster Jaccard and the higher cophenetic "
                     + "correlation; when no solution was better than unsupported, the data were treated as one group "
                     + "(k = 1).", Numbers.plain(r.alpha()), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
-                    Numbers.plain(r.dissolvedJaccard()), narrative(c, Reference.KAUFMAN_ROUSSEEUW));
+                    Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW));
         }
         return f("Without null data no solution could be called more than tentative, which needed every cluster "
                 + "stable (mean Jaccard at least %s; %s), a mean ARI of at least %s and an average silhouette above "

@@ -14,6 +14,7 @@ import org.treeproof.study.LinkageEvidence;
 import org.treeproof.study.NullStability;
 import org.treeproof.study.Recommendation;
 import org.treeproof.study.Reason;
+import org.treeproof.study.Recommender;
 import org.treeproof.study.StudySettings;
 import org.treeproof.study.Verdict;
 import org.treeproof.tree.Linkage;
@@ -43,7 +44,20 @@ final class ModelFactory {
             throw new IllegalArgumentException("the run's seed or metric differ from the study's settings");
         }
         LinkageEvidence le = linkageEvidence(rec.linkage());
-        if (rec.k() > 1 && (le.at(rec.k()) == null || rec.assessment(le.linkage(), rec.k()).verdict() != rec.verdict())) {
+        if (rec.k() > 1 && le.at(rec.k()) == null) {
+            throw new IllegalArgumentException("the recommendation does not come from this evidence");
+        }
+        int assessed = 0;
+        for (LinkageEvidence l : evidence.linkages()) {
+            for (KEvidence e : l.byK()) {
+                var a = rec.assessment(l.linkage(), e.k());
+                if (a == null || !a.facts().equals(Recommender.facts(l, e))) {
+                    throw new IllegalArgumentException("the recommendation does not come from this evidence");
+                }
+                assessed++;
+            }
+        }
+        if (assessed != rec.assessments().size()) {
             throw new IllegalArgumentException("the recommendation does not come from this evidence");
         }
         if (rec.linkages().size() != evidence.linkages().size()) {
@@ -194,6 +208,9 @@ final class ModelFactory {
         out.add(new ReportModel.Setting("PAC interval", "(" + Numbers.plain(s.pacLow()) + ", "
                 + Numbers.plain(s.pacHigh()) + "]"));
         out.add(new ReportModel.Setting("Seed", Long.toString(s.seed())));
+        out.add(new ReportModel.Setting("Smallest cluster (samples; smaller branches are outliers)",
+                Integer.toString(s.minClusterSize(evidence.samples())) + (s.minClusterSize() == 0
+                        ? " (default: the larger of 5 and 1% of the samples)" : "")));
         out.add(new ReportModel.Setting("Null test level (p at most)", Numbers.plain(r.alpha())));
         out.add(new ReportModel.Setting("Stable cluster (mean Jaccard at least)", Numbers.plain(r.stableJaccard())));
         out.add(new ReportModel.Setting("Dissolved cluster (mean Jaccard at most)", Numbers.plain(r.dissolvedJaccard())));

@@ -63,6 +63,19 @@ public enum Criterion {
         return direction;
     }
 
+    /**
+     * Whether it is a fit measure of the clusters themselves (written beside k in every output), rather than a
+     * stability or null measure written with its own group.
+     */
+    public boolean fit() {
+        return this == SILHOUETTE || this == CALINSKI_HARABASZ || this == DAVIES_BOULDIN || this == DUNN;
+    }
+
+    /** The fit measures, in output order. */
+    public static java.util.List<Criterion> fitMeasures() {
+        return java.util.Arrays.stream(values()).filter(Criterion::fit).toList();
+    }
+
     /** Whether it needs the feature table (or, for the excess, null data drawn from it). */
     public boolean needsFeatures() {
         return needsFeatures;

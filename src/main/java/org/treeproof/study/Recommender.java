@@ -34,7 +34,7 @@ public final class Recommender {
     }
 
     /** The facts the rule reads for one solution. */
-    static Assessment.Facts facts(LinkageEvidence le, KEvidence e) {
+    public static Assessment.Facts facts(LinkageEvidence le, KEvidence e) {
         NullStability ns = e.stability().nullModel();
         boolean allStable = e.clusters().stream().allMatch(c -> c.status() == JaccardStability.Status.STABLE);
         boolean noneDissolved = e.clusters().stream().noneMatch(c -> c.status() == JaccardStability.Status.DISSOLVED

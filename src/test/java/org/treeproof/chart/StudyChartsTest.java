@@ -161,7 +161,7 @@ class StudyChartsTest {
         assertEquals(0, RenderChecks.count(tree, ChartColors.cluster(1)));
         assertTrue(byId.get("dendrogram").title().contains("no split"));
         // the consensus is shown at the most stable k and says that no k is supported
-        int k = StudyChartInputs.mostStableK(chosen(noise.evidence(), r));
+        int k = StudyChartInputs.strongestK(chosen(noise.evidence(), r), r);
         assertTrue(k >= 2);
         assertTrue(byId.get("consensus").title().contains("k = " + k + " (no k is supported"),
                 byId.get("consensus").title());
@@ -225,10 +225,10 @@ class StudyChartsTest {
             assertEquals(t.left(s), ct.left()[s]);
             assertEquals(t.right(s), ct.right()[s]);
         }
-        // the k the unsupported consensus falls back on is the recommender's own stability choice
-        Recommendation.CriterionChoice byStability = r.criteria().stream()
-                .filter(c -> c.criterion() == org.treeproof.study.Criterion.MEAN_ARI).findFirst().orElseThrow();
-        assertEquals(byStability.k(), StudyChartInputs.mostStableK(le));
+        // the k the unsupported consensus falls back on is the rule's strongest solution of that linkage
+        int strongest = r.assessments().stream().filter(a -> a.linkage() == le.linkage()).sorted(r.rule().order())
+                .findFirst().orElseThrow().k();
+        assertEquals(strongest, StudyChartInputs.strongestK(le, r));
     }
 
     @Test
