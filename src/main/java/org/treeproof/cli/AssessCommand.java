@@ -14,6 +14,7 @@ import org.treeproof.io.CsvOutputs;
 import org.treeproof.io.LabelsReader;
 import org.treeproof.io.LoadedInput;
 import org.treeproof.io.OutputDirectory;
+import org.treeproof.io.OutputGuard;
 import org.treeproof.io.SummaryJson;
 import org.treeproof.resample.ReferenceData;
 import org.treeproof.resample.Resampling;
@@ -114,9 +115,8 @@ final class AssessCommand implements Callable<Integer> {
         Engine chosen = engine == null ? Engine.LOCAL : Engine.parse(engine);
         chosen.requireAvailable();
         StudySettings settings = study.settings();
-        if (OutputDirectory.exists(out) && !force) {
-            throw new InputException("--out " + out + ": already exists; choose another directory or add --force");
-        }
+        List<Path> reads = labels == null ? List.of(input) : List.of(input, labels);
+        OutputGuard.check(out, "--out", force, reads);
         inputOptions.requireUntransformedFor(settings.metric());
         LoadedInput loaded = inputOptions.load(input);
         StudyInput studyInput = loaded.isDistanceTable()
@@ -152,7 +152,7 @@ final class AssessCommand implements Callable<Integer> {
         Recommendation rec = Recommender.of(evidence, DecisionRule.DEFAULT).recommend();
         var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine(), nThreads,
                 (System.nanoTime() - started) / 1e9);
-        try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force)) {
+        try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force, reads)) {
             outputs.writeInto(dir);
             dir.commit();
         }
