@@ -86,10 +86,12 @@ final class AssessCommand implements Callable<Integer> {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
-    /** The command line as typed (after the program name), for the reproducibility section. */
+    /** The command line as typed (the words after the sub-command's name), for the reproducibility section. */
     private String[] commandLine() {
-        var args = new ArrayList<String>(List.of("treeproof", "assess"));
-        args.addAll(spec.commandLine().getParseResult().originalArgs());
+        List<String> typed = spec.commandLine().getParseResult().originalArgs();
+        int at = typed.indexOf(spec.name());
+        var args = new ArrayList<String>(List.of("treeproof", spec.name()));
+        args.addAll(typed.subList(at + 1, typed.size()));
         return args.toArray(String[]::new);
     }
 

@@ -211,7 +211,7 @@ public final class OutputGuard {
     }
 
     /** A short cause for an I/O failure: "permission denied" instead of the JDK's bare path. */
-    static String describe(IOException e) {
+    public static String describe(IOException e) {
         if (e instanceof AccessDeniedException) {
             return "permission denied";
         }
