@@ -11,6 +11,7 @@ import org.treeproof.data.InputException;
 import org.treeproof.distance.Metric;
 import org.treeproof.io.CheckpointFile;
 import org.treeproof.io.CsvOutputs;
+import org.treeproof.io.DiskFull;
 import org.treeproof.io.LabelsReader;
 import org.treeproof.io.LoadedInput;
 import org.treeproof.io.OutputDirectory;
@@ -118,13 +119,18 @@ final class AssessCommand implements Callable<Integer> {
         chosen.requireAvailable();
         StudySettings settings = study.settings();
         List<Path> reads = labels == null ? List.of(input) : List.of(input, labels);
+        InputHints.requireReadable(input, "INPUT");
+        if (labels != null) {
+            InputHints.requireReadable(labels, "--labels");
+        }
         OutputGuard.check(out, "--out", force, reads);
         inputOptions.requireUntransformedFor(settings.metric());
         LoadedInput loaded = inputOptions.load(input);
         StudyInput studyInput = loaded.isDistanceTable()
                 ? StudyInput.ofDistances(loaded.sampleIds(), loaded.distances().orElseThrow())
                 : StudyInput.of(loaded.matrix().orElseThrow());
-        settings.checkAgainst(studyInput.samples(), studyInput.hasData());
+        settings.checkAgainst(studyInput.samples(), studyInput.hasData(), study.maxKGiven());
+        org.treeproof.study.Magnitudes.requireWithinLimit(studyInput);
         String[] classes = labels == null ? null
                 : LabelsReader.read(labels, inputOptions.delimiter().orElse(null), loaded.sampleIds());
         MemoryEstimate.of(studyInput.samples(), loaded.features(), settings, nThreads, studyInput.hasData())
@@ -133,6 +139,7 @@ final class AssessCommand implements Callable<Integer> {
         String fingerprint = fingerprint(loaded, settings);
         Evidence evidence;
         CheckpointFile checkpoint = CheckpointFile.open(out, fingerprint, resume);
+        KeptWork kept = new KeptWork(checkpoint, out.toString(), System.err);
         try (Engine.Run run = chosen.start(nThreads);
                 var progress = new ProgressReporter(System.err, quiet || noProgress)) {
             if (resume && !quiet) {
@@ -146,8 +153,13 @@ final class AssessCommand implements Callable<Integer> {
                     .withCheckpoint(checkpoint).run();
         } catch (InputException e) {
             // the input cannot be studied as asked: nothing worth resuming
+            kept.close();
             checkpoint.discard();
             throw e;
+        } catch (RuntimeException e) {
+            kept.close();
+            checkpoint.close();
+            throw DiskFull.causedBy(e) ? kept.diskFullDuringStudy() : e;
         } finally {
             checkpoint.close();
         }
@@ -157,7 +169,11 @@ final class AssessCommand implements Callable<Integer> {
         try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force, reads)) {
             outputs.writeInto(dir);
             dir.commit();
+        } catch (RuntimeException e) {
+            kept.close();
+            throw DiskFull.causedBy(e) ? kept.diskFullDuringResults() : e;
         }
+        kept.close();
         checkpoint.discard();
         if (!quiet) {
             System.out.println(outputs.headline());

@@ -45,6 +45,11 @@ public final class Main implements java.util.concurrent.Callable<Integer> {
             err.println("treeproof: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
+        if (org.treeproof.io.DiskFull.causedBy(e)) {
+            err.println("treeproof: no space left on device; free some space and run the command again (" + e.getMessage()
+                    + ")");
+            return ExitCodes.BAD_INPUT;
+        }
         if (e instanceof NotEnoughMemoryException) {
             err.println("treeproof: " + e.getMessage());
             return ExitCodes.NOT_ENOUGH_MEMORY;

@@ -31,6 +31,7 @@ public final class OutputDirectory implements AutoCloseable {
     private final List<Path> protect;
     private final Thread cleanup;
     private boolean committed;
+    private int filesWritten;
 
     private OutputDirectory(Path target, Path staging, boolean replace, List<Path> protect) {
         this.target = target;
@@ -108,6 +109,7 @@ public final class OutputDirectory implements AutoCloseable {
     /** Writes bytes to a file inside the staging directory. */
     public void write(String relative, byte[] bytes) {
         try {
+            DiskFull.beforeResultFile(filesWritten++);
             Files.write(file(relative), bytes);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + relative, e);
