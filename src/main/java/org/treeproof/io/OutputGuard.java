@@ -205,8 +205,8 @@ public final class OutputGuard {
             throw new InputException(shown + ": " + p + " is a file, not a folder; name a directory for the results");
         }
         if (!Files.isWritable(p)) {
-            throw new InputException(shown + ": cannot create it in " + p + " (permission denied); choose a folder "
-                    + "you can write to");
+            throw new InputException(shown + ": cannot create it in " + p + ": that folder is not writable (permission "
+                    + "denied, or a read-only file system); choose a folder you can write to");
         }
     }
 
