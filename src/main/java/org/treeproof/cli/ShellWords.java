@@ -10,7 +10,7 @@ import java.util.stream.Stream;
  * inside becomes {@code '\''}), as POSIX.1-2017, Shell Command Language, section 2.2.3 defines single quoting.
  */
 final class ShellWords {
-    private static final Pattern PLAIN = Pattern.compile("[A-Za-z0-9_./:,+=@%^-]+");
+    private static final Pattern PLAIN = Pattern.compile("[A-Za-z0-9_./:,+@%-]+");
 
     private ShellWords() {
     }

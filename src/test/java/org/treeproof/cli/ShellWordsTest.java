@@ -15,7 +15,7 @@ class ShellWordsTest {
 
     @Test
     void aShellReadsBackTheSameWords() throws Exception {
-        List<String> words = List.of("assess", "my data.csv", "it's", "$HOME", "a;b|c", "*", "tab\there", "\"q\"", "~");
+        List<String> words = List.of("assess", "my data.csv", "it's", "$HOME", "a;b|c", "*", "tab\there", "\"q\"", "~", "=x", "^y", "--k=2");
         String line = ShellWords.join(words.toArray(String[]::new));
         Process p = new ProcessBuilder("sh", "-c", "for w in " + line + "; do printf '%s\\n' \"$w\"; done").start();
         String out = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
