@@ -70,7 +70,9 @@ final class AssessCommand implements Callable<Integer> {
             + "master). Results do not depend on it.")
     String engine;
 
-    @Option(names = "--force", description = "Replace DIR if it exists (only once the new results are complete).")
+    @Option(names = "--force", description = "Replace DIR if it exists and treeproof wrote it, unchanged (only once the "
+            + "new results are complete). Never replaces a folder holding the input, the current directory or a folder "
+            + "above it.")
     boolean force;
 
     @Option(names = "--resume", description = "Continue a run of the same study that was interrupted, from the "

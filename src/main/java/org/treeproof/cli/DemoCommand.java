@@ -35,7 +35,8 @@ final class DemoCommand implements Callable<Integer> {
                     + "nested-strains.csv (two levels). Default: ${DEFAULT-VALUE}.")
     String table;
 
-    @Option(names = "--force", description = "Replace DIR if it exists.")
+    @Option(names = "--force", description = "Replace DIR if it exists and treeproof wrote it; also overwrite an "
+            + "edited copy of the demo table in DIR-input.")
     boolean force;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
