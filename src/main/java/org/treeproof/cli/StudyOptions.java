@@ -66,6 +66,48 @@ final class StudyOptions {
             + "(default: 1).")
     Long seed;
 
+    /**
+     * The valid range of a whole-number option, in the words of the rule that owns it ("--replicates must be between
+     * 2 and 10000"), or null when the option has no upper limit; for a value too large to be read at all.
+     */
+    static String rangeOf(String option) {
+        if (option.equals("--threads")) {
+            try {
+                Threads.resolve(Integer.MAX_VALUE, option);
+            } catch (InputException e) {
+                return e.getMessage().replaceFirst(", got .*$", "");
+            }
+            return null;
+        }
+        StudySettings.Builder b = StudySettings.builder();
+        switch (option) {
+            case "--max-k" -> b.maxK(Integer.MAX_VALUE);
+            case "--replicates" -> b.replicates(Integer.MAX_VALUE);
+            case "--null-replicates" -> b.nullReplicates(Integer.MAX_VALUE);
+            case "--reference-sets" -> b.referenceSets(Integer.MAX_VALUE);
+            case "--null-sets" -> b.nullSets(Integer.MAX_VALUE);
+            default -> {
+                return null;
+            }
+        }
+        try {
+            b.build();
+            return null;
+        } catch (InputException e) {
+            for (String part : e.getMessage().split("; ")) {
+                if (part.startsWith(option + " ")) {
+                    return part.replaceFirst(", got .*$", "");
+                }
+            }
+            return null;
+        }
+    }
+
+    /** Whether the user gave --max-k (otherwise the default applies). */
+    boolean maxKGiven() {
+        return maxK != null;
+    }
+
     /** The settings, every problem reported at once. */
     StudySettings settings() {
         var problems = new ArrayList<String>();

@@ -110,7 +110,7 @@ final class StudyOutputs {
     RunInfo runInfo() {
         return new RunInfo("treeproof", Main.toolVersion(), loaded.source().path(), loaded.source().sha256(),
                 evidence.samples(), evidence.features(), preparationSteps(), evidence.settings().metric().id(),
-                String.join(" ", commandLine), evidence.settings().seed(), threads, seconds,
+                ShellWords.join(commandLine), evidence.settings().seed(), threads, seconds,
                 DateTimeFormatter.ISO_OFFSET_DATE_TIME.format(ZonedDateTime.now().withNano(0)));
     }
 

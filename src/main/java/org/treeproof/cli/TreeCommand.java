@@ -59,6 +59,7 @@ final class TreeCommand implements Callable<Integer> {
         if (!inputOptions.distances()) {
             inputOptions.requireUntransformedFor(Metric.parse(metric));
         }
+        InputHints.requireReadable(input, "INPUT");
         var loaded = inputOptions.load(input);
         if (loaded.samples() > CondensedDistances.MAX_ITEMS) {
             throw new org.treeproof.data.InputException(input + ": " + loaded.samples() + " samples; the tree command "
@@ -80,6 +81,11 @@ final class TreeCommand implements Callable<Integer> {
             }
             d = m.compute(loaded.matrix().orElseThrow(), Threads.resolve(threads, "--threads"));
             metricId = m.id();
+        }
+        if (loaded.isDistanceTable()) {
+            org.treeproof.study.Magnitudes.requireWithinLimit(loaded.sampleIds(), d);
+        } else {
+            org.treeproof.study.Magnitudes.requireWithinLimit(loaded.matrix().orElseThrow());
         }
         int n = d.size();
         for (int k : cutK) {

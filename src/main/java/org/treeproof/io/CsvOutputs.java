@@ -151,13 +151,23 @@ public final class CsvOutputs {
         return Double.isFinite(v) ? Double.toString(v) : "";
     }
 
+    /** A minus sign followed by a plain decimal number: a spreadsheet reads it as that number and runs nothing. */
+    private static final java.util.regex.Pattern NEGATIVE_NUMBER =
+            java.util.regex.Pattern.compile("-[0-9]+(\\.[0-9]+)?([eE][-+]?[0-9]+)?");
+
     /**
-     * Neutralises text that a spreadsheet would evaluate: a leading {@code = + - @}, tab or carriage return
-     * gets a leading apostrophe (the OWASP advice on CSV injection). Numbers written by {@link #num} never
-     * pass through here, so negative values stay numbers.
+     * Neutralises text that a spreadsheet would evaluate: a leading {@code =}, {@code +}, {@code @}, tab or
+     * carriage return, or a leading {@code -} that does not start a plain number, gets a leading apostrophe (the
+     * OWASP advice on CSV injection). Ids such as {@code -5} or {@code -0.25e3} stay as they are, so joins in R or
+     * pandas still match; {@code -2+3} or {@code -A1} are guarded. Numbers written by {@link #num} never pass
+     * through here, so negative values stay numbers.
      */
     public static String text(String s) {
-        if (!s.isEmpty() && "=+-@\t\r".indexOf(s.charAt(0)) >= 0) {
+        if (s.isEmpty()) {
+            return s;
+        }
+        char c = s.charAt(0);
+        if ("=+@\t\r".indexOf(c) >= 0 || (c == '-' && !NEGATIVE_NUMBER.matcher(s).matches())) {
             return "'" + s;
         }
         return s;

@@ -59,8 +59,12 @@ final class HtmlTables {
             for (EvidenceRow r : t.rows()) {
                 h.open("tr", "class", r.recommended() ? "recommended" : null);
                 tie |= r.tieDependent();
-                page.num(Integer.toString(r.k())).num(Integer.toString(r.outliers())).num(Numbers.scaled(r.cutHeight().chosen()) + (r.tieDependent() ? " †"
-                        : "")).num(Numbers.scaled(r.cutHeight().low()) + " to " + Numbers.scaled(r.cutHeight().high()))
+                // wide cells may wrap only at one ordinary space (no-break spaces elsewhere), so that at narrower
+                // widths the table fits by putting a figure's interval, range end or s_k on a second line
+                page.num(Integer.toString(r.k())).num(Integer.toString(r.outliers()))
+                        .num(Numbers.scaled(r.cutHeight().chosen()) + (r.tieDependent()
+                        ? NBSP + "†" : "")).num(Numbers.scaled(r.cutHeight().low()) + NBSP + "to "
+                                + Numbers.scaled(r.cutHeight().high()))
                         .num(interval(r.ariMean(), r.ariLow(), r.ariHigh()))
                         .num(interval(r.nullAriMean(), r.nullAriLow(), r.nullAriHigh()))
                         .num(Numbers.fixed(r.pac(), 3)).num(Numbers.fixed(r.nullPac(), 3))
@@ -69,7 +73,7 @@ final class HtmlTables {
                         .num(Numbers.p(r.pValueAdjusted()))
                         .num(Numbers.scaled(r.calinskiHarabasz())).num(Numbers.fixed(r.daviesBouldin(), 2))
                         .num(Numbers.fixed(r.dunn(), 3)).num(Double.isFinite(r.gap()) ? Numbers.fixed(r.gap(), 3)
-                                + " ± " + Numbers.fixed(r.gapSE(), 3) : Numbers.MISSING);
+                                + " ±" + NBSP + Numbers.fixed(r.gapSE(), 3) : Numbers.MISSING);
                 h.open("td", "class", "verdict-cell").text(r.verdict().id());
                 if (r.recommended()) {
                     h.element("span", "tag tag-recommended", "recommended");
@@ -96,8 +100,11 @@ final class HtmlTables {
         if (!Double.isFinite(mean)) {
             return Numbers.MISSING;
         }
-        return Numbers.fixed(mean, 2) + " [" + Numbers.fixed(low, 2) + ", " + Numbers.fixed(high, 2) + "]";
+        return Numbers.fixed(mean, 2) + " [" + Numbers.fixed(low, 2) + "," + NBSP + Numbers.fixed(high, 2) + "]";
     }
+
+    /** A no-break space: keeps the parts of a figure together when a wide table's cells wrap. */
+    private static final String NBSP = "\u00A0";
 
     void linkages() {
         openSection(h, "linkages");

@@ -108,6 +108,14 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
 
     /** Checks the settings against the size of the input; every problem in one message. */
     public void checkAgainst(int samples, boolean hasData) {
+        checkAgainst(samples, hasData, true);
+    }
+
+    /**
+     * As {@link #checkAgainst(int, boolean)}; {@code maxKChosen} says whether the user gave --max-k, so that a
+     * default that does not fit is not blamed on them.
+     */
+    public void checkAgainst(int samples, boolean hasData, boolean maxKChosen) {
         var p = new ArrayList<String>();
         if (samples > org.treeproof.distance.CondensedDistances.MAX_ITEMS) {
             throw new InputException("the input has " + samples + " samples; a study holds at most "
@@ -115,11 +123,20 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
                     + "array); assess a subsample of the samples");
         }
         int smallest = resampling == Resampling.SUBSAMPLE ? (int) Math.round(sampleFraction * samples) : samples;
-        if (maxK > samples - 1) {
-            p.add("--max-k " + maxK + " needs more than " + maxK + " samples; the input has " + samples);
+        int largest = Math.min(samples, smallest) - 1;
+        if (largest < 2) {
+            p.add("the input has " + samples + " samples, too few to assess 2 clusters"
+                    + (smallest < samples && samples >= 3 ? " in replicates of " + smallest + " samples (--sample-fraction "
+                    + sampleFraction + "); raise --sample-fraction or add samples" : "; a study needs at least 3"));
+        } else if (maxK > largest && !maxKChosen) {
+            p.add("the input has " + samples + " samples" + (smallest < samples ? " (replicates of " + smallest + ")"
+                    : "") + ", too few for the default --max-k " + maxK + "; give --max-k " + largest + " or less");
+        } else if (maxK > samples - 1) {
+            p.add("--max-k " + maxK + " needs more than " + maxK + " samples; the input has " + samples
+                    + ": give --max-k " + largest + " or less");
         } else if (maxK > smallest - 1) {
             p.add("--max-k " + maxK + " is too large for replicates of " + smallest
-                    + " samples; lower --max-k or raise --sample-fraction");
+                    + " samples; lower --max-k to " + largest + " or raise --sample-fraction");
         }
         if (!hasData) {
             if (featureFraction < 1) {
