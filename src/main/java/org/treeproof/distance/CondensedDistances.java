@@ -136,18 +136,35 @@ public final class CondensedDistances implements Serializable, CondensedRows {
      * item is at distance 0 from its copy. Never recomputes a distance.
      */
     public CondensedDistances gather(int[] items) {
+        return new CondensedDistances(items.length, gatherValues(items));
+    }
+
+    /** {@link #gather} as a matrix the caller owns and may give up to a linkage that works in place. */
+    public OwnedDistances gatherOwned(int[] items) {
+        return OwnedDistances.trusted(items.length, gatherValues(items));
+    }
+
+    private double[] gatherValues(int[] items) {
         int m = items.length;
-        double[] out = new double[length(m)];
-        int t = 0;
+        // (i, j) with i < j is at base[i] + j: one addition per pair instead of the index arithmetic
+        int[] base = new int[m];
         for (int a = 0; a < m; a++) {
             int i = items[a];
             Objects.checkIndex(i, n);
+            base[a] = (int) ((long) n * i - (long) i * (i + 1) / 2 - i - 1);
+        }
+        double[] out = new double[length(m)];
+        double[] v = values;
+        int t = 0;
+        for (int a = 0; a < m; a++) {
+            int i = items[a];
+            int bi = base[a];
             for (int b = a + 1; b < m; b++) {
                 int j = items[b];
-                out[t++] = i == j ? 0.0 : values[index(n, i, j)];
+                out[t++] = i < j ? v[bi + j] : i > j ? v[base[b] + i] : 0.0;
             }
         }
-        return new CondensedDistances(m, out);
+        return out;
     }
 
     /** Bytes needed to hold a condensed matrix over {@code n} items. */

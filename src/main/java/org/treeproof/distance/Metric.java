@@ -194,6 +194,10 @@ public enum Metric {
      */
     public CondensedDistances compute(DataMatrix data, int[] features, int threads) {
         Objects.requireNonNull(data, "data");
+        return run(data, checkedFeatures(data, features), threads);
+    }
+
+    private static int[] checkedFeatures(DataMatrix data, int[] features) {
         Objects.requireNonNull(features, "features");
         if (features.length == 0) {
             throw new IllegalArgumentException("no features selected");
@@ -201,7 +205,7 @@ public enum Metric {
         for (int f : features) {
             Objects.checkIndex(f, data.features());
         }
-        return run(data, features.clone(), threads);
+        return features.clone();
     }
 
     /**
@@ -229,6 +233,14 @@ public enum Metric {
     public OwnedDistances computeOwned(DataMatrix data, int threads) {
         Objects.requireNonNull(data, "data");
         return OwnedDistances.wrap(data.samples(), kernel(data, null, threads));
+    }
+
+    /**
+     * {@link #compute(DataMatrix, int[], int)} as a matrix the caller owns (see {@link #computeOwned(DataMatrix, int)}).
+     */
+    public OwnedDistances computeOwned(DataMatrix data, int[] features, int threads) {
+        Objects.requireNonNull(data, "data");
+        return OwnedDistances.wrap(data.samples(), kernel(data, checkedFeatures(data, features), threads));
     }
 
     /**

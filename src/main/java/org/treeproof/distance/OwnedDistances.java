@@ -26,6 +26,16 @@ public final class OwnedDistances implements CondensedRows {
         return new OwnedDistances(n, condensed);
     }
 
+    /** Takes ownership of values that come from a checked matrix, without looking at them again. */
+    static OwnedDistances trusted(int n, double[] condensed) {
+        return new OwnedDistances(n, condensed);
+    }
+
+    /** A copy of these distances, with an owner of its own. */
+    public OwnedDistances copy() {
+        return new OwnedDistances(n, array().clone());
+    }
+
     /** A copy of {@code distances} that its owner may give up. */
     public static OwnedDistances copyOf(CondensedDistances distances) {
         Objects.requireNonNull(distances, "distances");

@@ -112,6 +112,29 @@ class StreamedDistancesTest {
     }
 
     @Test
+    void gatheredRowsAreTheEntriesTheyName() {
+        DataMatrix data = random(9, false);
+        CondensedDistances d = Metric.EUCLIDEAN.compute(data, 2);
+        SplittableRandom rnd = new SplittableRandom(4);
+        // unsorted, with repeats (bootstrap), and the first and last items
+        int[] items = new int[250];
+        for (int a = 0; a < items.length; a++) {
+            items[a] = a < 2 ? a * (N - 1) : rnd.nextInt(N);
+        }
+        CondensedDistances g = d.gather(items);
+        for (int a = 0; a < items.length; a++) {
+            for (int b = 0; b < items.length; b++) {
+                double expected = items[a] == items[b] ? 0.0 : d.get(items[a], items[b]);
+                assertEquals(expected, g.get(a, b), "pair " + a + ", " + b);
+            }
+        }
+        OwnedDistances owned = d.gatherOwned(items);
+        assertEquals(g, owned.copy().freeze());
+        assertArrayEquals(g.toCondensedArray(), owned.take());
+        assertThrows(IndexOutOfBoundsException.class, () -> d.gather(new int[] {0, N}));
+    }
+
+    @Test
     void aMatrixHandsOutCopiesOfItsRows() {
         CondensedDistances d = CondensedDistances.of(4, new double[] {1, 2, 3, 4, 5, 6});
         d.forEachRow((i, values, from) -> java.util.Arrays.fill(values, 99));
