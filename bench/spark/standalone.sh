@@ -55,7 +55,8 @@ start=$(date +%s.%N)
 java "-Xmx$DRIVER_MEMORY" -cp "$cp" org.apache.spark.deploy.SparkSubmit --master "$master" \
   --class org.treeproof.cli.Main --executor-memory "$EXECUTOR_MEMORY" --total-executor-cores "$CORES" \
   --conf spark.driver.host=127.0.0.1 --conf spark.driver.bindAddress=127.0.0.1 --conf spark.ui.enabled=false \
-  --conf spark.log.level=WARN --conf spark.eventLog.enabled=true --conf spark.eventLog.dir="file://$out/events" \
+  --conf spark.log.level=WARN --conf spark.eventLog.enabled=true --conf spark.eventLog.dir="file://$out/events" --conf spark.eventLog.compress=false \
+  --conf spark.eventLog.rolling.enabled=false \
   "$jar" assess "$table.csv" --out "$out/result-spark" --engine spark $ARGS \
   > "$out/logs/spark-run.log" 2>&1
 spark_s=$(echo "$(date +%s.%N) - $start" | bc)
@@ -72,12 +73,14 @@ for f in summary.json clusters.csv scores.csv; do
   else same=no; fi
 done
 "$PYTHON" - "$out" "$N" "$P" "$CORES" "$EXECUTOR_MEMORY" "$spark_s" "$local_s" "$same" <<'PY' | tee "$out/result.txt"
-import glob, json, sys
+import glob, json, os, sys
 out, n, p, cores, mem, spark_s, local_s, same = sys.argv[1:]
 state = json.load(open(f"{out}/logs/master-after.json"))
 apps = [f"{a['id']} {a['state']} on {a['cores']} cores, {a['duration'] / 1000:.1f} s" for a in state["completedapps"]]
 tasks, executors, hosts = 0, set(), set()
-for f in glob.glob(f"{out}/events/*"):
+for f in glob.glob(f"{out}/events/**/*", recursive=True):
+    if os.path.isdir(f) or "appstatus" in f:
+        continue
     for line in open(f):
         e = json.loads(line)
         if e.get("Event") == "SparkListenerTaskEnd":
