@@ -6,6 +6,7 @@ import java.util.List;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.distance.CondensedDistances;
 import org.treeproof.distance.Metric;
+import org.treeproof.distance.OwnedDistances;
 import org.treeproof.resample.ReplicatePlan;
 import org.treeproof.resample.ReplicatePlanner;
 import org.treeproof.resample.ReplicateTask;
@@ -21,8 +22,8 @@ import org.treeproof.tree.SizedCuts;
  *
  * <p>Sample replicates gather their rows of the full distance matrix and never recompute a distance;
  * feature replicates recompute distances over their features, on one thread (the replicates themselves
- * run in parallel). Memory per running replicate: one condensed matrix over its draws, the linkage's
- * working copy of it, and O(n · maxK) labels.
+ * run in parallel). Memory per running replicate: one condensed matrix over its draws, the working copy of
+ * every linkage but the last (which works in place on it), and O(n · maxK) labels.
  *
  * <p><b>Shipped to other machines</b>, the work carries the data table but not the full n² matrix (unless
  * there is no table, as for an input of distances). A copy without the matrix computes each replicate's
@@ -76,20 +77,23 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         ReplicatePlan plan = planner.plan(index);
         int[] draws = plan.draws();
         int[] distinct = plan.distinct();
-        CondensedDistances d;
+        OwnedDistances d;
         if (plan.resamplesFeatures() || distances == null) {
             DataMatrix rows = data.selectSamples(distinct);
-            CondensedDistances onDistinct = plan.resamplesFeatures() ? metric.compute(rows, plan.features(), 1)
-                    : metric.compute(rows, 1);
-            d = draws.length == distinct.length ? onDistinct : onDistinct.gather(plan.drawToDistinct());
+            OwnedDistances onDistinct = plan.resamplesFeatures() ? metric.computeOwned(rows, plan.features(), 1)
+                    : metric.computeOwned(rows, 1);
+            d = draws.length == distinct.length ? onDistinct
+                    : onDistinct.freeze().gatherOwned(plan.drawToDistinct());
         } else {
-            d = distances.gather(draws);
+            d = distances.gatherOwned(draws);
         }
         int[] firstDrawOf = firstDrawOfDistinct(plan);
         int[][][] labels = new int[linkages.size()][][];
         BranchSupport.Replicate[] support = supports == null ? null : new BranchSupport.Replicate[linkages.size()];
-        for (int l = 0; l < linkages.size(); l++) {
-            MergeTree tree = linkages.get(l).cluster(d);
+        int last = linkages.size() - 1;
+        for (int l = 0; l <= last; l++) {
+            // each linkage overwrites a matrix of its own; the last one takes the replicate's, so no copy is made
+            MergeTree tree = linkages.get(l).clusterInPlace(l == last ? d : d.copy());
             int minSize = StudySettings.minClusterSizeFor(minClusterSize, samples, tree.leaves());
             int[][] cuts = SizedCuts.of(tree, minSize, maxK).labelsUpTo(maxK);
             labels[l] = new int[maxK][];
