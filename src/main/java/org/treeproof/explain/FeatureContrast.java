@@ -116,20 +116,24 @@ public final class FeatureContrast {
         int[][] order = new int[k][];
         for (int c = 0; c < k; c++) {
             q[c] = FalseDiscovery.benjaminiHochberg(out.p[c]);
-            order[c] = rankOrder(out.auc[c], out.p[c]);
+            order[c] = rankOrder(out.auc[c], out.effect[c], out.p[c]);
         }
         return new FeatureTable(test, data.featureNames(), sizes, n, out.effect, out.auc, out.meanIn, out.meanOut,
                 out.p, q, order);
     }
 
-    /** Features by decreasing |AUC − 0.5|, then increasing p, then input order. */
-    private static int[] rankOrder(double[] auc, double[] p) {
+    /** Features by decreasing |AUC − 0.5|, then decreasing |d|, then increasing p, then input order. */
+    private static int[] rankOrder(double[] auc, double[] d, double[] p) {
         Integer[] idx = new Integer[auc.length];
         for (int j = 0; j < idx.length; j++) {
             idx[j] = j;
         }
         Arrays.sort(idx, (a, b) -> {
             int c = Double.compare(Math.abs(auc[b] - 0.5), Math.abs(auc[a] - 0.5));
+            if (c != 0) {
+                return c;
+            }
+            c = Double.compare(abs(d[b]), abs(d[a]));
             if (c != 0) {
                 return c;
             }
@@ -141,6 +145,11 @@ public final class FeatureContrast {
             out[r] = idx[r];
         }
         return out;
+    }
+
+    /** |x|, with NaN (no spread) last. */
+    private static double abs(double x) {
+        return Double.isNaN(x) ? -1 : Math.abs(x);
     }
 
     /** The result arrays, {@code [cluster][feature]}; each task writes only its own features. */

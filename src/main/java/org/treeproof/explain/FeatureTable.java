@@ -9,7 +9,7 @@ import java.util.Objects;
  * are 1-based, features 0-based in the data's order. Immutable: arrays are copied in and only read out.
  *
  * <p>The rank orders a cluster's features by how far the AUC lies from 0.5 (a feature that is higher or
- * lower in the cluster counts alike), then by the p-value, then by the data's order; rank 1 is the most
+ * lower in the cluster counts alike), then by the size of Cohen's d, then by the p-value, then by the data's order; rank 1 is the most
  * distinguishing feature.
  */
 public final class FeatureTable {

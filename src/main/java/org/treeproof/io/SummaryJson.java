@@ -9,6 +9,7 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.util.List;
+import org.treeproof.explain.Explanation;
 import org.treeproof.score.GapResult;
 import org.treeproof.score.ReplicateSummary;
 import org.treeproof.study.ClusterEvidence;
@@ -32,6 +33,7 @@ public final class SummaryJson {
     private final Evidence evidence;
     private final Recommendation recommendation;
     private final Provenance provenance;
+    private final Explanation explanation;
 
     /**
      * Where the data came from and how it was prepared.
@@ -61,9 +63,16 @@ public final class SummaryJson {
     }
 
     public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance) {
+        this(evidence, recommendation, provenance, null);
+    }
+
+    /** With the explanation of the recommended solution ({@code null} for none): the {@code explain} block. */
+    public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
+            Explanation explanation) {
         this.evidence = evidence;
         this.recommendation = recommendation;
         this.provenance = provenance;
+        this.explanation = explanation;
     }
 
     /** The JSON as UTF-8 bytes, pretty-printed, ending with a newline. */
@@ -96,6 +105,9 @@ public final class SummaryJson {
             writeRecommendation(g);
             if (provenance.labels() != null) {
                 writeLabels(g, provenance.labels());
+            }
+            if (explanation != null) {
+                ExplainJson.write(g, explanation);
             }
             g.writeEndObject();
             g.writeRaw('\n');
@@ -279,7 +291,8 @@ public final class SummaryJson {
         }
         g.writeEndArray();
         g.writeArrayFieldStart("reasons");
-        for (String s : r.reasons()) {
+        // a covariate the clusters follow is a reason too (the typed fact's own sentence)
+        for (String s : explanation == null ? r.reasons() : ExplainJson.withFlags(r.reasons(), explanation)) {
             g.writeString(s);
         }
         g.writeEndArray();

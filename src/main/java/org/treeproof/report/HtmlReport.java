@@ -26,7 +26,7 @@ public final class HtmlReport {
 
     /** The section ids, in the order of the page ({@code labels} only when classes were given). */
     public static final List<String> SECTION_IDS = List.of("decision", "evidence", "linkages", "flags", "labels",
-            "reproducibility", "caution", "references");
+            "features", "covariates", "sensitivity", "reproducibility", "caution", "references");
 
     private final ReportModel model;
     private final Map<String, EmbeddedImage> images;
@@ -91,6 +91,16 @@ public final class HtmlReport {
         if (model.labels() != null) {
             tables.labels();
         }
+        model.explained().ifPresent(x -> {
+            var explain = new ExplainHtml(x, page);
+            explain.features(model);
+            if (ExplainHtml.shows(model, "covariates")) {
+                explain.covariates();
+            }
+            if (ExplainHtml.shows(model, "sensitivity")) {
+                explain.sensitivity(model);
+            }
+        });
         tables.reproducibility();
         caution(h);
         references(h);
@@ -103,7 +113,9 @@ public final class HtmlReport {
     private void nav(Html h) {
         h.open("nav", "aria-label", "Sections").open("ol");
         for (String id : SECTION_IDS) {
-            if (!id.equals("labels") || model.labels() != null) {
+            boolean shown = id.equals("labels") ? model.labels() != null
+                    : !ExplainHtml.TITLES.containsKey(id) || ExplainHtml.shows(model, id);
+            if (shown) {
                 h.open("li").open("a", "href", "#" + id).text(HtmlTables.title(id)).close("a").close("li");
             }
         }
@@ -160,6 +172,9 @@ public final class HtmlReport {
     private void caution(Html h) {
         HtmlTables.openSection(h, "caution");
         h.element("p", "caution", model.caution());
+        if (model.explained().map(x -> x.features() != null).orElse(false)) {
+            h.element("p", ExplainProse.doubleDipping());
+        }
         if (model.decision().verdict() == Verdict.UNSUPPORTED) {
             h.element("p", "No cluster solution is recommended; describing these samples as groups would need evidence "
                     + "this study did not find.");
