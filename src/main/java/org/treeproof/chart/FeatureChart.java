@@ -22,7 +22,7 @@ import org.treeproof.explain.FeatureTable;
 final class FeatureChart {
     private static final double LEFT_LABELS = 230;
     private static final double TOP = 96;
-    private static final double LEGEND = 170;
+    private static final double LEGEND = 190;
 
     private final FeatureTable t;
     private final int perCluster;
