@@ -74,7 +74,7 @@ final class ExplainProse {
         }
         if (e.covariates() != null && !e.covariates().isEmpty()) {
             out.add(f("Each covariate was tested against the clusters: a categorical one by Pearson's chi-square test "
-                    + "(Fisher's exact test %s for a 2 × 2 table, or a Monte Carlo test with %d permutations for a larger "
+                    + "(Fisher's exact test (%s) for a 2 × 2 table, or a Monte Carlo test with %d permutations for a larger "
                     + "one, when an expected count was below 5) with Cramér's V as the effect; a numeric one by the "
                     + "Kruskal-Wallis test (%s) with epsilon-squared (Tomczak & Tomczak, 2014) as the effect; q-values "
                     + "are Benjamini-Hochberg over the covariates. A covariate was flagged when q ≤ %s and Cramér's V ≥ "
