@@ -14,7 +14,9 @@ import org.treeproof.study.Verdict;
  *
  * <p>Sections, in order (element ids in brackets): the decision and its reasons [{@code decision}], the evidence
  * for each number of clusters [{@code evidence}], how the linkages compare [{@code linkages}], clusters and samples
- * to check [{@code flags}], the comparison with known classes when given [{@code labels}], settings and
+ * to check [{@code flags}], the comparison with known classes when given [{@code labels}], what sets each cluster
+ * apart [{@code features}], the covariates when given [{@code covariates}], the alternative analyses when asked
+ * for [{@code sensitivity}] (these three only when the study was explained), settings and
  * reproducibility [{@code reproducibility}], what the evidence does not show [{@code caution}], and the references
  * [{@code references}]. Every string that comes from the user or the input (sample ids, class names, file name,
  * command line) is escaped with {@code StringEscapeUtils.escapeHtml4}. A value that is not a finite number prints
