@@ -29,7 +29,7 @@ public final class ExplainCharts {
         }
         if (e.sensitivity() != null && !e.sensitivity().ran().isEmpty()) {
             var c = new SensitivityChart(e.sensitivity());
-            out.add(new Figure("sensitivity", "Other analyses, same clusters?", c.write(chartsDir, "sensitivity"),
+            out.add(new Figure("sensitivity", "Other analyses against the chosen clusters", c.write(chartsDir, "sensitivity"),
                     c.width(), c.height(), ""));
         }
         return out;

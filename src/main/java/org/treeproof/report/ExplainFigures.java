@@ -31,7 +31,7 @@ public final class ExplainFigures {
         }
         SensitivityResult s = e.sensitivity();
         if (s != null && !s.ran().isEmpty()) {
-            out.add(new Figure("sensitivity", "Other analyses, same clusters?", f("Adjusted Rand index of the %s linkage "
+            out.add(new Figure("sensitivity", "Other analyses against the chosen clusters", f("Adjusted Rand index of the %s linkage "
                     + "at k = %d under each alternative analysis with the recommended solution (bar; 1 = the same "
                     + "clusters), and for each cluster the Jaccard similarity of its best match (dots; at %s or more it "
                     + "is found again).", s.linkage(), s.k(), Numbers.plain(s.survives())), "sensitivity.png"));

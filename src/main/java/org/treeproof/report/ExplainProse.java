@@ -93,6 +93,13 @@ final class ExplainProse {
         return out;
     }
 
+    /** The references {@link #methods} cites for this explanation, in the order it cites them. */
+    static List<Reference> references(Explanation e) {
+        var cited = new java.util.LinkedHashSet<Reference>();
+        methods(e, cited);
+        return List.copyOf(cited);
+    }
+
     private static String outliers(Explanation e) {
         int o = e.solution().outliers();
         return o == 0 ? "" : f(" (%d outlier%s set aside took no part)", o, o == 1 ? "" : "s");

@@ -105,7 +105,7 @@ public final class HtmlReport {
         });
         tables.reproducibility();
         caution(h);
-        references(h);
+        references(h, model);
         h.open("footer").text(f("Made with %s %s from %s (SHA-256 %s).", run.toolName(), run.toolVersion(),
                 run.inputFile(), run.inputSha256())).close("footer").newline();
         h.close("body").newline().close("html").newline();
@@ -184,13 +184,15 @@ public final class HtmlReport {
         h.close("section").newline();
     }
 
-    private static void references(Html h) {
+    private static void references(Html h, ReportModel model) {
         HtmlTables.openSection(h, "references");
         h.open("ol", "class", "references");
-        for (Reference r : List.of(Reference.CALINSKI_HARABASZ, Reference.DAVIES_BOULDIN, Reference.DUNN,
-                Reference.HENNIG, Reference.HOPE, Reference.HUBERT_ARABIE, Reference.KAUFMAN_ROUSSEEUW,
+        var refs = new java.util.ArrayList<>(List.of(Reference.CALINSKI_HARABASZ, Reference.DAVIES_BOULDIN,
+                Reference.DUNN, Reference.HENNIG, Reference.HOPE, Reference.HUBERT_ARABIE, Reference.KAUFMAN_ROUSSEEUW,
                 Reference.MONTI, Reference.MULLNER, Reference.MURTAGH_LEGENDRE, Reference.ROUSSEEUW,
-                Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD)) {
+                Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD));
+        model.explained().ifPresent(x -> refs.addAll(ExplainProse.references(x)));
+        for (Reference r : refs) {
             h.open("li").text(r.entry() + " ").open("a", "href", r.url()).text("doi:" + r.doi()).close("a").close("li");
         }
         h.close("ol").close("section").newline();
