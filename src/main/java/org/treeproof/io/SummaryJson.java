@@ -9,6 +9,7 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.util.List;
+import org.treeproof.explain.Explanation;
 import org.treeproof.score.GapResult;
 import org.treeproof.score.ReplicateSummary;
 import org.treeproof.study.ClusterEvidence;
@@ -33,6 +34,7 @@ public final class SummaryJson {
     private final Recommendation recommendation;
     private final Provenance provenance;
     private final java.util.function.Function<org.treeproof.study.Reason, String> wording;
+    private final Explanation explanation;
 
     /**
      * Where the data came from and how it was prepared.
@@ -67,10 +69,17 @@ public final class SummaryJson {
      */
     public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
             java.util.function.Function<org.treeproof.study.Reason, String> wording) {
+        this(evidence, recommendation, provenance, wording, null);
+    }
+
+    /** With the explanation of the recommended solution ({@code null} for none): the {@code explain} block. */
+    public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
+            java.util.function.Function<org.treeproof.study.Reason, String> wording, Explanation explanation) {
         this.wording = wording;
         this.evidence = evidence;
         this.recommendation = recommendation;
         this.provenance = provenance;
+        this.explanation = explanation;
     }
 
     /** The JSON as UTF-8 bytes, pretty-printed, ending with a newline. */
@@ -103,6 +112,9 @@ public final class SummaryJson {
             writeRecommendation(g);
             if (provenance.labels() != null) {
                 writeLabels(g, provenance.labels());
+            }
+            if (explanation != null) {
+                ExplainJson.write(g, explanation);
             }
             g.writeEndObject();
             g.writeRaw('\n');
@@ -300,6 +312,15 @@ public final class SummaryJson {
         }
         g.writeEndArray();
         g.writeArrayFieldStart("reasons");
+        // a covariate the clusters follow leads the reasons (the explanation's own sentence)
+        if (explanation != null) {
+            for (String flag : ExplainJson.withFlags(List.of(), explanation)) {
+                g.writeStartObject();
+                g.writeStringField("kind", "covariate-followed");
+                g.writeStringField("text", flag);
+                g.writeEndObject();
+            }
+        }
         for (org.treeproof.study.Reason reason : r.reasons()) {
             g.writeStartObject();
             g.writeStringField("kind", reason.kind());

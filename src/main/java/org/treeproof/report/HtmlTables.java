@@ -28,7 +28,7 @@ final class HtmlTables {
     }
 
     static String title(String sectionId) {
-        return TITLES.get(sectionId);
+        return TITLES.containsKey(sectionId) ? TITLES.get(sectionId) : ExplainHtml.TITLES.get(sectionId);
     }
 
     static void openSection(Html h, String id) {
