@@ -46,7 +46,7 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
     private CheckpointFile(Path dir, boolean load) throws IOException {
         this.dir = dir;
         keptReplicates = load ? readReplicates(dir.resolve(fileOf(Stage.REPLICATES))) : List.of();
-        for (Stage s : List.of(Stage.NULL_SETS, Stage.GAP_SETS)) {
+        for (Stage s : List.of(Stage.NULL_SETS, Stage.GAP_SETS, Stage.MULTISCALE)) {
             keptRows.put(s, load ? readRows(dir.resolve(fileOf(s))) : List.of());
         }
         replicatesWritten = keptReplicates.size();
@@ -197,6 +197,7 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
             case REPLICATES -> "replicates.bin";
             case NULL_SETS -> "null-sets.bin";
             case GAP_SETS -> "reference-sets.bin";
+            case MULTISCALE -> "multiscale.bin";
         };
     }
 

@@ -138,6 +138,7 @@ public final class SummaryJson {
         g.writeNumberField("high", s.pacHigh());
         g.writeEndObject();
         g.writeNumberField("seed", s.seed());
+        BranchPValueJson.writeSettings(g, s.branchPValues());
         for (Option o : provenance.inputOptions()) {
             g.writeStringField(o.name(), o.value());
         }
@@ -168,7 +169,7 @@ public final class SummaryJson {
         }
         g.writeArrayFieldStart("byK");
         for (KEvidence e : le.byK()) {
-            writeK(g, e);
+            writeK(g, e, le);
         }
         g.writeEndArray();
         g.writeArrayFieldStart("branchSupport");
@@ -179,6 +180,9 @@ public final class SummaryJson {
             g.writeNumberField("size", le.tree().size(s));
             number(g, "height", le.tree().height(s));
             number(g, "support", support[s]);
+            if (le.branchPValues() != null) {
+                BranchPValueJson.write(g, le.branchPValues().at(s));
+            }
             g.writeEndObject();
         }
         g.writeEndArray();
@@ -209,7 +213,7 @@ public final class SummaryJson {
         g.writeEndObject();
     }
 
-    private static void writeK(JsonGenerator g, KEvidence e) throws IOException {
+    private static void writeK(JsonGenerator g, KEvidence e, LinkageEvidence le) throws IOException {
         g.writeStartObject();
         g.writeNumberField("k", e.k());
         cutHeight(g, "cutHeight", e.cutHeight());
@@ -263,6 +267,7 @@ public final class SummaryJson {
             g.writeEndObject();
         }
         g.writeEndArray();
+        BranchPValueJson.writeCdf(g, le.cdfAt(e.k()), le.consensus().distribution(e.k()));
         g.writeEndObject();
     }
 

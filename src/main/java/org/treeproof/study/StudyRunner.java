@@ -57,6 +57,9 @@ public final class StudyRunner {
         this.kernelThreads = kernelThreads;
         this.progress = progress;
         settings.checkAgainst(input.samples(), input.hasData());
+        if (settings.branchPValues() != null && input.hasData()) {
+            settings.branchPValues().checkFeatures(input.data().features());
+        }
     }
 
     /** Keeps finished work in {@code checkpoint} and replays what it already holds. */
@@ -84,10 +87,13 @@ public final class StudyRunner {
         NullTable nulls = data != null && settings.nullSets() > 0 ? nullCalibration(data, refs.size()) : null;
         GapResult[] gaps = data != null && settings.referenceSets() > 0
                 ? new GapRun(data, d, settings, refs, executor, progress, checkpoint).run() : null;
+        List<BranchPValues> pvalues = data != null && settings.branchPValues() != null
+                ? new MultiscaleRun(data, settings, refs, executor, progress, checkpoint).run() : null;
 
         var linkages = new ArrayList<LinkageEvidence>();
         for (int l = 0; l < refs.size(); l++) {
-            linkages.add(linkageEvidence(l, refs.get(l), data, d, tally, nulls, gaps == null ? null : gaps[l]));
+            linkages.add(linkageEvidence(l, refs.get(l), data, d, tally, nulls, gaps == null ? null : gaps[l],
+                    pvalues == null ? null : pvalues.get(l)));
         }
         return new Evidence(input.sampleIds(), data == null ? 0 : data.features(), settings, linkages);
     }
@@ -220,7 +226,7 @@ public final class StudyRunner {
     }
 
     private LinkageEvidence linkageEvidence(int l, ReferenceSolution ref, DataMatrix data, CondensedDistances d,
-            StabilityTally tally, NullTable nulls, GapResult gap) {
+            StabilityTally tally, NullTable nulls, GapResult gap, BranchPValues pvalues) {
         ConsensusMatrix consensus = tally.consensus(l);
         var byK = new ArrayList<KEvidence>();
         for (int k = 2; k <= settings.maxK(); k++) {
@@ -248,7 +254,8 @@ public final class StudyRunner {
                     ss.stability(), consensus.itemConsensus(k, p)));
         }
         double cophenetic = ref.tree().copheneticCorrelation(d);
-        return new LinkageEvidence(ref.linkage(), ref.tree(), cophenetic, gap, byK, tally.branchSupport(l), consensus);
+        return new LinkageEvidence(ref.linkage(), ref.tree(), cophenetic, gap, byK, tally.branchSupport(l), consensus,
+                LinkageEvidence.cdfs(consensus), pvalues);
     }
 
     private NullStability nullStability(NullTable nulls, int l, int k, double observedAri, double observedPac,

@@ -30,10 +30,12 @@ import org.treeproof.tree.Linkage;
  * @param pacLow          lower end of the PAC interval (exclusive)
  * @param pacHigh         upper end of the PAC interval (inclusive)
  * @param seed            the master seed every random draw derives from
+ * @param branchPValues   the multiscale bootstrap for branch p-values, or {@code null} to skip it
  */
 public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int replicates, Resampling resampling,
         double sampleFraction, double featureFraction, int referenceSets, ReferenceData.Kind gapReference,
-        int nullSets, int nullReplicates, double pacLow, double pacHigh, long seed) {
+        int nullSets, int nullReplicates, double pacLow, double pacHigh, long seed,
+        BranchPValueSettings branchPValues) {
 
     /** The defaults a study uses when an option is not given. */
     public static final List<Linkage> DEFAULT_LINKAGES = List.of(Linkage.AVERAGE, Linkage.COMPLETE, Linkage.WARD);
@@ -50,6 +52,9 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         Objects.requireNonNull(gapReference, "gapReference");
         List<String> problems = problems(linkages, metric, maxK, replicates, sampleFraction, featureFraction,
                 referenceSets, nullSets, nullReplicates, pacLow, pacHigh);
+        if (branchPValues != null) {
+            problems.addAll(branchPValues.problems());
+        }
         if (!problems.isEmpty()) {
             throw new InputException(String.join("; ", problems));
         }
@@ -120,6 +125,9 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
             if (featureFraction < 1) {
                 p.add("--feature-fraction needs a data table; distances alone cannot be resampled by feature");
             }
+            if (branchPValues != null) {
+                p.add("--branch-pvalues needs a data table; distances alone cannot be resampled by feature");
+            }
         }
         if (!p.isEmpty()) {
             throw new InputException(String.join("; ", p));
@@ -152,6 +160,7 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         private double pacLow = 0.1;
         private double pacHigh = 0.9;
         private long seed = 1;
+        private BranchPValueSettings branchPValues;
 
         private Builder() {
         }
@@ -222,9 +231,15 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
             return this;
         }
 
+        /** The multiscale bootstrap for branch p-values, or {@code null} (the default) to skip it. */
+        public Builder branchPValues(BranchPValueSettings v) {
+            branchPValues = v;
+            return this;
+        }
+
         public StudySettings build() {
             return new StudySettings(linkages, metric, maxK, replicates, resampling, sampleFraction, featureFraction,
-                    referenceSets, gapReference, nullSets, nullReplicates, pacLow, pacHigh, seed);
+                    referenceSets, gapReference, nullSets, nullReplicates, pacLow, pacHigh, seed, branchPValues);
         }
     }
 }
