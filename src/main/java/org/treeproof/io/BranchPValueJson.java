@@ -6,6 +6,10 @@ import org.treeproof.score.ConsensusCdf;
 import org.treeproof.score.ConsensusDistribution;
 import org.treeproof.score.MultiscaleFit;
 import org.treeproof.study.BranchPValueSettings;
+import org.treeproof.study.ClusterBranch;
+import org.treeproof.study.Evidence;
+import org.treeproof.study.LinkageEvidence;
+import org.treeproof.study.Recommendation;
 
 /**
  * The parts of {@code summary.json} for branch p-values and the consensus CDF, written into the objects that
@@ -17,7 +21,9 @@ import org.treeproof.study.BranchPValueSettings;
  *       scalesUsed, note}}, only when branch p-values were computed;</li>
  *   <li>{@code linkages[].byK[]} gains {@code consensusCdf} ({@code [x, F(x)]} pairs, non-decreasing, ending at
  *       F = 1; every distinct value, or {@value ConsensusCdf#OUTPUT_POINTS} evenly spaced exact points when there
- *       are more), {@code consensusArea} and {@code deltaArea}.</li>
+ *       are more), {@code consensusArea} and {@code deltaArea};</li>
+ *   <li>{@code recommendation.clusterBranches[]}: {@code {id, size, merge, au, auSE, lowAu}} per recommended cluster,
+ *       only when branch p-values were computed.</li>
  * </ul>
  */
 final class BranchPValueJson {
@@ -52,6 +58,38 @@ final class BranchPValueJson {
         g.writeNumberField("scalesUsed", r.scalesUsed());
         g.writeStringField("note", r.reason());
         g.writeEndObject();
+    }
+
+    /**
+     * {@code recommendation.clusterBranches}: the branch of each recommended cluster with its AU p-value and whether it
+     * is flagged for a low one ({@link ClusterBranch#lowAu()}); only when branch p-values were computed and clusters
+     * are recommended.
+     */
+    static void writeClusterBranches(JsonGenerator g, Evidence evidence, Recommendation r) throws IOException {
+        if (r.k() < 2) {
+            return;
+        }
+        LinkageEvidence le = evidence.linkages().stream().filter(l -> l.linkage() == r.linkage()).findFirst()
+                .orElseThrow();
+        if (le.branchPValues() == null) {
+            return;
+        }
+        g.writeArrayFieldStart("clusterBranches");
+        for (ClusterBranch b : le.clusterBranches(r.k())) {
+            g.writeStartObject();
+            g.writeNumberField("id", b.cluster());
+            g.writeNumberField("size", b.size());
+            if (b.merge() >= 0) {
+                g.writeNumberField("merge", b.merge());
+            } else {
+                g.writeNullField("merge");
+            }
+            number(g, "au", b.au());
+            number(g, "auSE", b.fit() == null ? Double.NaN : b.fit().auSE());
+            g.writeBooleanField("lowAu", b.lowAu());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
     }
 
     static void writeCdf(JsonGenerator g, ConsensusCdf cdf, ConsensusDistribution d) throws IOException {

@@ -31,7 +31,8 @@ import org.treeproof.study.ReplicateOutcome;
  * guards against resuming a different study.
  *
  * <p>For fault-injection tests, the system property {@code treeproof.faultAfterReplicates=N} halts the JVM
- * abruptly (as a kill would) right after the N-th replicate record is written.
+ * abruptly (as a kill would) right after the N-th replicate record is written, and
+ * {@code treeproof.faultAfterMultiscale=N} after the N-th multiscale-bootstrap record written by this process.
  */
 public final class CheckpointFile implements Checkpoint, AutoCloseable {
     private static final String FINGERPRINT = "fingerprint.txt";
@@ -41,6 +42,8 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
     private final Map<Stage, List<double[]>> keptRows = new EnumMap<>(Stage.class);
     private final Map<Stage, DataOutputStream> writers = new EnumMap<>(Stage.class);
     private final long faultAfter = Long.getLong("treeproof.faultAfterReplicates", -1L);
+    private final long faultAfterMultiscale = Long.getLong("treeproof.faultAfterMultiscale", -1L);
+    private long multiscaleWritten;
     private long replicatesWritten;
 
     private CheckpointFile(Path dir, boolean load) throws IOException {
@@ -152,6 +155,9 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
             throw new UncheckedIOException(e);
         }
         append(stage, bytes.toByteArray());
+        if (stage == Stage.MULTISCALE && faultAfterMultiscale >= 0 && ++multiscaleWritten >= faultAfterMultiscale) {
+            Runtime.getRuntime().halt(137);
+        }
     }
 
     private void append(Stage stage, byte[] payload) {

@@ -307,6 +307,7 @@ public final class SummaryJson {
             g.writeEndObject();
         }
         g.writeEndArray();
+        BranchPValueJson.writeClusterBranches(g, evidence, r);
         g.writeArrayFieldStart("flaggedSamples");
         for (Recommendation.SampleFlag f : r.flaggedSamples()) {
             g.writeStartObject();

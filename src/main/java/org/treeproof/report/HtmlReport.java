@@ -167,7 +167,7 @@ public final class HtmlReport {
         h.close("section").newline();
     }
 
-    private static void references(Html h) {
+    private void references(Html h) {
         HtmlTables.openSection(h, "references");
         h.open("ol", "class", "references");
         for (Reference r : List.of(Reference.CALINSKI_HARABASZ, Reference.DAVIES_BOULDIN, Reference.DUNN,
@@ -175,6 +175,12 @@ public final class HtmlReport {
                 Reference.MONTI, Reference.MULLNER, Reference.MURTAGH_LEGENDRE, Reference.ROUSSEEUW,
                 Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD)) {
             h.open("li").text(r.entry() + " ").open("a", "href", r.url()).text("doi:" + r.doi()).close("a").close("li");
+        }
+        if (model.settings().branchPValues() != null) {
+            for (Reference r : BranchPValueReport.REFERENCES) {
+                h.open("li").text(r.entry() + " ").open("a", "href", r.url()).text("doi:" + r.doi()).close("a")
+                        .close("li");
+            }
         }
         h.close("ol").close("section").newline();
     }

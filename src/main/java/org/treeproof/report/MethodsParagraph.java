@@ -105,6 +105,10 @@ public final class MethodsParagraph {
                 + "replicates (%s).", cite(c, Reference.HUBERT_ARABIE), cite(c, Reference.MONTI),
                 Numbers.plain(s.pacLow()), Numbers.plain(s.pacHigh()), cite(c, Reference.SENBABAOGLU),
                 cite(c, Reference.HENNIG)));
+        String branches = BranchPValueReport.methods(s, c);
+        if (!branches.isEmpty()) {
+            out.add(branches);
+        }
         if (model.nullCalibrated()) {
             out.add(f("To tell stability from chance, the same procedure (%d replicates each) was applied to %d null "
                     + "data sets drawn from a Gaussian distribution with the data's principal-axis variances (the same "

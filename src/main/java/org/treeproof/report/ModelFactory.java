@@ -69,7 +69,8 @@ final class ModelFactory {
         notes.addAll(dataNotes());
         var figures = Figures.of(evidence, rec, notes);
         return new ReportModel(run, evidence.settings(), rec.rule(), decision, tables, comparison(),
-                clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes);
+                clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes,
+                BranchPValueReport.clusterBranches(evidence, rec));
     }
 
     private EvidenceTable table(LinkageEvidence le) {
@@ -192,6 +193,7 @@ final class ModelFactory {
         out.add(new ReportModel.Setting("Replicates per null data set", Integer.toString(s.nullReplicates())));
         out.add(new ReportModel.Setting("PAC interval", "(" + Numbers.plain(s.pacLow()) + ", "
                 + Numbers.plain(s.pacHigh()) + "]"));
+        out.addAll(BranchPValueReport.settings(s));
         out.add(new ReportModel.Setting("Seed", Long.toString(s.seed())));
         out.add(new ReportModel.Setting("Null test level (p at most)", Numbers.plain(r.alpha())));
         out.add(new ReportModel.Setting("Stable cluster (mean Jaccard at least)", Numbers.plain(r.stableJaccard())));
