@@ -54,7 +54,7 @@ class BranchPValueChartsTest {
         assertTrue(RenderChecks.count(png, Look.INK) > 200, "the chosen k is drawn in ink");
         double[][] falling = {{0, 0.6}, {1, 0.5}};
         assertThrows(IllegalArgumentException.class, () -> new ConsensusCdfInput("CDF", new int[] {2},
-                List.of(falling), new double[] {0.4}, 0));
+                List.<double[][]>of(falling), new double[] {0.4}, 0));
         assertThrows(IllegalArgumentException.class, () -> new ConsensusCdfInput("CDF", new int[] {2, 4},
                 List.of(k2, k3), new double[] {0.4, 0.5}, 0));
         assertThrows(IllegalArgumentException.class, () -> new ConsensusCdfInput("CDF", new int[] {2, 3},
