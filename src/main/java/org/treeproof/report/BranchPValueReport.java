@@ -68,10 +68,12 @@ final class BranchPValueReport {
         return f("Each branch of each tree was also given an approximately unbiased (AU) p-value by a multiscale "
                 + "bootstrap of the features (%s; %s): %d replicates at each of %d scales (%s times the number of "
                 + "features, drawn with replacement), with the normalised z-values fitted across scales by weighted "
-                + "least squares as in %s; no value is given where the fit is poor (chi-square p below %s) or the "
-                + "branch was found in all or none of the replicates.", SHIMODAIRA_2002.cite(), SHIMODAIRA_2004.cite(),
+                + "least squares as in %s; no value is given where the fit is poor (chi-square p below %s), leaves "
+                + "the value undetermined (standard error above %s) or the branch was found in all or none of the "
+                + "replicates.", SHIMODAIRA_2002.cite(), SHIMODAIRA_2004.cite(),
                 b.replicatesPerScale(), b.scales().size(), Prose.and(b.scales().stream().map(Numbers::plain).toList()),
-                SUZUKI_SHIMODAIRA.narrative(), Numbers.plain(MultiscaleFit.POOR_FIT_P));
+                SUZUKI_SHIMODAIRA.narrative(), Numbers.plain(MultiscaleFit.POOR_FIT_P),
+                Numbers.plain(MultiscaleFit.MAX_SE));
     }
 
     /** The effective settings of the multiscale bootstrap. */

@@ -27,13 +27,20 @@ import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
  * every replicate of every scale ({@link Status#ALWAYS}) or in none ({@link Status#NEVER}), when fewer than
  * {@value #MIN_SCALES} scales are left ({@link Status#TOO_FEW_SCALES}: the two parameters need one more scale
  * to check the fit), or when the fit is poor ({@link Status#POOR_FIT}: chi-square p-value below
- * {@value #POOR_FIT_P}; this cut-off is our choice, not a published value).
+ * {@value #POOR_FIT_P}; this cut-off is our choice, not a published value), or when it fits but leaves the value
+ * undetermined ({@link Status#UNDETERMINED}: a standard error above {@value #MAX_SE}, see {@link #MAX_SE}).
  */
 public final class MultiscaleFit {
     /** The fewest scales with a count strictly between 0 and B that give a number (our choice: df ≥ 1). */
     public static final int MIN_SCALES = 3;
     /** Below this chi-square p-value the fit is called poor and no p-value is given (our choice). */
     public static final double POOR_FIT_P = 0.01;
+
+    /**
+     * The largest standard error for which au and bp are given: a share in [0, 1] has a standard deviation of at
+     * most 1/2 (Popoviciu's inequality on variances), so an error above it says the fit does not determine the value.
+     */
+    public static final double MAX_SE = 0.5;
 
     private static final NormalDistribution NORMAL = new NormalDistribution(null, 0, 1);
 
@@ -48,7 +55,9 @@ public final class MultiscaleFit {
         /** The branch reappeared in no replicate at any scale. */
         NEVER("never reappeared"),
         /** Too few scales had a count strictly between 0 and B to fit and check the model. */
-        TOO_FEW_SCALES("too few scales");
+        TOO_FEW_SCALES("too few scales"),
+        /** The model fits, but leaves au or bp undetermined: a standard error above {@value #MAX_SE}. */
+        UNDETERMINED("undetermined");
 
         private final String label;
 
@@ -190,6 +199,11 @@ public final class MultiscaleFit {
         double dBp = NORMAL.density(v + c);
         double auSE = dAu * Math.sqrt(Math.max(0, cov[0][0] + cov[1][1] - 2 * cov[0][1]));
         double bpSE = dBp * Math.sqrt(Math.max(0, cov[0][0] + cov[1][1] + 2 * cov[0][1]));
+        if (!(auSE <= MAX_SE && bpSE <= MAX_SE)) {
+            return new Result(Double.NaN, Double.NaN, Double.NaN, Double.NaN, v, c, chi, df, p, used,
+                    Status.UNDETERMINED, String.format(Locale.ROOT, "the curve fits but does not determine the value "
+                            + "(standard error of au %.2f, of bp %.2f; above %s)", auSE, bpSE, MAX_SE));
+        }
         return new Result(au, auSE, bp, bpSE, v, c, chi, df, p, used, Status.FITTED, "");
     }
 

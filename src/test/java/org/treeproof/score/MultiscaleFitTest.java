@@ -84,6 +84,20 @@ class MultiscaleFitTest {
         assertTrue(few.reason().contains("only 1 of 4"), few.reason());
     }
 
+    /**
+     * Three scales close together, each with 1 of 20 replicates: the model fits (chi-square p about 0.997), but (v, c)
+     * are barely determined; the published formula (the fit function of au_fit_reference.py, run by hand) gives
+     * au = 0.498 with a delta-method standard error of 2.66, more than a share can have, so no number is given.
+     */
+    @Test
+    void aFitThatDoesNotDetermineAuGivesNoNumber() {
+        var r = MultiscaleFit.of(new double[] {0.9, 1.0, 1.1}, new int[] {20, 20, 20}, new int[] {1, 1, 1}).compute();
+        assertEquals(MultiscaleFit.Status.UNDETERMINED, r.status(), r.toString());
+        assertTrue(Double.isNaN(r.au()) && Double.isNaN(r.auSE()));
+        assertTrue(r.reason().contains("does not determine"), r.reason());
+        assertTrue(r.fitPValue() > 0.99);
+    }
+
     @Test
     void refusesCountsOutsideTheirReplicates() {
         assertThrows(IllegalArgumentException.class,
