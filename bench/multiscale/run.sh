@@ -30,7 +30,7 @@ time_one() { # label, extra options...
   printf '%s\n' "${times[@]}" | sort -n | awk -v l="$label" -v n="$RUNS" '{ t[NR] = $1 } END { printf "%-34s median %7.2f s  (runs: ", l, t[int((n + 1) / 2)]; for (i = 1; i <= n; i++) printf "%s%s", t[i], i < n ? " " : ")\n" }'
 }
 
-echo "assess, n = $N, p = $P, $THREADS threads, defaults otherwise; $RUNS runs each, interleaved order not needed (same load window)"
+echo "assess, n = $N, p = $P, $THREADS threads, defaults otherwise; $RUNS run(s) each, one after another"
 time_one "defaults" 
 time_one "defaults + --branch-pvalues" --branch-pvalues
 time_one "--branch-pvalues alone (no gap/null)" --branch-pvalues --reference-sets 0 --null-sets 0
