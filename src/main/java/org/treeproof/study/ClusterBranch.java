@@ -2,6 +2,7 @@ package org.treeproof.study;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.treeproof.partition.Clustering;
 import org.treeproof.partition.Partition;
 import org.treeproof.score.MultiscaleFit;
 import org.treeproof.tree.MergeTree;
@@ -45,12 +46,22 @@ public record ClusterBranch(int cluster, int size, int merge, MultiscaleFit.Resu
      * @throws IllegalArgumentException if a cluster is not a clade of the tree
      */
     public static List<ClusterBranch> of(MergeTree tree, Partition partition, BranchPValues pvalues) {
+        return of(tree, Clustering.of(partition), pvalues);
+    }
+
+    /**
+     * The branch of each cluster of {@code clustering}, a cut of {@code tree} whose outliers (samples on branches too
+     * small to be clusters) belong to no cluster, in cluster order.
+     *
+     * @throws IllegalArgumentException if a cluster is not a clade of the tree
+     */
+    public static List<ClusterBranch> of(MergeTree tree, Clustering partition, BranchPValues pvalues) {
         int n = tree.leaves();
         int[] labels = partition.labels();
         if (labels.length != n) {
             throw new IllegalArgumentException("the partition is not of this tree's samples");
         }
-        int k = partition.clusterCount();
+        int k = partition.k();
         int[] sizes = partition.clusterSizes();
         // label of every node when all its members share one, else -1
         int[] uniform = new int[2 * n - 1];
