@@ -157,6 +157,7 @@ public final class SummaryJson {
         g.writeNumberField("high", s.pacHigh());
         g.writeEndObject();
         g.writeNumberField("seed", s.seed());
+        BranchPValueJson.writeSettings(g, s.branchPValues());
         g.writeNumberField("minClusterSize", evidence.minClusterSize());
         for (Option o : provenance.inputOptions()) {
             g.writeStringField(o.name(), o.value());
@@ -188,7 +189,7 @@ public final class SummaryJson {
         }
         g.writeArrayFieldStart("byK");
         for (KEvidence e : le.byK()) {
-            writeK(g, e, recommendation.assessment(le.linkage(), e.k()));
+            writeK(g, e, recommendation.assessment(le.linkage(), e.k()), le);
         }
         g.writeEndArray();
         g.writeArrayFieldStart("branchSupport");
@@ -199,6 +200,9 @@ public final class SummaryJson {
             g.writeNumberField("size", le.tree().size(s));
             number(g, "height", le.tree().height(s));
             number(g, "support", support[s]);
+            if (le.branchPValues() != null) {
+                BranchPValueJson.write(g, le.branchPValues().at(s));
+            }
             g.writeEndObject();
         }
         g.writeEndArray();
@@ -229,7 +233,8 @@ public final class SummaryJson {
         g.writeEndObject();
     }
 
-    private static void writeK(JsonGenerator g, KEvidence e, org.treeproof.study.Assessment as) throws IOException {
+    private static void writeK(JsonGenerator g, KEvidence e, org.treeproof.study.Assessment as, LinkageEvidence le)
+            throws IOException {
         g.writeStartObject();
         g.writeNumberField("k", e.k());
         g.writeNumberField("outliers", e.outliers());
@@ -296,6 +301,7 @@ public final class SummaryJson {
             g.writeEndObject();
         }
         g.writeEndArray();
+        BranchPValueJson.writeCdf(g, le.cdfAt(e.k()), le.consensus().distribution(e.k()));
         g.writeEndObject();
     }
 
@@ -379,6 +385,7 @@ public final class SummaryJson {
             g.writeEndObject();
         }
         g.writeEndArray();
+        BranchPValueJson.writeClusterBranches(g, evidence, r);
         g.writeArrayFieldStart("flaggedSamples");
         for (Recommendation.SampleFlag f : r.flaggedSamples()) {
             g.writeStartObject();

@@ -200,6 +200,12 @@ public final class HtmlReport {
                         .close("li");
             }
         }
+        if (model.settings().branchPValues() != null) {
+            for (Reference r : BranchPValueReport.REFERENCES) {
+                h.open("li").text(r.entry() + " ").open("a", "href", r.url()).text("doi:" + r.doi()).close("a")
+                        .close("li");
+            }
+        }
         h.close("ol").close("section").newline();
     }
 }

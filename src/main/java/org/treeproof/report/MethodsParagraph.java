@@ -115,6 +115,10 @@ public final class MethodsParagraph {
                 + "and of the fit measures, and counted as clusters of their own in the ARI and consensus. A replicate "
                 + "was cut into as many clusters as the full-data solution had with at least that many (scaled to the "
                 + "replicate's size) of their samples drawn.", m));
+        String branches = BranchPValueReport.methods(s, c);
+        if (!branches.isEmpty()) {
+            out.add(branches);
+        }
         if (model.nullCalibrated()) {
             out.add(f("To tell structure from noise, the same procedure (%d replicates each) was applied to %d null "
                     + "data sets drawn from a unimodal elliptical distribution with the data's principal axes, robust "

@@ -87,7 +87,8 @@ final class ModelFactory {
             figures.addAll(ExplainFigures.of(explanation));
         }
         return new ReportModel(run, evidence.settings(), rec.rule(), decision, tables, comparison(),
-                clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes, explanation);
+                clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes, explanation,
+                BranchPValueReport.clusterBranches(evidence, rec));
     }
 
     private EvidenceTable table(LinkageEvidence le) {
@@ -217,6 +218,7 @@ final class ModelFactory {
         out.add(new ReportModel.Setting("Replicates per null data set", Integer.toString(s.nullReplicates())));
         out.add(new ReportModel.Setting("PAC interval", "(" + Numbers.plain(s.pacLow()) + ", "
                 + Numbers.plain(s.pacHigh()) + "]"));
+        out.addAll(BranchPValueReport.settings(s));
         out.add(new ReportModel.Setting("Seed", Long.toString(s.seed())));
         out.add(new ReportModel.Setting("Smallest cluster (samples; smaller branches are outliers)",
                 Integer.toString(s.minClusterSize(evidence.samples())) + (s.minClusterSize() == 0

@@ -57,7 +57,7 @@ class ReportModelTest {
         assertTrue(m.recommendedRow().isEmpty());
         assertTrue(m.clusters().isEmpty());
         assertTrue(m.flaggedSamples().isEmpty());
-        assertEquals(List.of("dendrogram", "stability", "gap", "linkages", "heatmap"), ids(m));
+        assertEquals(List.of("dendrogram", "stability", "gap", "consensus-cdf", "linkages", "heatmap"), ids(m));
         assertTrue(m.notes().stream().anyMatch(n -> n.contains("silhouette") && n.contains("left out")), m.notes().toString());
         for (EvidenceTable t : m.evidence()) {
             assertTrue(t.recommended().isEmpty());
@@ -69,7 +69,7 @@ class ReportModelTest {
     void distancesAloneLeaveOutTheGapHeatMapAndNullColumnsAndSaySo() {
         Studies.Study s = Studies.distancesOnly();
         ReportModel m = s.model();
-        assertEquals(List.of("dendrogram", "silhouette", "stability", "consensus", "jaccard"), ids(m));
+        assertEquals(List.of("dendrogram", "silhouette", "stability", "consensus", "consensus-cdf", "jaccard"), ids(m));
         assertFalse(m.nullCalibrated());
         assertFalse(m.gapComputed());
         assertFalse(m.hasData());
