@@ -34,7 +34,7 @@ public final class StabilityChart {
 
     XYChart chart() {
         XYChart chart = XCharts.xy(WIDTH, HEIGHT, in.title(), "Number of clusters k",
-                "Adjusted Rand index (line: mean, band: 95% interval)");
+                "Adjusted Rand index (line: mean, band: middle 95% of replicates)");
         double[] x = XCharts.asDoubles(in.k());
         double yMin = 0;
         IntervalSeries ref = in.reference();

@@ -37,14 +37,17 @@ final class HtmlTables {
 
     void evidence() {
         openSection(h, "evidence");
-        h.element("p", f("Each row is one linkage's tree cut into k clusters. Stability is over %d resampled "
-                + "replicates: the mean adjusted Rand index (ARI) of each replicate's clusters with the full-data "
-                + "clusters, with the replicates' 95%% interval; PAC is the share of sample pairs clustered together "
-                + "in some replicates and apart in others (consensus in (%s, %s]); the smallest Jaccard is the least "
-                + "stable cluster's mean best match. Null columns are the same measures on data without clusters, "
-                + "and p is the Monte Carlo p-value of the observed value against them; the decision rule tests mean ARI plus "
-                + "average silhouette (stability plus separation). Cut heights are in the "
-                + "units of the dissimilarity.", model.settings().replicates(), Numbers.plain(model.settings().pacLow()),
+        h.element("p", f("Each row is one linkage's tree cut into k clusters of at least %d samples; samples on "
+                + "smaller branches are outliers (their number is shown) and are left out of the fit measures. "
+                + "Stability is over %d resampled replicates: the mean adjusted Rand index (ARI) of each replicate's "
+                + "clusters with the full-data clusters, with the range of the middle 95%% of replicates (not a "
+                + "confidence interval); PAC is the share of sample pairs clustered together in some replicates and "
+                + "apart in others (consensus in (%s, %s]); the smallest Jaccard is the least stable cluster's mean "
+                + "best match. Null columns are the same measures on data without clusters. The excess over the null "
+                + "is the mean ARI and the silhouette, each standardised by the null data sets at the same linkage "
+                + "and k, added; its p-value is adjusted for the choice among every linkage and k. Cut heights are "
+                + "in the units of the dissimilarity.", model.decision().minClusterSize(),
+                model.settings().replicates(), Numbers.plain(model.settings().pacLow()),
                 Numbers.plain(model.settings().pacHigh())));
         boolean tie = false;
         for (EvidenceTable t : model.evidence()) {

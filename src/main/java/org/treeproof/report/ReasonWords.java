@@ -127,7 +127,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
                         Numbers.p(f.pAdjusted()), Numbers.fixed(f.worstJaccard(), 2))
                 : f("mean ARI %s, smallest cluster Jaccard %s, silhouette %s", Numbers.fixed(f.meanAri(), 2),
                         Numbers.fixed(f.worstJaccard(), 2), Numbers.fixed(f.silhouette(), 2));
-        String failed = a.failed().isEmpty() ? "" : "; it fails: " + Prose.and(a.failed().stream()
+        String failed = a.failed().isEmpty() ? "" : "; conditions not met: " + Prose.and(a.failed().stream()
                 .map(this::condition).toList());
         return f("With %s linkage the strongest solution is k = %d (%s)%s.", Names.linkage(a.linkage()), a.k(),
                 figures, failed);
