@@ -61,7 +61,10 @@ public record Expected(List<Answer> answers, String reason) {
 
         @Override
         public String label() {
-            String k = new TreeSet<>(ks).stream().map(String::valueOf).collect(Collectors.joining(","));
+            var sorted = new TreeSet<>(ks);
+            String k = sorted.last() - sorted.first() + 1 == ks.size() && ks.size() > 2
+                    ? sorted.first() + ".." + sorted.last()
+                    : sorted.stream().map(String::valueOf).collect(Collectors.joining(","));
             var s = new StringBuilder("k=").append(ks.size() == 1 ? k : "{" + k + "}");
             s.append(verdicts.size() == 1 ? " " + verdicts.iterator().next().charAt(0) : " s/t");
             if (minSmallest > SMALLEST_CLUSTER) {
@@ -85,8 +88,8 @@ public record Expected(List<Answer> answers, String reason) {
         return new Expected(List.of(new NoStructure()), reason);
     }
 
-    /** Text for the table: the accepted answers joined by {@code |}. */
+    /** Text for the table: the accepted answers joined by {@code or}. */
     public String label() {
-        return answers.stream().map(Answer::label).collect(Collectors.joining(" | "));
+        return answers.stream().map(Answer::label).collect(Collectors.joining(" or "));
     }
 }

@@ -16,7 +16,8 @@ import org.junit.jupiter.api.Test;
  * prints the table (also written to {@code target/judgement/table.txt}) and fails naming every wrong case.
  *
  * <p>Tagged {@code judgement}: the pom's {@code excludedTestGroups} property switches it on or off for
- * {@code mvn -B verify} in one place. {@code -Djudgement.only=REGEX} runs only the matching cases.
+ * {@code mvn -B verify} in one place. {@code -Djudgement.only=REGEX} runs only the matching cases,
+ * {@code -Djudgement.draw=D} judges fresh synthetic data (another draw of the same kinds).
  */
 @Tag("judgement")
 class JudgementIT {
@@ -26,7 +27,8 @@ class JudgementIT {
         Path work = Path.of(jar).toAbsolutePath().getParent().resolve("judgement");
         String only = System.getProperty("judgement.only", "");
         var suite = new JudgementSuite(Path.of(jar), work,
-                List.of("-Xmx" + System.getProperty("judgement.xmx", "3g")));
+                List.of("-Xmx" + System.getProperty("judgement.xmx", "3g")),
+                Integer.getInteger("judgement.draw", 0));
         System.out.println(JudgementSuite.header());
         List<JudgementSuite.Outcome> outcomes = suite.run(only.isEmpty() ? null : Pattern.compile(only), System.out);
         String table = JudgementSuite.table(outcomes);

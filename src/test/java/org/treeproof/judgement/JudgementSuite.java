@@ -17,6 +17,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import java.util.regex.Pattern;
+import java.util.stream.Collectors;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.treeproof.judgement.Expected.Answer;
@@ -65,22 +66,26 @@ public final class JudgementSuite {
     private final Path jar;
     private final Path work;
     private final List<String> jvm;
+    private final int draw;
 
     /**
      * @param jar  the shaded jar to judge
      * @param work a scratch directory (synthetic sets and study outputs go here)
      * @param jvm  JVM options for each study (e.g. {@code -Xmx3g})
+     * @param draw which draw of the synthetic sets (0: the suite; others: fresh data, see
+     *             {@link SyntheticSets#all(int)})
      */
-    public JudgementSuite(Path jar, Path work, List<String> jvm) {
+    public JudgementSuite(Path jar, Path work, List<String> jvm, int draw) {
         this.jar = jar.toAbsolutePath();
         this.work = work.toAbsolutePath();
         this.jvm = List.copyOf(jvm);
+        this.draw = draw;
     }
 
     /** Runs the cases whose name matches {@code only} (a regular expression; null for all), printing as it goes. */
     public List<Outcome> run(Pattern only, PrintStream progress) throws IOException, InterruptedException {
-        Path synthetic = work.resolve("data");
-        SyntheticSets.writeAll(synthetic);
+        Path synthetic = work.resolve("data-" + draw);
+        SyntheticSets.writeAll(synthetic, draw);
         var outcomes = new ArrayList<Outcome>();
         for (Case c : JudgementCases.all()) {
             if (only != null && !only.matcher(c.name()).find()) {
@@ -179,7 +184,7 @@ public final class JudgementSuite {
             }
             problems.add(p);
         }
-        return String.join(" | ", problems);
+        return String.join(" or ", problems);
     }
 
     private static String check(Answer a, Got got, double ari, Map<String, String> truth) {
@@ -273,7 +278,8 @@ public final class JudgementSuite {
         return String.format(Locale.ROOT, FORMAT, o.c().name(), o.c().expected().label(),
                 g == null ? "-" : g.verdict(), g == null ? "-" : String.valueOf(g.k()),
                 g == null ? "-" : g.sizesText(), g == null ? "-" : String.valueOf(g.outliers().size()),
-                Double.isNaN(o.ari()) ? "-" : String.format(Locale.ROOT, "%.2f", o.ari()), o.right() ? "yes" : "NO",
+                Double.isNaN(o.ari()) ? "-" : String.format(Locale.ROOT, "%.2f", o.ari()).replace("-0.00", "0.00"),
+                o.right() ? "yes" : "NO",
                 String.format(Locale.ROOT, "%.1f", o.seconds()), o.why()).stripTrailing();
     }
 
@@ -290,12 +296,21 @@ public final class JudgementSuite {
         return s.toString();
     }
 
-    /** The cases and their accepted answers with reasons, as Markdown. */
+    /** The cases and their accepted answers with reasons, as Markdown; cases that share an answer share a row. */
     public static String listing() {
-        var s = new StringBuilder("| case | input options | accepted | reason |\n|---|---|---|---|\n");
-        for (Case c : JudgementCases.all()) {
-            s.append("| ").append(c.name()).append(" | ").append(String.join(" ", c.options())).append(" | ")
+        var s = new StringBuilder("| cases | input options | accepted | reason |\n|---|---|---|---|\n");
+        List<Case> all = JudgementCases.all();
+        for (int i = 0; i < all.size();) {
+            Case c = all.get(i);
+            int j = i + 1;
+            while (j < all.size() && all.get(j).expected().equals(c.expected())
+                    && all.get(j).options().equals(c.options())) {
+                j++;
+            }
+            String names = all.subList(i, j).stream().map(Case::name).collect(Collectors.joining(", "));
+            s.append("| ").append(names).append(" | ").append(String.join(" ", c.options())).append(" | ")
                     .append(c.expected().label()).append(" | ").append(c.expected().reason()).append(" |\n");
+            i = j;
         }
         return s.toString();
     }
@@ -312,9 +327,9 @@ public final class JudgementSuite {
     }
 
     /**
-     * {@code JudgementSuite [--jar JAR] [--work DIR] [--only REGEX] [--table FILE] [--xmx SIZE] [--list]}, run from
-     * the project directory. Prints the table; exits 0 whether or not cases are wrong (the table is the result),
-     * 1 if a study could not run.
+     * {@code JudgementSuite [--jar JAR] [--work DIR] [--only REGEX] [--draw D] [--table FILE] [--xmx SIZE]
+     * [--list]}, run from the project directory. Prints the table; exits 0 whether or not cases are wrong (the
+     * table is the result), 1 if a study could not run.
      */
     public static void main(String[] args) throws Exception {
         Path jar = Path.of("target", "treeproof.jar");
@@ -322,6 +337,7 @@ public final class JudgementSuite {
         Path tableFile = null;
         Pattern only = null;
         String xmx = "3g";
+        int draw = 0;
         for (int i = 0; i < args.length; i++) {
             switch (args[i]) {
                 case "--jar" -> jar = Path.of(args[++i]);
@@ -329,6 +345,7 @@ public final class JudgementSuite {
                 case "--only" -> only = Pattern.compile(args[++i]);
                 case "--table" -> tableFile = Path.of(args[++i]);
                 case "--xmx" -> xmx = args[++i];
+                case "--draw" -> draw = Integer.parseInt(args[++i]);
                 case "--list" -> {
                     System.out.print(listing());
                     return;
@@ -340,7 +357,8 @@ public final class JudgementSuite {
             }
         }
         System.out.println(header());
-        List<Outcome> outcomes = new JudgementSuite(jar, work, List.of("-Xmx" + xmx)).run(only, System.out);
+        List<Outcome> outcomes = new JudgementSuite(jar, work, List.of("-Xmx" + xmx), draw).run(only,
+                System.out);
         String table = table(outcomes);
         System.out.print(table.substring(table.lastIndexOf("right in")));
         if (tableFile != null) {

@@ -37,56 +37,67 @@ public final class SyntheticSets {
     private SyntheticSets() {
     }
 
-    /** Every synthetic set, in a fixed order. */
+    /** Every synthetic set of the suite (draw 0), in a fixed order. */
     public static List<Set> all() {
+        return all(0);
+    }
+
+    /**
+     * Every synthetic set, in a fixed order, from draw {@code draw}: draw 0 is the suite; any other draw gives fresh
+     * data of the same kinds, sizes and names from other seeds (offset by 100 000 per draw), to judge a rule on data
+     * it was not developed on. The expected answers are the same for every draw.
+     */
+    public static List<Set> all(int draw) {
+        long d = 100_000L * draw;
         var sets = new ArrayList<Set>();
         for (int s = 1; s <= 3; s++) {
-            sets.add(gaussianNoise(s));
+            sets.add(gaussianNoise(s, d + 1000 + s));
         }
         for (int s = 1; s <= 3; s++) {
-            sets.add(uniformNoise(s));
+            sets.add(uniformNoise(s, d + 2000 + s));
         }
         for (int s = 1; s <= 4; s++) {
-            sets.add(heavyTailedNoise(s));
+            sets.add(heavyTailedNoise(s, d + 3000 + s));
         }
         for (int s = 1; s <= 2; s++) {
-            sets.add(oneFarPoint(s));
+            sets.add(oneFarPoint(s, d + 4000 + s));
         }
-        sets.add(groupsWithFarPoints(1, new int[] {60, 50, 40}, 8, 3));
-        sets.add(groupsWithFarPoints(2, new int[] {80, 70}, 6, 2));
-        sets.add(wideGroups("wide-3-groups-p200", 301, new int[] {50, 45, 40}, 200, 24, 3.0));
-        sets.add(wideGroups("wide-3-groups-p500", 302, new int[] {50, 45, 40}, 500, 30, 4.0));
-        sets.add(wideGroups("wide-4-unequal-groups-p300", 303, new int[] {60, 40, 25, 15}, 300, 28, 4.0));
-        sets.add(smallRealGroup());
-        sets.add(imbalancedGroups());
-        sets.add(nestedGroups());
-        sets.add(countsInRows());
-        sets.add(parallelBands());
-        sets.add(chain());
+        sets.add(groupsWithFarPoints(d + 5001, new int[] {60, 50, 40}, 8, 3));
+        sets.add(groupsWithFarPoints(d + 5002, new int[] {80, 70}, 6, 2));
+        sets.add(wideGroups("wide-3-groups-p200", d + 301, new int[] {50, 45, 40}, 200, 24, 3.0));
+        sets.add(wideGroups("wide-3-groups-p500", d + 302, new int[] {50, 45, 40}, 500, 30, 4.0));
+        sets.add(wideGroups("wide-4-unequal-groups-p300", d + 303, new int[] {60, 40, 25, 15}, 300, 28, 4.0));
+        sets.add(smallRealGroup(d + 6001));
+        sets.add(imbalancedGroups(d + 7001));
+        sets.add(nestedGroups(d + 8001));
+        sets.add(countsInRows(d + 9001));
+        sets.add(parallelBands(d + 10001));
+        sets.add(chain(d + 11001));
         return List.copyOf(sets);
     }
 
-    /** Writes every set into {@code dir} (created if absent). */
-    public static void writeAll(Path dir) throws IOException {
+    /** Writes every set of draw {@code draw} into {@code dir} (created if absent). */
+    public static void writeAll(Path dir, int draw) throws IOException {
         Files.createDirectories(dir);
-        for (Set s : all()) {
+        for (Set s : all(draw)) {
             s.writeTo(dir);
         }
     }
 
+    /** {@code SyntheticSets DIR [DRAW]}: writes the sets. */
     public static void main(String[] args) throws IOException {
-        if (args.length != 1) {
-            System.err.println("usage: SyntheticSets DIR");
+        if (args.length < 1 || args.length > 2) {
+            System.err.println("usage: SyntheticSets DIR [DRAW]");
             System.exit(2);
         }
-        writeAll(Path.of(args[0]));
+        writeAll(Path.of(args[0]), args.length == 2 ? Integer.parseInt(args[1]) : 0);
     }
 
     // ---- the kinds ------------------------------------------------------------------------------------------
 
     /** One correlated Gaussian population: n 100-200, p 4-30, covariance A A^T with A = I + random. */
-    static Set gaussianNoise(int seed) {
-        var rng = new SplittableRandom(1000L + seed);
+    static Set gaussianNoise(int index, long rngSeed) {
+        var rng = new SplittableRandom(rngSeed);
         int n = 100 + rng.nextInt(101);
         int p = 4 + rng.nextInt(27);
         double[][] a = mixing(rng, p);
@@ -94,12 +105,12 @@ public final class SyntheticSets {
         for (int i = 0; i < n; i++) {
             x[i] = times(a, gaussians(rng, p));
         }
-        return rows("gaussian-noise-" + seed, x, constantClass(n, "population"));
+        return rows("gaussian-noise-" + index, x, constantClass(n, "population"));
     }
 
     /** Independent uniform features on boxes of random widths: n 100-200, p 2-8. */
-    static Set uniformNoise(int seed) {
-        var rng = new SplittableRandom(2000L + seed);
+    static Set uniformNoise(int index, long rngSeed) {
+        var rng = new SplittableRandom(rngSeed);
         int n = 100 + rng.nextInt(101);
         int p = 2 + rng.nextInt(7);
         double[] width = new double[p];
@@ -112,15 +123,15 @@ public final class SyntheticSets {
                 x[i][j] = width[j] * rng.nextDouble();
             }
         }
-        return rows("uniform-noise-" + seed, x, constantClass(n, "population"));
+        return rows("uniform-noise-" + index, x, constantClass(n, "population"));
     }
 
     /**
      * One multivariate t population with 3 degrees of freedom (a correlated Gaussian divided by sqrt(chi2_3 / 3),
      * the usual construction): n 120-220, p 5-10. Heavy tails give a few far samples by chance, no groups.
      */
-    static Set heavyTailedNoise(int seed) {
-        var rng = new SplittableRandom(3000L + seed);
+    static Set heavyTailedNoise(int index, long rngSeed) {
+        var rng = new SplittableRandom(rngSeed);
         int n = 120 + rng.nextInt(101);
         int p = 5 + rng.nextInt(6);
         double[][] a = mixing(rng, p);
@@ -138,12 +149,12 @@ public final class SyntheticSets {
             }
             x[i] = times(a, z);
         }
-        return rows("heavy-tailed-noise-" + seed, x, constantClass(n, "population"));
+        return rows("heavy-tailed-noise-" + index, x, constantClass(n, "population"));
     }
 
     /** One correlated Gaussian population (n 120-200, p 4-10) and one sample 12 standard units from its centre. */
-    static Set oneFarPoint(int seed) {
-        var rng = new SplittableRandom(4000L + seed);
+    static Set oneFarPoint(int index, long rngSeed) {
+        var rng = new SplittableRandom(rngSeed);
         int n = 120 + rng.nextInt(81);
         int p = 4 + rng.nextInt(7);
         double[][] a = mixing(rng, p);
@@ -155,15 +166,15 @@ public final class SyntheticSets {
         }
         x[n] = times(a, scaled(unit(rng, p), 12));
         cls[n] = FAR_POINT;
-        return rows("one-far-point-" + seed, shuffled(rng, x, cls), cls);
+        return rows("one-far-point-" + index, shuffled(rng, x, cls), cls);
     }
 
     /**
      * Well separated spherical groups (unit noise; group g > 0 shifted by 5 on its own three features) plus a few far
      * points 25 units from the grand centre in random directions.
      */
-    static Set groupsWithFarPoints(int seed, int[] sizes, int p, int far) {
-        var rng = new SplittableRandom(5000L + seed);
+    static Set groupsWithFarPoints(long seed, int[] sizes, int p, int far) {
+        var rng = new SplittableRandom(seed);
         int n = sum(sizes);
         double[][] x = new double[n + far][];
         String[] cls = new String[n + far];
@@ -209,8 +220,8 @@ public final class SyntheticSets {
     }
 
     /** 280 samples of one population and a real group of 10, 6 units away on five of ten features. */
-    static Set smallRealGroup() {
-        var rng = new SplittableRandom(6001L);
+    static Set smallRealGroup(long seed) {
+        var rng = new SplittableRandom(seed);
         int p = 10;
         double[][] x = new double[290][];
         String[] cls = new String[290];
@@ -228,8 +239,8 @@ public final class SyntheticSets {
     }
 
     /** Three well separated groups of 140, 45 and 15 samples (shift 5 on own feature pairs, p = 6). */
-    static Set imbalancedGroups() {
-        var rng = new SplittableRandom(7001L);
+    static Set imbalancedGroups(long seed) {
+        var rng = new SplittableRandom(seed);
         int[] sizes = {140, 45, 15};
         int p = 6;
         double[][] x = new double[sum(sizes)][];
@@ -252,8 +263,8 @@ public final class SyntheticSets {
      * Two families of two subgroups each, 40 samples per subgroup, p = 10: families 8 units apart on features 1-3,
      * subgroups of family 1 apart by 3.5 units on features 4-6, of family 2 on features 7-9; feature 10 is noise.
      */
-    static Set nestedGroups() {
-        var rng = new SplittableRandom(8001L);
+    static Set nestedGroups(long seed) {
+        var rng = new SplittableRandom(seed);
         int p = 10;
         double[][] x = new double[160][];
         String[] cls = new String[160];
@@ -272,12 +283,12 @@ public final class SyntheticSets {
 
     /**
      * RNA-seq-like counts, genes in rows and samples in columns: 600 genes, 3 subtypes of 30 samples. Gene means are
-     * log-uniform between 10 and 2000; each sample has a size factor exp(N(0, 0.1^2)) (similar sequencing depths) and each count a biological
-     * factor exp(N(0, 0.3^2)) before Poisson sampling; subtype g raises its own 30 genes fourfold. Analysed with
-     * {@code --log2 --samples-in-columns}.
+     * log-uniform between 10 and 2000; each sample has a size factor exp(N(0, 0.1^2)) (similar sequencing depths)
+     * and each count a biological factor exp(N(0, 0.3^2)) before Poisson sampling; subtype g raises its own 30 genes
+     * fourfold. Analysed with {@code --log2 --samples-in-columns}.
      */
-    static Set countsInRows() {
-        var rng = new SplittableRandom(9001L);
+    static Set countsInRows(long seed) {
+        var rng = new SplittableRandom(seed);
         int genes = 600;
         int per = 30;
         int n = 3 * per;
@@ -325,8 +336,8 @@ public final class SyntheticSets {
      * N(0, 0.3^2), band centres 3 units apart, the pair turned 45 degrees so that z-scoring keeps the shape. A clear
      * empty gap separates the bands, but each band is seven times longer than the gap.
      */
-    static Set parallelBands() {
-        var rng = new SplittableRandom(10001L);
+    static Set parallelBands(long seed) {
+        var rng = new SplittableRandom(seed);
         double[][] x = new double[200][];
         String[] cls = new String[200];
         double c = Math.sqrt(0.5);
@@ -341,16 +352,16 @@ public final class SyntheticSets {
     }
 
     /**
-     * One continuous curved chain: 200 samples on a half circle of radius 10 (angle uniform), with N(0, 0.6^2)
-     * scatter in both directions and a third feature of N(0, 0.6^2); no gap anywhere along the chain.
+     * One continuous curved chain in the plane: 200 samples on a half circle of radius 10 (angle uniform), with
+     * N(0, 0.6^2) scatter in both directions; no gap anywhere along the chain.
      */
-    static Set chain() {
-        var rng = new SplittableRandom(11001L);
+    static Set chain(long seed) {
+        var rng = new SplittableRandom(seed);
         double[][] x = new double[200][];
         for (int i = 0; i < 200; i++) {
             double t = Math.PI * rng.nextDouble();
-            x[i] = new double[] {10 * Math.cos(t) + 0.6 * rng.nextGaussian(), 10 * Math.sin(t) + 0.6 * rng.nextGaussian(),
-                0.6 * rng.nextGaussian()};
+            x[i] = new double[] {10 * Math.cos(t) + 0.6 * rng.nextGaussian(),
+                10 * Math.sin(t) + 0.6 * rng.nextGaussian()};
         }
         return rows("curved-chain", x, constantClass(200, "population"));
     }
@@ -383,7 +394,7 @@ public final class SyntheticSets {
         return c;
     }
 
-    /** A random mixing matrix I + 0.5 G / sqrt(p) with G standard Gaussian: correlated features, full rank in practice. */
+    /** A mixing matrix I + 0.5 G / sqrt(p), G standard Gaussian: correlated features, full rank in practice. */
     private static double[][] mixing(SplittableRandom rng, int p) {
         double[][] a = new double[p][p];
         for (int r = 0; r < p; r++) {

@@ -30,6 +30,17 @@ class SyntheticSetsTest {
     }
 
     @Test
+    void anotherDrawIsFreshDataOfTheSameCases() {
+        List<SyntheticSets.Set> suite = SyntheticSets.all();
+        List<SyntheticSets.Set> other = SyntheticSets.all(1);
+        assertEquals(suite.stream().map(SyntheticSets.Set::name).toList(),
+                other.stream().map(SyntheticSets.Set::name).toList());
+        for (int i = 0; i < suite.size(); i++) {
+            assertFalse(suite.get(i).csv().equals(other.get(i).csv()), suite.get(i).name());
+        }
+    }
+
+    @Test
     void everyCaseHasFilesAndAnExpectedAnswer() {
         var names = new HashSet<String>();
         for (JudgementCases.Case c : JudgementCases.all()) {
