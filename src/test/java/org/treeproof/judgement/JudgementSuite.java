@@ -125,11 +125,32 @@ public final class JudgementSuite {
             return new Outcome(c, null, Double.NaN, false, "exit " + p.exitValue() + ": "
                     + msg.lines().findFirst().orElse(""), secs);
         }
+        return judgeOutput(c, dataDir, out, secs);
+    }
+
+    private static Outcome judgeOutput(Case c, Path dataDir, Path out, double secs) throws IOException {
         Got got = read(out);
         Map<String, String> truth = readTruth(dataDir.resolve(c.truthFile()));
         double ari = ari(truth, got);
         String why = judge(c.expected(), got, ari, truth);
         return new Outcome(c, got, ari, why.isEmpty(), why, secs);
+    }
+
+    /**
+     * Judges the outputs an earlier {@link #run} left in the work directory, without running any study again (the
+     * seconds column is then empty). Cases without output are left out.
+     */
+    public List<Outcome> rejudge(Pattern only) throws IOException {
+        Path synthetic = work.resolve("data-" + draw);
+        var outcomes = new ArrayList<Outcome>();
+        for (Case c : JudgementCases.all()) {
+            Path out = work.resolve("out").resolve(c.name());
+            if ((only == null || only.matcher(c.name()).find()) && Files.isRegularFile(out.resolve("summary.json"))) {
+                Path dir = c.source() == JudgementCases.Source.OPEN ? OPEN_DIR.toAbsolutePath() : synthetic;
+                outcomes.add(judgeOutput(c, dir, out, Double.NaN));
+            }
+        }
+        return outcomes;
     }
 
     private static double seconds(long start) {
@@ -280,7 +301,8 @@ public final class JudgementSuite {
                 g == null ? "-" : g.sizesText(), g == null ? "-" : String.valueOf(g.outliers().size()),
                 Double.isNaN(o.ari()) ? "-" : String.format(Locale.ROOT, "%.2f", o.ari()).replace("-0.00", "0.00"),
                 o.right() ? "yes" : "NO",
-                String.format(Locale.ROOT, "%.1f", o.seconds()), o.why()).stripTrailing();
+                Double.isNaN(o.seconds()) ? "-" : String.format(Locale.ROOT, "%.1f", o.seconds()), o.why())
+                .stripTrailing();
     }
 
     /** The whole table with a closing count line. */
@@ -290,9 +312,29 @@ public final class JudgementSuite {
             s.append(row(o)).append('\n');
         }
         long right = outcomes.stream().filter(Outcome::right).count();
-        double total = outcomes.stream().mapToDouble(Outcome::seconds).sum();
+        double total = outcomes.stream().mapToDouble(Outcome::seconds).filter(x -> !Double.isNaN(x)).sum();
         s.append(String.format(Locale.ROOT, "right in %d of %d cases; %.0f s of studies%n", right, outcomes.size(),
                 total));
+        return s.toString();
+    }
+
+    /** The table as Markdown (for README.md): case, accepted, verdict, k, sizes, outliers, ARI, right. */
+    public static String markdown(List<Outcome> outcomes) {
+        var s = new StringBuilder("| case | accepted | verdict | k | sizes | outliers | ARI | right |\n")
+                .append("|---|---|---|---|---|---|---|---|\n");
+        for (Outcome o : outcomes) {
+            Got g = o.got();
+            s.append("| ").append(o.c().name()).append(" | ").append(o.c().expected().label()).append(" | ")
+                    .append(g == null ? "failed" : g.verdict()).append(" | ")
+                    .append(g == null ? "" : String.valueOf(g.k())).append(" | ")
+                    .append(g == null ? "" : g.sizesText()).append(" | ")
+                    .append(g == null ? "" : String.valueOf(g.outliers().size())).append(" | ")
+                    .append(Double.isNaN(o.ari()) ? "" : String.format(Locale.ROOT, "%.2f", o.ari())
+                            .replace("-0.00", "0.00"))
+                    .append(" | ").append(o.right() ? "yes" : "**no**").append(" |\n");
+        }
+        long right = outcomes.stream().filter(Outcome::right).count();
+        s.append("\nRight in ").append(right).append(" of ").append(outcomes.size()).append(" cases.\n");
         return s.toString();
     }
 
@@ -327,25 +369,30 @@ public final class JudgementSuite {
     }
 
     /**
-     * {@code JudgementSuite [--jar JAR] [--work DIR] [--only REGEX] [--draw D] [--table FILE] [--xmx SIZE]
-     * [--list]}, run from the project directory. Prints the table; exits 0 whether or not cases are wrong (the
-     * table is the result), 1 if a study could not run.
+     * {@code JudgementSuite [--jar JAR] [--work DIR] [--only REGEX] [--draw D] [--table FILE] [--markdown FILE]
+     * [--xmx SIZE] [--rejudge] [--list]}, run from the project directory; {@code --rejudge} judges the outputs of
+     * the last run in the work directory again without running studies. Prints the table; exits 0 whether or not
+     * cases are wrong (the table is the result), 1 if a study could not run.
      */
     public static void main(String[] args) throws Exception {
         Path jar = Path.of("target", "treeproof.jar");
         Path work = Path.of("target", "judgement");
         Path tableFile = null;
+        Path markdownFile = null;
         Pattern only = null;
         String xmx = "3g";
         int draw = 0;
+        boolean rejudge = false;
         for (int i = 0; i < args.length; i++) {
             switch (args[i]) {
                 case "--jar" -> jar = Path.of(args[++i]);
                 case "--work" -> work = Path.of(args[++i]);
                 case "--only" -> only = Pattern.compile(args[++i]);
                 case "--table" -> tableFile = Path.of(args[++i]);
+                case "--markdown" -> markdownFile = Path.of(args[++i]);
                 case "--xmx" -> xmx = args[++i];
                 case "--draw" -> draw = Integer.parseInt(args[++i]);
+                case "--rejudge" -> rejudge = true;
                 case "--list" -> {
                     System.out.print(listing());
                     return;
@@ -356,13 +403,24 @@ public final class JudgementSuite {
                 }
             }
         }
-        System.out.println(header());
-        List<Outcome> outcomes = new JudgementSuite(jar, work, List.of("-Xmx" + xmx), draw).run(only,
-                System.out);
+        var suite = new JudgementSuite(jar, work, List.of("-Xmx" + xmx), draw);
+        List<Outcome> outcomes;
+        if (rejudge) {
+            outcomes = suite.rejudge(only);
+            System.out.print(table(outcomes));
+        } else {
+            System.out.println(header());
+            outcomes = suite.run(only, System.out);
+        }
         String table = table(outcomes);
-        System.out.print(table.substring(table.lastIndexOf("right in")));
+        if (!rejudge) {
+            System.out.print(table.substring(table.lastIndexOf("right in")));
+        }
         if (tableFile != null) {
             Files.writeString(tableFile, table, StandardCharsets.UTF_8);
+        }
+        if (markdownFile != null) {
+            Files.writeString(markdownFile, markdown(outcomes), StandardCharsets.UTF_8);
         }
         System.exit(outcomes.stream().anyMatch(o -> o.got() == null) ? 1 : 0);
     }
