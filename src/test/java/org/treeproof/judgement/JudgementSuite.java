@@ -203,15 +203,17 @@ public final class JudgementSuite {
             if (p.isEmpty()) {
                 return "";
             }
-            problems.add(p);
+            problems.add(expected.answers().size() == 1 ? p : "[" + a.label() + "] " + p);
         }
-        return String.join(" or ", problems);
+        return String.join("; ", problems);
     }
 
     private static String check(Answer a, Got got, double ari, Map<String, String> truth) {
         int k = got.sizes().size();
         if (a instanceof NoStructure) {
-            return k <= 1 && got.k() <= 1 ? "" : "claims k=" + got.k() + " (" + got.verdict() + ")";
+            return k <= 1 && got.k() <= 1 ? ""
+                    : "claims k=" + got.k() + " (" + got.verdict() + ")"
+                            + (k != got.k() ? ", clusters.csv has " + k + " clusters" : "");
         }
         var s = (Structure) a;
         var why = new ArrayList<String>();
