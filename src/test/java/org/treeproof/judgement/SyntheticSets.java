@@ -283,7 +283,7 @@ public final class SyntheticSets {
 
     /**
      * RNA-seq-like counts, genes in rows and samples in columns: 600 genes, 3 subtypes of 30 samples. Gene means are
-     * log-uniform between 10 and 2000; each sample has a size factor exp(N(0, 0.1^2)) (similar sequencing depths)
+     * log-uniform between 10 and 2000; each sample has a size factor exp(N(0, 0.05^2)) (near-equal sequencing depths)
      * and each count a biological factor exp(N(0, 0.3^2)) before Poisson sampling; subtype g raises its own 30 genes
      * fourfold. Analysed with {@code --log2 --samples-in-columns}.
      */
@@ -303,7 +303,7 @@ public final class SyntheticSets {
         shuffle(rng, subtype);
         long[][] counts = new long[genes][n];
         for (int i = 0; i < n; i++) {
-            double size = Math.exp(0.1 * rng.nextGaussian());
+            double size = Math.exp(0.05 * rng.nextGaussian());
             for (int j = 0; j < genes; j++) {
                 double mu = mean[j] * size * Math.exp(0.3 * rng.nextGaussian());
                 if (j / per == subtype[i]) {
