@@ -11,9 +11,11 @@ import org.treeproof.data.InputException;
 import org.treeproof.distance.Metric;
 import org.treeproof.io.CheckpointFile;
 import org.treeproof.io.CsvOutputs;
+import org.treeproof.io.DiskFull;
 import org.treeproof.io.LabelsReader;
 import org.treeproof.io.LoadedInput;
 import org.treeproof.io.OutputDirectory;
+import org.treeproof.io.OutputGuard;
 import org.treeproof.io.SummaryJson;
 import org.treeproof.resample.ReferenceData;
 import org.treeproof.resample.Resampling;
@@ -68,7 +70,9 @@ final class AssessCommand implements Callable<Integer> {
             + "master). Results do not depend on it.")
     String engine;
 
-    @Option(names = "--force", description = "Replace DIR if it exists (only once the new results are complete).")
+    @Option(names = "--force", description = "Replace DIR if it exists and treeproof wrote it, unchanged (only once the "
+            + "new results are complete). Never replaces a folder holding the input, the current directory or a folder "
+            + "above it.")
     boolean force;
 
     @Option(names = "--resume", description = "Continue a run of the same study that was interrupted, from the "
@@ -85,10 +89,12 @@ final class AssessCommand implements Callable<Integer> {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
-    /** The command line as typed (after the program name), for the reproducibility section. */
+    /** The command line as typed (the words after the sub-command's name), for the reproducibility section. */
     private String[] commandLine() {
-        var args = new ArrayList<String>(List.of("treeproof", "assess"));
-        args.addAll(spec.commandLine().getParseResult().originalArgs());
+        List<String> typed = spec.commandLine().getParseResult().originalArgs();
+        int at = typed.indexOf(spec.name());
+        var args = new ArrayList<String>(List.of("treeproof", spec.name()));
+        args.addAll(typed.subList(at + 1, typed.size()));
         return args.toArray(String[]::new);
     }
 
@@ -114,23 +120,33 @@ final class AssessCommand implements Callable<Integer> {
         Engine chosen = engine == null ? Engine.LOCAL : Engine.parse(engine);
         chosen.requireAvailable();
         StudySettings settings = study.settings();
-        if (OutputDirectory.exists(out) && !force) {
-            throw new InputException("--out " + out + ": already exists; choose another directory or add --force");
+        List<Path> reads = labels == null ? List.of(input) : List.of(input, labels);
+        InputHints.requireReadable(input, "INPUT");
+        if (labels != null) {
+            InputHints.requireReadable(labels, "--labels");
         }
+        OutputGuard.check(out, "--out", force, reads);
         inputOptions.requireUntransformedFor(settings.metric());
         LoadedInput loaded = inputOptions.load(input);
         StudyInput studyInput = loaded.isDistanceTable()
                 ? StudyInput.ofDistances(loaded.sampleIds(), loaded.distances().orElseThrow())
                 : StudyInput.of(loaded.matrix().orElseThrow());
-        settings.checkAgainst(studyInput.samples(), studyInput.hasData());
+        settings.checkAgainst(studyInput.samples(), studyInput.hasData(), study.maxKGiven());
+        org.treeproof.study.Magnitudes.requireWithinLimit(studyInput);
         String[] classes = labels == null ? null
                 : LabelsReader.read(labels, inputOptions.delimiter().orElse(null), loaded.sampleIds());
         MemoryEstimate.of(studyInput.samples(), loaded.features(), settings, nThreads, studyInput.hasData())
                 .requireFits(Runtime.getRuntime().maxMemory(), studyInput.samples());
 
+        if (!quiet) {
+            for (String w : StudyOutputs.loneFeatureWarnings(loaded)) {
+                System.err.println("treeproof: " + w);
+            }
+        }
         String fingerprint = fingerprint(loaded, settings);
         Evidence evidence;
         CheckpointFile checkpoint = CheckpointFile.open(out, fingerprint, resume);
+        KeptWork kept = new KeptWork(checkpoint, out.toString(), System.err);
         try (Engine.Run run = chosen.start(nThreads);
                 var progress = new ProgressReporter(System.err, quiet || noProgress)) {
             if (resume && !quiet) {
@@ -144,18 +160,27 @@ final class AssessCommand implements Callable<Integer> {
                     .withCheckpoint(checkpoint).run();
         } catch (InputException e) {
             // the input cannot be studied as asked: nothing worth resuming
+            kept.close();
             checkpoint.discard();
             throw e;
+        } catch (RuntimeException e) {
+            kept.close();
+            checkpoint.close();
+            throw DiskFull.causedBy(e) ? kept.diskFullDuringStudy() : e;
         } finally {
             checkpoint.close();
         }
         Recommendation rec = Recommender.of(evidence, DecisionRule.DEFAULT).recommend();
         var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine(), nThreads,
                 (System.nanoTime() - started) / 1e9);
-        try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force)) {
+        try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force, reads)) {
             outputs.writeInto(dir);
             dir.commit();
+        } catch (RuntimeException e) {
+            kept.close();
+            throw DiskFull.causedBy(e) ? kept.diskFullDuringResults() : e;
         }
+        kept.close();
         checkpoint.discard();
         if (!quiet) {
             System.out.println(outputs.headline());

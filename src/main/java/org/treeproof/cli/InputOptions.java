@@ -86,6 +86,14 @@ public final class InputOptions {
      *                        apply to a distance table
      */
     public LoadedInput load(Path input) {
+        try {
+            return loadAsGiven(input);
+        } catch (InputException e) {
+            throw InputHints.explain(input, e, this);
+        }
+    }
+
+    private LoadedInput loadAsGiven(Path input) {
         if (distances) {
             List<String> notForDistances = new ArrayList<>();
             addIf(notForDistances, samplesInColumns, "--samples-in-columns");

@@ -61,8 +61,31 @@ final class StudyOutputs {
     }
 
     List<String> preparationSteps() {
-        return loaded.preparation().map(r -> r.steps())
-                .orElse(List.of(String.format(Locale.ROOT, "Read a distance table of %d samples.", loaded.samples())));
+        var steps = new ArrayList<String>(loaded.preparation().map(r -> r.steps())
+                .orElse(List.of(String.format(Locale.ROOT, "Read a distance table of %d samples.", loaded.samples()))));
+        steps.addAll(loneFeatureWarnings(loaded));
+        return steps;
+    }
+
+    /** A warning per feature that alone puts a sample far out (at most five named, then a count). */
+    static List<String> loneFeatureWarnings(LoadedInput loaded) {
+        var flags = loaded.matrix().map(org.treeproof.data.LoneFeatureOutliers::of).orElse(List.of());
+        var out = new ArrayList<String>();
+        for (int i = 0; i < Math.min(5, flags.size()); i++) {
+            var f = flags.get(i);
+            out.add(String.format(Locale.ROOT, "Warning: feature %s alone puts sample %s %.0f standard deviations "
+                    + "from its mean%s, which can split that sample off as an outlier whatever the other features "
+                    + "say; a nearly constant feature scaled to unit variance does this. To avoid it, drop such "
+                    + "features (--top-variable keeps the most variable ones) or use --scale center or none.",
+                    f.feature(), f.sample(), f.sds(), f.samples() > 1
+                            ? String.format(Locale.ROOT, " (%d samples lie beyond %.0f)", f.samples(),
+                                    org.treeproof.data.LoneFeatureOutliers.LIMIT) : ""));
+        }
+        if (flags.size() > 5) {
+            out.add(String.format(Locale.ROOT, "Warning: %d more features each put a sample more than %.0f standard "
+                    + "deviations from their mean.", flags.size() - 5, org.treeproof.data.LoneFeatureOutliers.LIMIT));
+        }
+        return out;
     }
 
     List<SummaryJson.Option> inputOptions() {
@@ -81,13 +104,13 @@ final class StudyOutputs {
     SummaryJson summary(LabelComparison labels) {
         var provenance = new SummaryJson.Provenance("treeproof", Main.toolVersion(), loaded.source().path(),
                 loaded.source().sha256(), preparationSteps(), inputOptions(), labelsSummary(labels));
-        return new SummaryJson(evidence, rec, provenance);
+        return new SummaryJson(evidence, rec, provenance, new org.treeproof.report.ReasonWords(rec.rule())::word);
     }
 
     RunInfo runInfo() {
         return new RunInfo("treeproof", Main.toolVersion(), loaded.source().path(), loaded.source().sha256(),
                 evidence.samples(), evidence.features(), preparationSteps(), evidence.settings().metric().id(),
-                String.join(" ", commandLine), evidence.settings().seed(), threads, seconds,
+                ShellWords.join(commandLine), evidence.settings().seed(), threads, seconds,
                 DateTimeFormatter.ISO_OFFSET_DATE_TIME.format(ZonedDateTime.now().withNano(0)));
     }
 
@@ -119,9 +142,13 @@ final class StudyOutputs {
     /** One line for the terminal: the verdict and the decision. */
     String headline() {
         return rec.k() == 1
-                ? "treeproof: unsupported: no convincing cluster structure (k = 1)"
+                ? "treeproof: unsupported: no convincing cluster structure (k = 1" + (rec.outlierCount() == 0 ? ")"
+                        : String.format(Locale.ROOT, ", %d far sample%s set aside as outlier%s)", rec.outlierCount(),
+                                rec.outlierCount() == 1 ? "" : "s", rec.outlierCount() == 1 ? "" : "s"))
                 : String.format(Locale.ROOT, "treeproof: %s: k = %d with %s linkage (cut height %.4g)",
-                        rec.verdict().id(), rec.k(), rec.linkage().id(), rec.cutHeight().chosen());
+                        rec.verdict().id(), rec.k(), rec.linkage().id(), rec.cutHeight().chosen())
+                        + (rec.outlierCount() == 0 ? "" : String.format(Locale.ROOT, ", %d outlier%s set aside",
+                                rec.outlierCount(), rec.outlierCount() == 1 ? "" : "s"));
     }
 
     int threads() {

@@ -174,7 +174,12 @@ public final class HtmlReport {
                 Reference.HENNIG, Reference.HOPE, Reference.HUBERT_ARABIE, Reference.KAUFMAN_ROUSSEEUW,
                 Reference.MONTI, Reference.MULLNER, Reference.MURTAGH_LEGENDRE, Reference.ROUSSEEUW,
                 Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD)) {
-            h.open("li").text(r.entry() + " ").open("a", "href", r.url()).text("doi:" + r.doi()).close("a").close("li");
+            if (r.doi().isEmpty()) {
+                h.element("li", r.entry());
+            } else {
+                h.open("li").text(r.entry() + " ").open("a", "href", r.url()).text("doi:" + r.doi()).close("a")
+                        .close("li");
+            }
         }
         h.close("ol").close("section").newline();
     }

@@ -100,7 +100,7 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
         return evidence.linkages().stream().filter(l -> l.linkage() == recommendation.linkage()).findFirst()
                 .orElseThrow(() -> new IllegalArgumentException("the recommended linkage "
                         + recommendation.linkage().id() + " is not in the evidence"))
-                .at(recommendation.k()).partition();
+                .at(recommendation.k()).clustering().withSingletons();
     }
 
     /** The evidence table of a linkage. */
