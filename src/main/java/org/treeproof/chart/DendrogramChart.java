@@ -11,11 +11,14 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import org.treeproof.study.ClusterBranch;
 
 /**
  * The clustering tree, cut into clusters: branches inside a cluster in its colour, branches that join
  * clusters in grey, the cut as a dashed line, a strip of cluster colours under the leaves, and the support
- * of the highest forks as small numbers.
+ * of the highest forks as small numbers. With AU p-values from the multiscale bootstrap, each of the highest forks
+ * that has one carries a square, filled when au reaches {@link ClusterBranch#LOW_AU} and hollow below it, and the
+ * fork of each cluster at the cut is labelled with its au.
  *
  * <p>Up to {@value #MAX_LABELLED} leaves the chart widens to give every leaf name room
  * ({@code max(1200, 350 + 9n)} pixels); beyond that it is {@value #BASE_WIDTH} pixels wide and leaf names are
@@ -114,7 +117,9 @@ public final class DendrogramChart {
             double cy = axes.y(in.cutHeight());
             g.draw(new Line2D.Double(plot.getX(), cy, plot.getMaxX(), cy));
         }
-        int supportShown = drawSupport(g, tree, placed, plot);
+        List<Rectangle2D> taken = new ArrayList<>();
+        int supportShown = drawSupport(g, tree, placed, plot, taken);
+        int auShown = in.hasAu() ? drawAu(g, tree, placed, taken) : 0;
 
         double stripTop = plot.getMaxY() + 3;
         int[] order = tree.leafOrder();
@@ -159,6 +164,12 @@ public final class DendrogramChart {
             entries.add(Key.Entry.sample("0.87", "share of replicates that find the group below a fork again"
                     + " (at the highest forks, where there is room)"));
         }
+        if (auShown > 0) {
+            entries.add(Key.Entry.sample("\u25A0", "AU p-value of the group below the fork at least "
+                    + Ticks.compact(ClusterBranch.LOW_AU) + " (multiscale bootstrap of features)"));
+            entries.add(Key.Entry.sample("\u25A1", "AU p-value below " + Ticks.compact(ClusterBranch.LOW_AU)));
+            entries.add(Key.Entry.sample("au 0.97", "a cluster's own fork with its AU p-value"));
+        }
         if (placed.leafSpacing() < TreeDrawing.DENSE_PX) {
             entries.add(Key.Entry.fill(ChartColors.tint(ChartColors.ABOVE_CUT, TreeDrawing.WEDGE_TINT),
                     "shaded wedge: a small group whose leaves are too close to draw apart, up to its merge height"));
@@ -168,10 +179,10 @@ public final class DendrogramChart {
     }
 
     /** Support numbers at the highest forks, skipping any that would cover one already placed. */
-    private int drawSupport(Graphics2D g, ChartTree tree, TreeDrawing.Placed placed, Rectangle2D plot) {
+    private int drawSupport(Graphics2D g, ChartTree tree, TreeDrawing.Placed placed, Rectangle2D plot,
+            List<Rectangle2D> taken) {
         int n = tree.leafCount();
         g.setFont(Look.font(Look.SMALL_SIZE));
-        List<Rectangle2D> taken = new ArrayList<>();
         int shown = 0;
         int considered = 0;
         for (int s = n - 2; s >= 0 && considered < SUPPORT_SHOWN; s--) {
@@ -196,6 +207,81 @@ public final class DendrogramChart {
             shown++;
         }
         return shown;
+    }
+
+    /**
+     * AU squares at the highest forks that have a value, and "au .97" beside the fork of each cluster of the cut
+     * (where it does not cover a label already placed).
+     */
+    private int drawAu(Graphics2D g, ChartTree tree, TreeDrawing.Placed placed, List<Rectangle2D> taken) {
+        int n = tree.leafCount();
+        int shown = 0;
+        int considered = 0;
+        g.setStroke(new BasicStroke(1.3f));
+        for (int s = n - 2; s >= 0 && considered < SUPPORT_SHOWN; s--) {
+            double v = in.auAt(s);
+            if (Double.isNaN(v)) {
+                continue;
+            }
+            considered++;
+            Point2D p = placed.point(n + s);
+            var square = new Rectangle2D.Double(p.getX() - 4, p.getY() - 4, 8, 8);
+            g.setColor(v >= ClusterBranch.LOW_AU ? Look.INK : Color.WHITE);
+            g.fill(square);
+            g.setColor(Look.INK);
+            g.draw(square);
+            shown++;
+        }
+        g.setFont(Look.font(Look.SMALL_SIZE));
+        for (int s : clusterForks(tree)) {
+            double v = in.auAt(s);
+            if (Double.isNaN(v)) {
+                continue;
+            }
+            Point2D p = placed.point(n + s);
+            // cut, not rounded, to three places, so a value below the flag level never prints as the level itself
+            String text = "au " + String.format(java.util.Locale.ROOT, "%.3f", Math.floor(v * 1000) / 1000);
+            double tw = Look.width(g, text);
+            double th = g.getFontMetrics().getAscent();
+            Rectangle2D box = new Rectangle2D.Double(p.getX() - tw - 9, p.getY() + 5, tw + 3, th + 2);
+            if (overlaps(box, taken)) {
+                continue;
+            }
+            taken.add(box);
+            Look.plate(g, box);
+            g.setColor(Look.INK);
+            Look.draw(g, text, (float) (box.getX() + 1.5), (float) (box.getMaxY() - 2));
+            shown++;
+        }
+        return shown;
+    }
+
+    /** The merges whose clade is a whole cluster of the cut (clusters of one sample have none). */
+    private List<Integer> clusterForks(ChartTree tree) {
+        int n = tree.leafCount();
+        int[] uniform = new int[2 * n - 1];
+        for (int leaf = 0; leaf < n; leaf++) {
+            uniform[leaf] = in.clusterAt(leaf);
+        }
+        int[] top = new int[in.clusterCount()];
+        java.util.Arrays.fill(top, -1);
+        int[] left = tree.left();
+        int[] right = tree.right();
+        for (int s = 0; s < n - 1; s++) {
+            int a = uniform[left[s]];
+            int b = uniform[right[s]];
+            uniform[n + s] = a >= 0 && a == b ? a : -1;
+            if (uniform[n + s] >= 0) {
+                top[uniform[n + s]] = s;
+            }
+        }
+        var out = new ArrayList<Integer>();
+        for (int t : top) {
+            if (t >= 0 && in.clusterCount() > 1) {
+                out.add(t);
+            }
+        }
+        return out;
     }
 
     private static boolean overlaps(Rectangle2D r, List<Rectangle2D> taken) {

@@ -15,10 +15,18 @@ import java.util.Objects;
  * @param support        per merge (same index as the merges), the share of replicates in which the group formed
  *                       by that merge is found again, in [0, 1], or NaN where not measured; may be {@code null}
  *                       when nothing was measured
+ * @param au             per merge, the approximately unbiased p-value of its group from the multiscale bootstrap, in
+ *                       [0, 1], or NaN where there is none; may be {@code null} when it was not computed
  * @param heightLabel    the height axis title with its unit, e.g. "Merge height (Euclidean distance)"
  */
 public record DendrogramInput(String title, ChartTree tree, String[] leafLabels, int[] clusterOfLeaf,
-        double cutHeight, double[] support, String heightLabel) {
+        double cutHeight, double[] support, double[] au, String heightLabel) {
+
+    /** Without AU p-values. */
+    public DendrogramInput(String title, ChartTree tree, String[] leafLabels, int[] clusterOfLeaf, double cutHeight,
+            double[] support, String heightLabel) {
+        this(title, tree, leafLabels, clusterOfLeaf, cutHeight, support, null, heightLabel);
+    }
 
     public DendrogramInput {
         Check.text(title, "title");
@@ -34,6 +42,12 @@ public record DendrogramInput(String title, ChartTree tree, String[] leafLabels,
             Arrays.fill(support, Double.NaN);
         } else {
             support = Check.within(support, n - 1, 0, 1, true, "support");
+        }
+        if (au == null) {
+            au = new double[n - 1];
+            Arrays.fill(au, Double.NaN);
+        } else {
+            au = Check.within(au, n - 1, 0, 1, true, "au");
         }
         Check.text(heightLabel, "heightLabel");
     }
@@ -58,6 +72,25 @@ public record DendrogramInput(String title, ChartTree tree, String[] leafLabels,
         return support.clone();
     }
 
+    @Override
+    public double[] au() {
+        return au.clone();
+    }
+
+    double auAt(int merge) {
+        return au[merge];
+    }
+
+    /** Whether any merge has an AU p-value. */
+    boolean hasAu() {
+        for (double v : au) {
+            if (!Double.isNaN(v)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     int clusterAt(int leaf) {
         return clusterOfLeaf[leaf];
     }
@@ -79,13 +112,14 @@ public record DendrogramInput(String title, ChartTree tree, String[] leafLabels,
         return o instanceof DendrogramInput d && d.title.equals(title) && d.tree.equals(tree)
                 && Arrays.equals(d.leafLabels, leafLabels) && Arrays.equals(d.clusterOfLeaf, clusterOfLeaf)
                 && Double.compare(d.cutHeight, cutHeight) == 0 && Arrays.equals(d.support, support)
+                && Arrays.equals(d.au, au)
                 && d.heightLabel.equals(heightLabel);
     }
 
     @Override
     public int hashCode() {
         return Objects.hash(title, tree, Arrays.hashCode(leafLabels), Arrays.hashCode(clusterOfLeaf), cutHeight,
-                Arrays.hashCode(support), heightLabel);
+                Arrays.hashCode(support), Arrays.hashCode(au), heightLabel);
     }
 
     @Override

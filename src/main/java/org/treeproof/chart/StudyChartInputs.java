@@ -77,7 +77,8 @@ final class StudyChartInputs {
         return new Plan("dendrogram", title, "", (dir, base) -> {
             var in = new DendrogramInput(title, chartTree(chosen.tree()), evidence.sampleIds().toArray(String[]::new),
                     solution == null ? new int[n] : solution.clustering().labels(),
-                    solution == null ? Double.NaN : rec.cutHeight().chosen(), chosen.branchSupport(), heightLabel);
+                    solution == null ? Double.NaN : rec.cutHeight().chosen(), chosen.branchSupport(),
+                    BranchPValueCharts.auPerMerge(chosen), heightLabel);
             var chart = new DendrogramChart(in);
             return new Drawn(chart.write(dir, base), chart.width(), chart.height());
         });
@@ -162,6 +163,15 @@ final class StudyChartInputs {
             var in = new ConsensusInput(title, evidence.samples(), condensed(chosen.consensus(), kk),
                     chosen.tree().leafOrder(), chosen.at(kk).clustering().labels());
             return new Drawn(new ConsensusChart(in).write(dir, base), ConsensusChart.WIDTH, ConsensusChart.HEIGHT);
+        });
+    }
+
+    Plan consensusCdf() {
+        String title = "Consensus values by k, " + linkage + " linkage";
+        return new Plan("consensus-cdf", title, "", (dir, base) -> {
+            var in = BranchPValueCharts.cdfInput(title, chosen, solution == null ? 0 : rec.k());
+            return new Drawn(new ConsensusCdfChart(in).write(dir, base), ConsensusCdfChart.WIDTH,
+                    ConsensusCdfChart.HEIGHT);
         });
     }
 

@@ -17,13 +17,15 @@ import org.treeproof.study.Recommendation;
  * <ul>
  *   <li>{@code dendrogram}: the recommended linkage's tree coloured by the recommended cut, the cut line at
  *       the recommendation's chosen height, branch support from the replicates; with k = 1 one colour and no
- *       cut line;</li>
+ *       cut line; with branch p-values, squares at the highest forks for their AU p-value;</li>
  *   <li>{@code silhouette}: the recommended solution's silhouettes (skipped for k = 1);</li>
  *   <li>{@code stability}: mean ARI with its 95% band per linkage against k, the null data's band (of the
  *       recommended linkage, or the first that has one) and the chosen k;</li>
  *   <li>{@code gap}: the recommended linkage's gap statistic (skipped when not computed);</li>
  *   <li>{@code consensus}: the recommended linkage's consensus matrix at the recommended k in tree order;
  *       for k = 1 at the most stable k (2 if none), as its title says;</li>
+ *   <li>{@code consensus-cdf}: the recommended linkage's CDF of consensus values at every k and the change in the
+ *       area under it (Monti et al. 2003), the recommended k drawn in ink;</li>
  *   <li>{@code jaccard}: the recommended solution's cluster-wise Jaccard (skipped for k = 1);</li>
  *   <li>{@code linkages}: every linkage at its own best k, and how far their solutions agree;</li>
  *   <li>{@code heatmap}: the data, samples in the recommended tree's order and features clustered with
@@ -45,7 +47,7 @@ import org.treeproof.study.Recommendation;
 public final class StudyCharts {
     /** The figure ids, in the order {@link #drawAll} returns them. */
     public static final List<String> FIGURE_IDS = List.of("dendrogram", "silhouette", "stability", "gap", "consensus",
-            "jaccard", "linkages", "heatmap");
+            "consensus-cdf", "jaccard", "linkages", "heatmap");
 
     private StudyCharts() {
     }
@@ -80,7 +82,7 @@ public final class StudyCharts {
         }
         var inputs = new StudyChartInputs(evidence, recommendation);
         List<StudyChartInputs.Plan> plans = List.of(inputs.dendrogram(), inputs.silhouette(), inputs.stability(),
-                inputs.gap(), inputs.consensus(), inputs.jaccard(), inputs.linkages(),
+                inputs.gap(), inputs.consensus(), inputs.consensusCdf(), inputs.jaccard(), inputs.linkages(),
                 inputs.heatmap(dataOrNull, threads));
         Files.createDirectories(chartsDir);
         var figures = new ArrayList<Figure>(plans.size());

@@ -10,6 +10,7 @@ import org.treeproof.data.DataMatrix;
 import org.treeproof.data.InputException;
 import org.treeproof.distance.Metric;
 import org.treeproof.io.CheckpointFile;
+import org.treeproof.io.CovariatesReader;
 import org.treeproof.io.CsvOutputs;
 import org.treeproof.io.DiskFull;
 import org.treeproof.io.LabelsReader;
@@ -40,7 +41,8 @@ import picocli.CommandLine.Parameters;
 @Command(name = "assess", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Cluster the input with each linkage, recluster resampled replicates, calibrate against null "
                 + "data and the gap statistic, and recommend a number of clusters with its reasons.",
-            "Writes DIR/summary.json, clusters.csv, scores.csv, methods.md, report.html and charts/."})
+            "Writes DIR/summary.json, clusters.csv, scores.csv, features.csv, methods.md, report.html and charts/ "
+                + "(covariates.csv with --covariates, sensitivity.csv with --sensitivity)."})
 final class AssessCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "INPUT", description = "Data table (CSV/TSV, optionally .gz), samples in rows "
@@ -60,6 +62,9 @@ final class AssessCommand implements Callable<Integer> {
     @Option(names = "--labels", paramLabel = "FILE", description = "Known classes (id, class per row, header row) to "
             + "compare the recommended clusters with.")
     Path labels;
+
+    @Mixin
+    ExplainOptions explain;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores). Results do not "
             + "depend on it.")
@@ -135,6 +140,13 @@ final class AssessCommand implements Callable<Integer> {
         org.treeproof.study.Magnitudes.requireWithinLimit(studyInput);
         String[] classes = labels == null ? null
                 : LabelsReader.read(labels, inputOptions.delimiter().orElse(null), loaded.sampleIds());
+        var covariateKinds = explain.kinds();
+        var testOfFeatures = explain.test();
+        var covariates = explain.covariates == null ? null
+                : CovariatesReader.read(explain.covariates, loaded.sampleIds(), covariateKinds);
+        if (explain.sensitivity && loaded.isDistanceTable()) {
+            throw new InputException("--sensitivity reruns other preparations of a data table; a distance table has none");
+        }
         MemoryEstimate.of(studyInput.samples(), loaded.features(), settings, nThreads, studyInput.hasData())
                 .requireFits(Runtime.getRuntime().maxMemory(), studyInput.samples());
 
@@ -171,8 +183,10 @@ final class AssessCommand implements Callable<Integer> {
             checkpoint.close();
         }
         Recommendation rec = Recommender.of(evidence, DecisionRule.DEFAULT).recommend();
+        var explanation = ExplainRun.explain(loaded, evidence, rec, testOfFeatures, covariates,
+                explain.sensitivity ? inputOptions.readRaw(input) : null, inputOptions.preparation(), nThreads);
         var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine(), nThreads,
-                (System.nanoTime() - started) / 1e9);
+                (System.nanoTime() - started) / 1e9, explanation);
         try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force, reads)) {
             outputs.writeInto(dir);
             dir.commit();

@@ -112,6 +112,11 @@ public final class InputOptions {
         return LoadedInput.of(table, preparation.apply(table.matrix(), table.locator()));
     }
 
+    /** Reads {@code input}, a data table, as it is (before any preparation), for rerunning other preparations. */
+    public org.treeproof.data.DataMatrix readRaw(Path input) {
+        return new DataTableReader(delimiter, samplesInColumns).read(input).matrix();
+    }
+
     /**
      * Refuses a preparation that would turn 0/1 data into other values before a 0/1 measure sees them
      * (log2 and any scaling do).

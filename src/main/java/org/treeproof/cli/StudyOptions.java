@@ -6,6 +6,7 @@ import org.treeproof.data.InputException;
 import org.treeproof.distance.Metric;
 import org.treeproof.resample.ReferenceData;
 import org.treeproof.resample.Resampling;
+import org.treeproof.study.BranchPValueSettings;
 import org.treeproof.study.StudySettings;
 import org.treeproof.tree.Linkage;
 import picocli.CommandLine.Option;
@@ -62,6 +63,19 @@ final class StudyOptions {
             + "samples; 1 turns outliers off).")
     Integer minClusterSize;
 
+    @Option(names = "--branch-pvalues", description = "Also compute approximately unbiased p-values for every branch "
+            + "of each tree, by a multiscale bootstrap of the features (needs a data table).")
+    boolean branchPValues;
+
+    @Option(names = "--branch-scales", paramLabel = "R,R", split = ",", description = "Scales of the multiscale "
+            + "bootstrap: each replicate draws R times the number of features, with replacement (default: "
+            + "0.5,0.6,...,1.4).")
+    List<String> branchScales;
+
+    @Option(names = "--branch-replicates", paramLabel = "B", description = "Replicates per scale of the multiscale "
+            + "bootstrap (default: 200).")
+    Integer branchReplicates;
+
     @Option(names = "--seed", paramLabel = "S", description = "Master seed; every random draw derives from it "
             + "(default: 1).")
     Long seed;
@@ -106,6 +120,31 @@ final class StudyOptions {
     /** Whether the user gave --max-k (otherwise the default applies). */
     boolean maxKGiven() {
         return maxK != null;
+    }
+
+    /** The multiscale bootstrap's options into {@code b}; their problems into {@code problems}. */
+    private void branchPValues(StudySettings.Builder b, List<String> problems) {
+        if (!branchPValues) {
+            if (branchScales != null || branchReplicates != null) {
+                problems.add((branchScales != null ? "--branch-scales" : "--branch-replicates")
+                        + " needs --branch-pvalues");
+            }
+            return;
+        }
+        List<Double> scales = BranchPValueSettings.DEFAULT_SCALES;
+        if (branchScales != null) {
+            var parsed = new ArrayList<Double>();
+            for (String s : branchScales) {
+                try {
+                    parsed.add(Double.parseDouble(s.strip()));
+                } catch (NumberFormatException e) {
+                    problems.add("--branch-scales: '" + s.strip() + "' is not a number");
+                }
+            }
+            scales = parsed;
+        }
+        b.branchPValues(new BranchPValueSettings(scales,
+                branchReplicates == null ? BranchPValueSettings.DEFAULT_REPLICATES : branchReplicates));
     }
 
     /** The settings, every problem reported at once. */
@@ -171,6 +210,7 @@ final class StudyOptions {
         if (seed != null) {
             b.seed(seed);
         }
+        branchPValues(b, problems);
         try {
             StudySettings s = b.build();
             if (!problems.isEmpty()) {

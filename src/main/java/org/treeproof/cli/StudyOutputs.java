@@ -11,7 +11,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.treeproof.data.Preparation;
+import org.treeproof.chart.ExplainCharts;
+import org.treeproof.explain.Explanation;
 import org.treeproof.io.CsvOutputs;
+import org.treeproof.io.ExplainCsv;
 import org.treeproof.io.LoadedInput;
 import org.treeproof.io.OutputDirectory;
 import org.treeproof.io.SummaryJson;
@@ -37,9 +40,10 @@ final class StudyOutputs {
     private final String[] commandLine;
     private final int threads;
     private final double seconds;
+    private final Explanation explanation;
 
     StudyOutputs(LoadedInput loaded, Evidence evidence, Recommendation rec, String[] classes, Path labelsFile,
-            String[] commandLine, int threads, double seconds) {
+            String[] commandLine, int threads, double seconds, Explanation explanation) {
         this.loaded = loaded;
         this.evidence = evidence;
         this.rec = rec;
@@ -48,6 +52,7 @@ final class StudyOutputs {
         this.commandLine = commandLine.clone();
         this.threads = threads;
         this.seconds = seconds;
+        this.explanation = explanation;
     }
 
     LabelComparison labels() {
@@ -104,7 +109,8 @@ final class StudyOutputs {
     SummaryJson summary(LabelComparison labels) {
         var provenance = new SummaryJson.Provenance("treeproof", Main.toolVersion(), loaded.source().path(),
                 loaded.source().sha256(), preparationSteps(), inputOptions(), labelsSummary(labels));
-        return new SummaryJson(evidence, rec, provenance, new org.treeproof.report.ReasonWords(rec.rule())::word);
+        return new SummaryJson(evidence, rec, provenance, new org.treeproof.report.ReasonWords(rec.rule())::word,
+                explanation);
     }
 
     RunInfo runInfo() {
@@ -120,14 +126,19 @@ final class StudyOutputs {
         dir.write("summary.json", summary(labels).toBytes());
         dir.write("clusters.csv", CsvOutputs.clusters(evidence, rec).getBytes(StandardCharsets.UTF_8));
         dir.write("scores.csv", CsvOutputs.scores(evidence, rec).getBytes(StandardCharsets.UTF_8));
-        ReportModel model = ReportModel.of(evidence, rec, runInfo(), labels);
+        writeExplanation(dir);
+        ReportModel model = ReportModel.of(evidence, rec, runInfo(), labels, explanation);
         dir.write("methods.md", MethodsParagraph.of(model).render().getBytes(StandardCharsets.UTF_8));
         List<EmbeddedImage> images = new ArrayList<>();
         try {
             Path charts = dir.file("charts/.keep").getParent();
             Files.deleteIfExists(charts.resolve(".keep"));
             DataMatrix data = loaded.matrix().orElse(null);
-            for (Figure f : StudyCharts.drawAll(evidence, rec, data, charts, threads)) {
+            var figures = new ArrayList<>(StudyCharts.drawAll(evidence, rec, data, charts, threads));
+            if (explanation != null) {
+                figures.addAll(ExplainCharts.drawAll(explanation, charts));
+            }
+            for (Figure f : figures) {
                 String png = f.files().stream().filter(n -> n.endsWith(".png")).findFirst().orElse(null);
                 if (png != null && model.figure(f.id()).isPresent()) {
                     images.add(new EmbeddedImage(f.id(), "image/png", Files.readAllBytes(charts.resolve(png))));
@@ -137,6 +148,24 @@ final class StudyOutputs {
             throw new UncheckedIOException("cannot write the charts", e);
         }
         dir.write("report.html", HtmlReport.of(model, images).render().getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** features.csv, and covariates.csv and sensitivity.csv when they were asked for and there were clusters. */
+    private void writeExplanation(OutputDirectory dir) {
+        if (explanation == null) {
+            return;
+        }
+        if (explanation.features() != null) {
+            dir.write("features.csv", ExplainCsv.features(explanation.features()).getBytes(StandardCharsets.UTF_8));
+        }
+        if (explanation.covariates() != null && explanation.solution() != null) {
+            dir.write("covariates.csv", ExplainCsv.covariates(explanation.covariates())
+                    .getBytes(StandardCharsets.UTF_8));
+        }
+        if (explanation.sensitivity() != null) {
+            dir.write("sensitivity.csv", ExplainCsv.sensitivity(explanation.sensitivity())
+                    .getBytes(StandardCharsets.UTF_8));
+        }
     }
 
     /** One line for the terminal: the verdict and the decision. */

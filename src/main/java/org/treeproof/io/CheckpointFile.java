@@ -31,7 +31,8 @@ import org.treeproof.study.ReplicateOutcome;
  * guards against resuming a different study.
  *
  * <p>For fault-injection tests, the system property {@code treeproof.faultAfterReplicates=N} halts the JVM
- * abruptly (as a kill would) right after the N-th replicate record is written.
+ * abruptly (as a kill would) right after the N-th replicate record is written, and
+ * {@code treeproof.faultAfterMultiscale=N} after the N-th multiscale-bootstrap record written by this process.
  */
 public final class CheckpointFile implements Checkpoint, AutoCloseable {
     private static final String FINGERPRINT = "fingerprint.txt";
@@ -41,6 +42,8 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
     private final Map<Stage, List<double[]>> keptRows = new EnumMap<>(Stage.class);
     private final Map<Stage, DataOutputStream> writers = new EnumMap<>(Stage.class);
     private final long faultAfter = Long.getLong("treeproof.faultAfterReplicates", -1L);
+    private final long faultAfterMultiscale = Long.getLong("treeproof.faultAfterMultiscale", -1L);
+    private long multiscaleWritten;
     private long replicatesWritten;
     /** Records on disk: those loaded on resume and those appended since; read by an interrupt notice. */
     private volatile long recordsWritten;
@@ -48,7 +51,7 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
     private CheckpointFile(Path dir, boolean load) throws IOException {
         this.dir = dir;
         keptReplicates = load ? readReplicates(dir.resolve(fileOf(Stage.REPLICATES))) : List.of();
-        for (Stage s : List.of(Stage.NULL_SETS, Stage.GAP_SETS)) {
+        for (Stage s : List.of(Stage.NULL_SETS, Stage.GAP_SETS, Stage.MULTISCALE)) {
             keptRows.put(s, load ? readRows(dir.resolve(fileOf(s))) : List.of());
         }
         replicatesWritten = keptReplicates.size();
@@ -166,6 +169,9 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
             throw new UncheckedIOException(e);
         }
         append(stage, bytes.toByteArray());
+        if (stage == Stage.MULTISCALE && faultAfterMultiscale >= 0 && ++multiscaleWritten >= faultAfterMultiscale) {
+            Runtime.getRuntime().halt(137);
+        }
     }
 
     private void append(Stage stage, byte[] payload) {
@@ -213,6 +219,7 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
             case REPLICATES -> "replicates.bin";
             case NULL_SETS -> "null-sets.bin";
             case GAP_SETS -> "reference-sets.bin";
+            case MULTISCALE -> "multiscale.bin";
         };
     }
 

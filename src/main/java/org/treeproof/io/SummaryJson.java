@@ -9,6 +9,7 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.util.List;
+import org.treeproof.explain.Explanation;
 import org.treeproof.score.GapResult;
 import org.treeproof.score.ReplicateSummary;
 import org.treeproof.study.ClusterEvidence;
@@ -33,6 +34,7 @@ public final class SummaryJson {
     private final Recommendation recommendation;
     private final Provenance provenance;
     private final java.util.function.Function<org.treeproof.study.Reason, String> wording;
+    private final Explanation explanation;
 
     /**
      * Where the data came from and how it was prepared.
@@ -67,10 +69,17 @@ public final class SummaryJson {
      */
     public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
             java.util.function.Function<org.treeproof.study.Reason, String> wording) {
+        this(evidence, recommendation, provenance, wording, null);
+    }
+
+    /** With the explanation of the recommended solution ({@code null} for none): the {@code explain} block. */
+    public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
+            java.util.function.Function<org.treeproof.study.Reason, String> wording, Explanation explanation) {
         this.wording = wording;
         this.evidence = evidence;
         this.recommendation = recommendation;
         this.provenance = provenance;
+        this.explanation = explanation;
     }
 
     /** The JSON as UTF-8 bytes, pretty-printed, ending with a newline. */
@@ -103,6 +112,9 @@ public final class SummaryJson {
             writeRecommendation(g);
             if (provenance.labels() != null) {
                 writeLabels(g, provenance.labels());
+            }
+            if (explanation != null) {
+                ExplainJson.write(g, explanation);
             }
             g.writeEndObject();
             g.writeRaw('\n');
@@ -145,6 +157,7 @@ public final class SummaryJson {
         g.writeNumberField("high", s.pacHigh());
         g.writeEndObject();
         g.writeNumberField("seed", s.seed());
+        BranchPValueJson.writeSettings(g, s.branchPValues());
         g.writeNumberField("minClusterSize", evidence.minClusterSize());
         for (Option o : provenance.inputOptions()) {
             g.writeStringField(o.name(), o.value());
@@ -176,7 +189,7 @@ public final class SummaryJson {
         }
         g.writeArrayFieldStart("byK");
         for (KEvidence e : le.byK()) {
-            writeK(g, e, recommendation.assessment(le.linkage(), e.k()));
+            writeK(g, e, recommendation.assessment(le.linkage(), e.k()), le);
         }
         g.writeEndArray();
         g.writeArrayFieldStart("branchSupport");
@@ -187,6 +200,9 @@ public final class SummaryJson {
             g.writeNumberField("size", le.tree().size(s));
             number(g, "height", le.tree().height(s));
             number(g, "support", support[s]);
+            if (le.branchPValues() != null) {
+                BranchPValueJson.write(g, le.branchPValues().at(s));
+            }
             g.writeEndObject();
         }
         g.writeEndArray();
@@ -217,7 +233,8 @@ public final class SummaryJson {
         g.writeEndObject();
     }
 
-    private static void writeK(JsonGenerator g, KEvidence e, org.treeproof.study.Assessment as) throws IOException {
+    private static void writeK(JsonGenerator g, KEvidence e, org.treeproof.study.Assessment as, LinkageEvidence le)
+            throws IOException {
         g.writeStartObject();
         g.writeNumberField("k", e.k());
         g.writeNumberField("outliers", e.outliers());
@@ -284,6 +301,7 @@ public final class SummaryJson {
             g.writeEndObject();
         }
         g.writeEndArray();
+        BranchPValueJson.writeCdf(g, le.cdfAt(e.k()), le.consensus().distribution(e.k()));
         g.writeEndObject();
     }
 
@@ -300,6 +318,15 @@ public final class SummaryJson {
         }
         g.writeEndArray();
         g.writeArrayFieldStart("reasons");
+        // a covariate the clusters follow leads the reasons (the explanation's own sentence)
+        if (explanation != null) {
+            for (String flag : ExplainJson.withFlags(List.of(), explanation)) {
+                g.writeStartObject();
+                g.writeStringField("kind", "covariate-followed");
+                g.writeStringField("text", flag);
+                g.writeEndObject();
+            }
+        }
         for (org.treeproof.study.Reason reason : r.reasons()) {
             g.writeStartObject();
             g.writeStringField("kind", reason.kind());
@@ -358,6 +385,7 @@ public final class SummaryJson {
             g.writeEndObject();
         }
         g.writeEndArray();
+        BranchPValueJson.writeClusterBranches(g, evidence, r);
         g.writeArrayFieldStart("flaggedSamples");
         for (Recommendation.SampleFlag f : r.flaggedSamples()) {
             g.writeStartObject();

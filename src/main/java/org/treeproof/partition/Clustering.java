@@ -6,7 +6,9 @@ import java.util.Arrays;
  * A cluster solution that may set samples aside as outliers: {@code k} clusters labelled {@code 0..k-1}
  * and the label {@link #OUTLIER} for samples that belong to no cluster.
  *
- * <p>Labels are canonical: clusters are numbered in order of their first clustered item. Two ways to
+ * <p>{@link #of} numbers clusters in order of their first clustered item; a clustering derived from another
+ * (samples set aside, say) may keep the other's numbers, so every label from 0 to k - 1 is used but not always in
+ * order of first appearance. Two ways to
  * score such a solution with measures made for partitions: {@link #withSingletons()} makes every outlier a
  * cluster of its own (for pair-counting measures such as the adjusted Rand index, where an outlier is then
  * "together with nobody"), and {@link #clusteredPartition()} keeps only the clustered items (for separation
@@ -33,9 +35,6 @@ public record Clustering(int[] labels, int k) {
                 throw new IllegalArgumentException("label " + l + " outside 0.." + (k - 1));
             }
             if (seen[l] < 0) {
-                if (l != next) {
-                    throw new IllegalArgumentException("labels are not canonical; use Clustering.of");
-                }
                 seen[l] = i;
                 next++;
             }

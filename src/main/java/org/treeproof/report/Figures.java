@@ -65,11 +65,13 @@ final class Figures {
                     + "samples in which they were clustered together (0 to 1), %s linkage at k = %d, samples in the "
                     + "tree's leaf order; PAC = %s (Monti et al. 2003; Şenbabaoğlu et al. 2014).", link, k,
                     Numbers.fixed(e.stability().pac(), 3))));
+            out.add(BranchPValueReport.cdfFigure(le, k));
             out.add(figure("jaccard", f("Cluster stability at k = %d", k), f("Mean Jaccard similarity of each "
                     + "cluster's best match over the replicates (Hennig 2007), against the bands: at least %s is "
                     + "stable, %s or less has dissolved. The smallest is %s.", Numbers.plain(rec.rule().stableJaccard()),
                     Numbers.plain(rec.rule().dissolvedJaccard()), Numbers.fixed(e.worstJaccard(), 2))));
         } else {
+            out.add(BranchPValueReport.cdfFigure(le, k));
             notes.add("The silhouette, consensus matrix and cluster stability charts are left out: no solution with "
                     + "more than one cluster is recommended.");
         }

@@ -28,7 +28,7 @@ final class HtmlTables {
     }
 
     static String title(String sectionId) {
-        return TITLES.get(sectionId);
+        return TITLES.containsKey(sectionId) ? TITLES.get(sectionId) : ExplainHtml.TITLES.get(sectionId);
     }
 
     static void openSection(Html h, String id) {
@@ -90,7 +90,7 @@ final class HtmlTables {
             h.element("p", "footnote", "† Merge heights tie at this cut: which k clusters result depends on the order "
                     + "of the tied merges.");
         }
-        for (String id : List.of("stability", "gap", "consensus", "heatmap")) {
+        for (String id : List.of("stability", "gap", "consensus", "consensus-cdf", "heatmap")) {
             model.figure(id).ifPresent(page::figure);
         }
         h.close("section").newline();
@@ -171,6 +171,7 @@ final class HtmlTables {
             h.close("tr");
         }
         page.endTable();
+        BranchPValueReport.table(page, model.clusterBranches());
         List<Recommendation.SampleFlag> flags = model.flaggedSamples();
         if (flags.isEmpty()) {
             h.element("p", f("No sample is flagged: every sample stays with its cluster in at least %s of the replicates "

@@ -48,7 +48,10 @@ public final class MethodsParagraph {
         Set<Reference> cited = new LinkedHashSet<>();
         var sb = new StringBuilder("# Methods\n\n");
         sb.append(methods(cited)).append("\n\n");
+        model.explained().map(x -> ExplainProse.methods(x, cited)).filter(m -> !m.isEmpty())
+                .ifPresent(m -> sb.append(md(String.join(" ", m))).append("\n\n"));
         sb.append("# Result\n\n").append(result()).append("\n\n");
+        model.explained().ifPresent(x -> sb.append(explained(x)));
         sb.append("## References\n\n");
         List<Reference> refs = new ArrayList<>(cited);
         // alphabetical as a reader expects (Şenbabaoğlu among the S, Müllner before Murtagh), not by code point
@@ -112,6 +115,10 @@ public final class MethodsParagraph {
                 + "and of the fit measures, and counted as clusters of their own in the ARI and consensus. A replicate "
                 + "was cut into as many clusters as the full-data solution had with at least that many (scaled to the "
                 + "replicate's size) of their samples drawn.", m));
+        String branches = BranchPValueReport.methods(s, c);
+        if (!branches.isEmpty()) {
+            out.add(branches);
+        }
         if (model.nullCalibrated()) {
             out.add(f("To tell structure from noise, the same procedure (%d replicates each) was applied to %d null "
                     + "data sets drawn from a unimodal elliptical distribution with the data's principal axes, robust "
@@ -212,6 +219,25 @@ public final class MethodsParagraph {
                             ? f(" and %d more (clusters.csv lists all)", d.outliers().size() - shown) : ""));
         }
         return String.join(" ", out);
+    }
+
+    /** The explanation's result: one sentence per cluster, the covariates, the alternative analyses, the caution. */
+    private static String explained(org.treeproof.explain.Explanation x) {
+        var out = new ArrayList<String>();
+        if (x.features() != null) {
+            out.addAll(ExplainProse.clusterSentences(x.features()));
+        }
+        if (x.covariates() != null && !x.covariates().isEmpty()) {
+            out.add(ExplainProse.covariates(x.covariates()));
+        }
+        if (x.sensitivity() != null) {
+            out.add(ExplainProse.sensitivity(x.sensitivity()));
+        }
+        out.addAll(x.notes());
+        if (x.features() != null) {
+            out.add(ExplainProse.doubleDipping());
+        }
+        return out.isEmpty() ? "" : md(String.join(" ", out)) + "\n\n";
     }
 
     private static String md(String text) {

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.regex.Pattern;
+import org.treeproof.explain.Explanation;
 import org.treeproof.resample.Resampling;
 import org.treeproof.study.ClusterEvidence;
 import org.treeproof.study.DecisionRule;
@@ -72,18 +73,22 @@ final class ModelFactory {
                         + " is not in the evidence"));
     }
 
-    ReportModel build(LabelComparison labels) {
+    ReportModel build(LabelComparison labels, Explanation explanation) {
         var tables = new ArrayList<EvidenceTable>();
         for (LinkageEvidence le : evidence.linkages()) {
             tables.add(table(le));
         }
-        Decision decision = decision();
+        Decision decision = decision(explanation);
         List<ClusterEvidence> clusters = rec.k() > 1 ? linkageEvidence(rec.linkage()).at(rec.k()).clusters() : List.of();
         var notes = new ArrayList<String>();
         notes.addAll(dataNotes());
-        var figures = Figures.of(evidence, rec, notes);
+        var figures = new ArrayList<>(Figures.of(evidence, rec, notes));
+        if (explanation != null) {
+            figures.addAll(ExplainFigures.of(explanation));
+        }
         return new ReportModel(run, evidence.settings(), rec.rule(), decision, tables, comparison(),
-                clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes);
+                clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes, explanation,
+                BranchPValueReport.clusterBranches(evidence, rec));
     }
 
     private EvidenceTable table(LinkageEvidence le) {
@@ -105,7 +110,7 @@ final class ModelFactory {
                 le.gap() != null && le.gap().ruleMet(), rows);
     }
 
-    private Decision decision() {
+    private Decision decision(Explanation explanation) {
         String link = Names.linkage(rec.linkage());
         String headline = switch (rec.verdict()) {
             case SUPPORTED -> f("The evidence supports %d clusters with %s linkage.", rec.k(), link);
@@ -121,10 +126,16 @@ final class ModelFactory {
         for (Recommendation.CriterionChoice c : rec.criteria()) {
             criteria.add(new Decision.CriterionRow(c.name(), c.k(), c.basis(), c.k() == rec.k()));
         }
+        var reasons = new ArrayList<String>();
+        // a covariate the clusters largely follow leads the reasons: it is what a reviewer checks first
+        if (explanation != null) {
+            explanation.flags().forEach(flag -> reasons.add(flag.reason()));
+        }
+        reasons.addAll(reasons());
         var outliers = java.util.Arrays.stream(rec.clustering().outliers()).mapToObj(evidence.sampleIds()::get)
                 .toList();
         return new Decision(rec.verdict(), headline, rec.linkage(), rec.k(), rec.cutHeight(), rec.levels(),
-                reasons(), criteria, outliers, rec.minClusterSize(), rec.structureTest());
+                reasons, criteria, outliers, rec.minClusterSize(), rec.structureTest());
     }
 
     private LinkageComparison comparison() {
@@ -207,6 +218,7 @@ final class ModelFactory {
         out.add(new ReportModel.Setting("Replicates per null data set", Integer.toString(s.nullReplicates())));
         out.add(new ReportModel.Setting("PAC interval", "(" + Numbers.plain(s.pacLow()) + ", "
                 + Numbers.plain(s.pacHigh()) + "]"));
+        out.addAll(BranchPValueReport.settings(s));
         out.add(new ReportModel.Setting("Seed", Long.toString(s.seed())));
         out.add(new ReportModel.Setting("Smallest cluster (samples; smaller branches are outliers)",
                 Integer.toString(s.minClusterSize(evidence.samples())) + (s.minClusterSize() == 0

@@ -135,9 +135,10 @@ public final class ReasonWords implements Reason.Visitor<String> {
 
     @Override
     public String outliers(Reason.Outliers r) {
-        return f("%d sample%s on branches of fewer than %d samples %s set aside as outliers, not clusters; they are "
-                + "listed in clusters.csv and left out of k and of every fit measure.", r.count(),
-                r.count() == 1 ? "" : "s", r.minClusterSize(), r.count() == 1 ? "is" : "are");
+        return f("%d sample%s %s set aside as outlier%s, not clusters: on branches of fewer than %d samples, or joining "
+                + "the tree (or their cluster) far above its first split into two large branches; they are listed in "
+                + "clusters.csv and left out of k.", r.count(), r.count() == 1 ? "" : "s", r.count() == 1 ? "is" : "are",
+                r.count() == 1 ? "" : "s", r.minClusterSize());
     }
 
     @Override

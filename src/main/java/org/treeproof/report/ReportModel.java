@@ -4,8 +4,10 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import org.treeproof.explain.Explanation;
 import org.treeproof.partition.Partition;
 import org.treeproof.score.JaccardStability;
+import org.treeproof.study.ClusterBranch;
 import org.treeproof.study.ClusterEvidence;
 import org.treeproof.study.DecisionRule;
 import org.treeproof.study.Evidence;
@@ -30,13 +32,28 @@ import org.treeproof.tree.Linkage;
  * @param caution         what the evidence does not show
  * @param figures         the charts, in {@link Figure#IDS} order, without those whose data is missing
  * @param notes           plain sentences on what was left out and why
+ * @param explanation     what sets the recommended clusters apart, the covariates and the alternative analyses;
+ *                        {@code null} when the study was not explained
+ * @param clusterBranches the branch of each recommended cluster with its AU p-value (empty when branch p-values
+ *                        were not computed or no clusters are recommended)
  */
 public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule, Decision decision,
         List<EvidenceTable> evidence, LinkageComparison linkages, List<ClusterEvidence> clusters,
         List<Recommendation.SampleFlag> flaggedSamples, LabelComparison labels, List<Setting> effectiveSettings,
-        String caution, List<Figure> figures, List<String> notes) {
+        String caution, List<Figure> figures, List<String> notes, Explanation explanation,
+        List<ClusterBranch> clusterBranches) {
+
+    /** A model without an explanation or branch p-values. */
+    public ReportModel(RunInfo run, StudySettings settings, DecisionRule rule, Decision decision,
+            List<EvidenceTable> evidence, LinkageComparison linkages, List<ClusterEvidence> clusters,
+            List<Recommendation.SampleFlag> flaggedSamples, LabelComparison labels, List<Setting> effectiveSettings,
+            String caution, List<Figure> figures, List<String> notes) {
+        this(run, settings, rule, decision, evidence, linkages, clusters, flaggedSamples, labels, effectiveSettings,
+                caution, figures, notes, null, List.of());
+    }
 
     public ReportModel {
+        clusterBranches = List.copyOf(clusterBranches);
         Objects.requireNonNull(run, "run");
         Objects.requireNonNull(settings, "settings");
         Objects.requireNonNull(rule, "rule");
@@ -86,7 +103,22 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
      * @throws IllegalArgumentException if the recommendation, the run or the labels do not belong to the evidence
      */
     public static ReportModel of(Evidence evidence, Recommendation recommendation, RunInfo run, LabelComparison labels) {
-        return new ModelFactory(evidence, recommendation, run).build(labels);
+        return of(evidence, recommendation, run, labels, null);
+    }
+
+    /**
+     * The model of a study with the explanation of its recommended solution.
+     *
+     * @param explanation the explanation, or {@code null} when there is none
+     */
+    public static ReportModel of(Evidence evidence, Recommendation recommendation, RunInfo run, LabelComparison labels,
+            Explanation explanation) {
+        return new ModelFactory(evidence, recommendation, run).build(labels, explanation);
+    }
+
+    /** The explanation of the recommended solution, if the study was explained. */
+    public Optional<Explanation> explained() {
+        return Optional.ofNullable(explanation);
     }
 
     /**
@@ -122,6 +154,11 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
     /** The clusters below Hennig's stable band. */
     public List<ClusterEvidence> flaggedClusters() {
         return clusters.stream().filter(c -> c.status() != JaccardStability.Status.STABLE).toList();
+    }
+
+    /** The recommended clusters whose branch has a low AU p-value ({@link ClusterBranch#lowAu()}). */
+    public List<ClusterBranch> lowAuClusters() {
+        return clusterBranches.stream().filter(ClusterBranch::lowAu).toList();
     }
 
     /** Whether stability was calibrated against null data. */

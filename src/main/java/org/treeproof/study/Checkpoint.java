@@ -19,7 +19,9 @@ public interface Checkpoint {
         /** Null data sets (each kept as its per-linkage, per-k mean ARI and PAC). */
         NULL_SETS,
         /** Gap-statistic reference sets (each kept as its per-linkage log W_k). */
-        GAP_SETS
+        GAP_SETS,
+        /** Multiscale bootstrap replicates (each kept as the clades of every linkage's tree it reproduced). */
+        MULTISCALE
     }
 
     /** Replicate outcomes kept from an earlier run, in index order from 0 (possibly none). */

@@ -9,9 +9,11 @@ import org.treeproof.score.ConsensusAccumulator;
  * for the heap stops at once with advice instead of failing hours later with an OutOfMemoryError.
  *
  * <p>What stays for the whole run: the data table, the full distance matrix, and per linkage the consensus
- * counters (one or two bytes per pair and k). On top of it, the largest of the three phases: stability
+ * counters (one or two bytes per pair and k). On top of it, the largest of the four phases: stability
  * replicates (per running replicate a gathered distance matrix and the linkage's working copy of it), null
- * calibration (a null data set, its distances and consensus counters, plus running replicates) and the gap
+ * calibration (a null data set, its distances and consensus counters, plus running replicates), the multiscale
+ * bootstrap for branch p-values (per running replicate the distances over all samples, a working copy and the drawn
+ * feature columns) and the gap
  * statistic (per running reference set its data, distances and a working copy).
  *
  * @param persistent bytes held for the whole run
@@ -44,8 +46,18 @@ public record MemoryEstimate(long persistent, long peakPhase, String phase) {
         if (hasData && s.referenceSets() > 0) {
             gap = inFlight * (data + 2 * distances);
         }
+        long multiscale = 0;
+        if (hasData && s.branchPValues() != null) {
+            // per running replicate: distances over all samples, the linkage's working copy, the drawn columns
+            double largest = s.branchPValues().scales().stream().mapToDouble(Double::doubleValue).max().orElse(1);
+            multiscale = inFlight * (2 * distances + 8L * n * Math.max(1, Math.round(largest * p)) + 64L * n * links);
+        }
         long peak = replicates;
         String phase = "stability replicates";
+        if (multiscale > peak) {
+            peak = multiscale;
+            phase = "multiscale bootstrap (branch p-values)";
+        }
         if (nulls > peak) {
             peak = nulls;
             phase = "null calibration";

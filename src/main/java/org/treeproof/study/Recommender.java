@@ -99,8 +99,9 @@ public final class Recommender {
         List<Recommendation.CriterionChoice> criteria = criteria(le);
         List<Recommendation.KShare> votes = votes(le);
         reasons.add(new Reason.Chosen(winner, e));
-        if (e.outliers() > 0) {
-            reasons.add(new Reason.Outliers(e.outliers(), evidence.minClusterSize()));
+        Clustering solution = farSamplesAside(le, e);
+        if (solution.outlierCount() > 0) {
+            reasons.add(new Reason.Outliers(solution.outlierCount(), evidence.minClusterSize()));
         }
         if (!votes.isEmpty()) {
             reasons.add(new Reason.Votes(le.linkage(), votes, e.k()));
@@ -126,7 +127,7 @@ public final class Recommender {
                     summaries.stream().filter(s -> s.linkage() != le.linkage()).toList()));
         }
         return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict(), levels, reasons, criteria,
-                flaggedClusters(e), flaggedSamples(e), summaries, agreement, rule, assessments, test, e.clustering(),
+                flaggedClusters(e), flaggedSamples(e), summaries, agreement, rule, assessments, test, solution,
                 evidence.minClusterSize(), votes);
     }
 
@@ -192,6 +193,24 @@ public final class Recommender {
         return new Recommendation(le.linkage(), 1, cut, Verdict.UNSUPPORTED, List.of(), reasons, criteria(le),
                 List.of(), List.of(), summaries, agreement, rule, assessments, evidence.structureTest(), one,
                 evidence.minClusterSize(), List.of());
+    }
+
+    /**
+     * The recommended clusters with far samples set aside as well: samples a linkage merged into a cluster from far
+     * away (a small branch joining the cluster at least {@link #FAR_FACTOR} times higher than the cluster's own first
+     * split into two large branches; {@link SizedCuts#withFarSamplesAside}). Cluster numbers stay those of the
+     * evidence.
+     */
+    private Clustering farSamplesAside(LinkageEvidence le, KEvidence e) {
+        Clustering far = SizedCuts.of(le.tree(), evidence.minClusterSize(), e.k()).withFarSamplesAside(e.k(),
+                FAR_FACTOR);
+        int[] labels = e.clustering().labels();
+        for (int i = 0; i < labels.length; i++) {
+            if (far.isOutlier(i)) {
+                labels[i] = Clustering.OUTLIER;
+            }
+        }
+        return new Clustering(labels, e.k());
     }
 
     /**
@@ -290,7 +309,7 @@ public final class Recommender {
         double[] sil = e.sampleSilhouette();
         for (int i = 0; i < st.length; i++) {
             if (e.clustering().isOutlier(i)) {
-                continue;
+                continue;   // far samples set aside afterwards keep their flags; clusters.csv shows them as outliers
             }
             boolean unstable = st[i] < rule.unstableSample();
             boolean negative = sil[i] < 0;

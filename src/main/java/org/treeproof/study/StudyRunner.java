@@ -58,6 +58,9 @@ public final class StudyRunner {
         this.kernelThreads = kernelThreads;
         this.progress = progress;
         settings.checkAgainst(input.samples(), input.hasData());
+        if (settings.branchPValues() != null && input.hasData()) {
+            settings.branchPValues().checkFeatures(input.data().features());
+        }
     }
 
     /** Keeps finished work in {@code checkpoint} and replays what it already holds. */
@@ -86,6 +89,8 @@ public final class StudyRunner {
         NullTable nulls = data != null && settings.nullSets() > 0 ? nullCalibration(data, refs.size(), minSize) : null;
         GapResult[] gaps = data != null && settings.referenceSets() > 0
                 ? new GapRun(data, d, settings, refs, executor, progress, checkpoint).run() : null;
+        List<BranchPValues> pvalues = data != null && settings.branchPValues() != null
+                ? new MultiscaleRun(data, settings, refs, executor, progress, checkpoint).run() : null;
 
         double[][] silhouettes = new double[refs.size()][maxK - 1];
         Silhouette.Result[][] silResults = new Silhouette.Result[refs.size()][maxK - 1];
@@ -100,7 +105,8 @@ public final class StudyRunner {
         var linkages = new ArrayList<LinkageEvidence>();
         for (int l = 0; l < refs.size(); l++) {
             linkages.add(linkageEvidence(l, refs.get(l), data, d, tally, silResults[l],
-                    calibration == null ? null : calibration.cells()[l], gaps == null ? null : gaps[l]));
+                    calibration == null ? null : calibration.cells()[l], gaps == null ? null : gaps[l],
+                    pvalues == null ? null : pvalues.get(l)));
         }
         return new Evidence(input.sampleIds(), data == null ? 0 : data.features(), settings, linkages, minSize,
                 calibration == null ? null : calibration.test());
@@ -261,7 +267,8 @@ public final class StudyRunner {
     }
 
     private LinkageEvidence linkageEvidence(int l, ReferenceSolution ref, DataMatrix data, CondensedDistances d,
-            StabilityTally tally, Silhouette.Result[] sils, NullStability[] calibrated, GapResult gap) {
+            StabilityTally tally, Silhouette.Result[] sils, NullStability[] calibrated, GapResult gap,
+            BranchPValues pvalues) {
         ConsensusMatrix consensus = tally.consensus(l);
         var byK = new ArrayList<KEvidence>();
         for (int k = 2; k <= settings.maxK(); k++) {
@@ -313,7 +320,8 @@ public final class StudyRunner {
                     sampleStability, sampleConsensus, replicateAri));
         }
         double cophenetic = ref.tree().copheneticCorrelation(d);
-        return new LinkageEvidence(ref.linkage(), ref.tree(), cophenetic, gap, byK, tally.branchSupport(l), consensus);
+        return new LinkageEvidence(ref.linkage(), ref.tree(), cophenetic, gap, byK, tally.branchSupport(l), consensus,
+                LinkageEvidence.cdfs(consensus), pvalues);
     }
 
     private static double[] finite(double[] v) {

@@ -32,10 +32,12 @@ import org.treeproof.tree.Linkage;
  * @param seed            the master seed every random draw derives from
  * @param minClusterSize  the fewest samples a cluster holds; smaller branches are outliers. 0 chooses
  *                        {@link #defaultMinClusterSize(int)} for the number of samples
+ * @param branchPValues   the multiscale bootstrap for branch p-values, or {@code null} to skip it
  */
 public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int replicates, Resampling resampling,
         double sampleFraction, double featureFraction, int referenceSets, ReferenceData.Kind gapReference,
-        int nullSets, int nullReplicates, double pacLow, double pacHigh, long seed, int minClusterSize) {
+        int nullSets, int nullReplicates, double pacLow, double pacHigh, long seed, int minClusterSize,
+        BranchPValueSettings branchPValues) {
 
     /** The defaults a study uses when an option is not given. */
     public static final List<Linkage> DEFAULT_LINKAGES = List.of(Linkage.AVERAGE, Linkage.COMPLETE, Linkage.WARD);
@@ -54,6 +56,9 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
                 referenceSets, nullSets, nullReplicates, pacLow, pacHigh);
         if (minClusterSize < 0) {
             problems.add("--min-cluster-size must be 0 (automatic) or a number of samples, got " + minClusterSize);
+        }
+        if (branchPValues != null) {
+            problems.addAll(branchPValues.problems());
         }
         if (!problems.isEmpty()) {
             throw new InputException(String.join("; ", problems));
@@ -142,6 +147,9 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
             if (featureFraction < 1) {
                 p.add("--feature-fraction needs a data table; distances alone cannot be resampled by feature");
             }
+            if (branchPValues != null) {
+                p.add("--branch-pvalues needs a data table; distances alone cannot be resampled by feature");
+            }
         }
         if (!p.isEmpty()) {
             throw new InputException(String.join("; ", p));
@@ -202,6 +210,7 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         private double pacLow = 0.1;
         private double pacHigh = 0.9;
         private long seed = 1;
+        private BranchPValueSettings branchPValues;
 
         private Builder() {
         }
@@ -277,10 +286,16 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
             return this;
         }
 
+        /** The multiscale bootstrap for branch p-values, or {@code null} (the default) to skip it. */
+        public Builder branchPValues(BranchPValueSettings v) {
+            branchPValues = v;
+            return this;
+        }
+
         public StudySettings build() {
             return new StudySettings(linkages, metric, maxK, replicates, resampling, sampleFraction, featureFraction,
                     referenceSets, gapReference, nullSets, nullReplicates, pacLow, pacHigh, seed,
-                    minClusterSize);
+                    minClusterSize, branchPValues);
         }
     }
 }

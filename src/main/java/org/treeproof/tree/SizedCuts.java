@@ -115,6 +115,65 @@ public final class SizedCuts {
         return Clustering.of(labels);
     }
 
+    /**
+     * The cut at k with far samples inside each cluster also set aside: within each cluster's branch, the small
+     * branches it sheds before its own first split into two branches of the minimum size that join at least
+     * {@code factor} times higher than that split, as {@link #oneClusterWithOutliers} does for the whole tree. A
+     * linkage that merges a far sample into a cluster (Ward, complete) then sets it aside as average linkage
+     * would. A cluster with no such split of its own keeps all its samples. {@code null} when k is not reached.
+     */
+    public Clustering withFarSamplesAside(int k, double factor) {
+        if (!reaches(k)) {
+            return null;
+        }
+        int n = tree.leaves();
+        int branches = branchesForK[k];
+        int[] labels = labelsOf(branches).labels();
+        // the branches of the ordinary cut: undo the last branches - 1 merges
+        var frontier = new java.util.TreeSet<Integer>();
+        frontier.add(2 * n - 2);
+        for (int t = 1; t < branches; t++) {
+            int s = n - 1 - t;
+            frontier.remove(n + s);
+            frontier.add(tree.left(s));
+            frontier.add(tree.right(s));
+        }
+        for (int node : frontier) {
+            if (sizeOf(tree, node) >= minSize && node >= n) {
+                shedFar(node, factor, labels);
+            }
+        }
+        return Clustering.of(labels);
+    }
+
+    /** Marks the far small branches of one cluster's subtree as outliers. */
+    private void shedFar(int root, double factor, int[] labels) {
+        int n = tree.leaves();
+        var shed = new java.util.ArrayList<int[]>();   // {small child, merge index}
+        int node = root;
+        while (node >= n) {
+            int s = node - n;
+            int a = tree.left(s);
+            int b = tree.right(s);
+            boolean bigA = sizeOf(tree, a) >= minSize;
+            boolean bigB = sizeOf(tree, b) >= minSize;
+            if (bigA && bigB) {
+                double split = tree.height(s);
+                for (int[] x : shed) {
+                    if (tree.height(x[1]) >= factor * split) {
+                        markLeaves(x[0], labels);
+                    }
+                }
+                return;
+            }
+            if (!bigA && !bigB) {
+                return;
+            }
+            shed.add(new int[] {bigA ? b : a, s});
+            node = bigA ? a : b;
+        }
+    }
+
     private void markLeaves(int node, int[] labels) {
         int n = tree.leaves();
         var stack = new java.util.ArrayDeque<Integer>();

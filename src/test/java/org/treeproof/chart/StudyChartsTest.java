@@ -60,8 +60,10 @@ class StudyChartsTest {
                 "stability", new int[] {StabilityChart.WIDTH, StabilityChart.HEIGHT},
                 "gap", new int[] {GapChart.WIDTH, GapChart.HEIGHT},
                 "consensus", new int[] {ConsensusChart.WIDTH, ConsensusChart.HEIGHT},
-                "jaccard", new int[] {JaccardChart.WIDTH, JaccardChart.HEIGHT});
-        Set<String> vector = Set.of("dendrogram", "silhouette", "stability", "gap", "jaccard", "linkages");
+                "jaccard", new int[] {JaccardChart.WIDTH, JaccardChart.HEIGHT},
+                "consensus-cdf", new int[] {ConsensusCdfChart.WIDTH, ConsensusCdfChart.HEIGHT});
+        Set<String> vector = Set.of("dendrogram", "silhouette", "stability", "gap", "consensus-cdf", "jaccard",
+                "linkages");
         Set<String> written = new TreeSet<>();
         for (Figure f : figures) {
             assertTrue(f.drawn(), f.id() + ": " + f.note());
@@ -196,7 +198,7 @@ class StudyChartsTest {
         assertTrue(sil.note().contains("NaN"), sil.note());
         assertFalse(Files.exists(dir.resolve("silhouette.png")));
         assertFalse(Files.exists(dir.resolve("silhouette.svg")));
-        assertEquals(7, byId.values().stream().filter(Figure::drawn).count());
+        assertEquals(8, byId.values().stream().filter(Figure::drawn).count());
     }
 
     @Test

@@ -32,7 +32,8 @@ class ReportModelTest {
         assertEquals(s.recommendation().linkage(), m.decision().linkage());
         assertEquals(new ReasonWords(s.recommendation().rule()).words(s.recommendation().reasons()),
                 m.decision().reasons());
-        assertEquals(Figure.IDS, ids(m));
+        // every study figure; the explanation's two (features, sensitivity) come only with an explanation
+        assertEquals(Figure.IDS.subList(0, Figure.IDS.indexOf("features")), ids(m));
         for (Figure f : m.figures()) {
             assertEquals(f.id() + ".png", f.fileName());
             assertEquals("charts/" + f.id() + ".png", f.path());
@@ -56,7 +57,7 @@ class ReportModelTest {
         assertTrue(m.recommendedRow().isEmpty());
         assertTrue(m.clusters().isEmpty());
         assertTrue(m.flaggedSamples().isEmpty());
-        assertEquals(List.of("dendrogram", "stability", "gap", "linkages", "heatmap"), ids(m));
+        assertEquals(List.of("dendrogram", "stability", "gap", "consensus-cdf", "linkages", "heatmap"), ids(m));
         assertTrue(m.notes().stream().anyMatch(n -> n.contains("silhouette") && n.contains("left out")), m.notes().toString());
         for (EvidenceTable t : m.evidence()) {
             assertTrue(t.recommended().isEmpty());
@@ -68,7 +69,7 @@ class ReportModelTest {
     void distancesAloneLeaveOutTheGapHeatMapAndNullColumnsAndSaySo() {
         Studies.Study s = Studies.distancesOnly();
         ReportModel m = s.model();
-        assertEquals(List.of("dendrogram", "silhouette", "stability", "consensus", "jaccard"), ids(m));
+        assertEquals(List.of("dendrogram", "silhouette", "stability", "consensus", "consensus-cdf", "jaccard"), ids(m));
         assertFalse(m.nullCalibrated());
         assertFalse(m.gapComputed());
         assertFalse(m.hasData());

@@ -6,6 +6,7 @@ import java.util.SplittableRandom;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.io.SummaryJson;
 import org.treeproof.resample.ReplicateExecutor;
+import org.treeproof.study.BranchPValueSettings;
 import org.treeproof.study.DecisionRule;
 import org.treeproof.study.Evidence;
 import org.treeproof.study.Recommendation;
@@ -17,8 +18,8 @@ import org.treeproof.study.StudySettings;
 import org.treeproof.tree.Linkage;
 
 /**
- * A small complete study (replicates, null calibration, gap statistic, two linkages) for comparing executors by
- * the bytes of its summary.json.
+ * A small complete study (replicates, null calibration, gap statistic, branch p-values, two linkages) for comparing
+ * executors by the bytes of its summary.json.
  */
 final class SmallStudy {
     private SmallStudy() {
@@ -46,7 +47,8 @@ final class SmallStudy {
 
     static StudySettings settings() {
         return StudySettings.builder().linkages(List.of(Linkage.AVERAGE, Linkage.WARD)).maxK(6).replicates(30)
-                .nullSets(19).nullReplicates(4).referenceSets(5).seed(2024).build();
+                .nullSets(19).nullReplicates(4).referenceSets(5).seed(2024)
+                .branchPValues(new BranchPValueSettings(BranchPValueSettings.DEFAULT_SCALES, 10)).build();
     }
 
     /** summary.json of the study run with {@code executor}, with fixed provenance. */

@@ -38,6 +38,8 @@ class SparkStudyTest {
         assertEquals(3, summary.at("/recommendation/k").asInt());
         assertTrue(summary.at("/linkages/0/byK/1/gap").isNumber());
         assertEquals(19, summary.at("/linkages/0/byK/1/stability/null/sets").asInt());
+        assertEquals(10, summary.at("/settings/branchPValues/replicatesPerScale").asInt());
+        assertTrue(summary.at("/linkages/0/branchSupport/0").has("au"));
         assertArrayEquals(local, spark);
     }
 

@@ -65,4 +65,19 @@ class SizedCutsTest {
         assertArrayEquals(new int[] {0, 0, 0, 0, 0, 0, 0, O}, cuts.oneClusterWithOutliers(2).labels());
         assertArrayEquals(new int[] {0, 0, 0, 0, 0, 0, 0, 0}, cuts.oneClusterWithOutliers(3).labels());
     }
+
+    @Test
+    void aFarSampleMergedIntoAClusterIsSetAside() {
+        // {0,1,2,3} splits 2 + 2 at height 2, {4,5,6,7} at 2.2; sample 8 joins the first group at 6, the groups
+        // join at 7 (as Ward merges a far sample into its nearest group)
+        int[] left = {0, 2, 4, 6, 9, 11, 8, 14};
+        int[] right = {1, 3, 5, 7, 10, 12, 13, 15};
+        double[] h = {1, 1.1, 1.2, 1.3, 2, 2.2, 6, 7};
+        MergeTree t = MergeTree.of(9, left, right, h);
+        SizedCuts cuts = SizedCuts.of(t, 2, 3);
+        assertArrayEquals(new int[] {0, 0, 0, 0, 1, 1, 1, 1, 0}, cuts.at(2).clustering().labels());
+        // 6 >= 1.5 x 2: set aside; with a factor of 4 (6 < 8) it stays
+        assertArrayEquals(new int[] {0, 0, 0, 0, 1, 1, 1, 1, O}, cuts.withFarSamplesAside(2, 1.5).labels());
+        assertArrayEquals(new int[] {0, 0, 0, 0, 1, 1, 1, 1, 0}, cuts.withFarSamplesAside(2, 4).labels());
+    }
 }
