@@ -75,10 +75,12 @@ class AssessIT {
         // the methods paragraph's figures equal summary.json's at the printed precision
         String methods = Files.readString(dir.resolve("methods.md"), StandardCharsets.UTF_8);
         JsonNode chosen = chosen(s);
-        assertTrue(methods.contains(String.format(Locale.ROOT, "mean ARI was %.2f",
+        assertTrue(methods.contains(String.format(Locale.ROOT, "mean ARI %.2f over 200 replicates",
                 chosen.get("stability").get("ariMean").asDouble())), methods);
-        assertTrue(methods.contains(String.format(Locale.ROOT, "average silhouette %.2f",
+        assertTrue(methods.contains(String.format(Locale.ROOT, "average silhouette %.3f",
                 chosen.get("silhouette").asDouble())), methods);
+        assertTrue(methods.contains(String.format(Locale.ROOT, "an excess of %.1f over the null",
+                chosen.get("stability").get("null").get("excess").asDouble())), methods);
         assertTrue(methods.contains("treeproof " + s.get("tool").get("version").asText() + " (seed 1)"), methods);
     }
 
