@@ -113,15 +113,16 @@ final class AssessCommand implements Callable<Integer> {
         int nThreads = Threads.resolve(threads, "--threads");
         Engine chosen = engine == null ? Engine.LOCAL : Engine.parse(engine);
         chosen.requireAvailable();
-        StudySettings settings = study.settings();
+        StudySettings settings = study.settings(inputOptions.distances());
         if (OutputDirectory.exists(out) && !force) {
             throw new InputException("--out " + out + ": already exists; choose another directory or add --force");
         }
-        inputOptions.requireUntransformedFor(settings.metric());
+        inputOptions.fitTo(settings.metric());
         LoadedInput loaded = inputOptions.load(input);
         StudyInput studyInput = loaded.isDistanceTable()
                 ? StudyInput.ofDistances(loaded.sampleIds(), loaded.distances().orElseThrow())
                 : StudyInput.of(loaded.matrix().orElseThrow());
+        SampleVariety.require(input, studyInput, settings);
         settings.checkAgainst(studyInput.samples(), studyInput.hasData());
         String[] classes = labels == null ? null
                 : LabelsReader.read(labels, inputOptions.delimiter().orElse(null), loaded.sampleIds());

@@ -46,7 +46,7 @@ public final class InputOptions {
 
     @Option(names = "--scale", paramLabel = "HOW", converter = ScaleConverter.class,
             description = "Per-feature scaling after log2: none, center or zscore (population SD; constant features"
-                    + " are dropped and reported). Default: zscore.")
+                    + " are dropped and reported). Default: zscore; none for the 0/1 metrics jaccard and hamming.")
     private Scale scale;
 
     @Option(names = "--top-variable", paramLabel = "N", converter = TopVariableConverter.class,
@@ -57,6 +57,9 @@ public final class InputOptions {
             description = "INPUT is a square, symmetric table of distances with ids in its header row and first"
                     + " column, not a data table.")
     private boolean distances;
+
+    /** Set by {@link #fitTo}: a 0/1 metric, whose default scaling is none. */
+    private boolean binaryMetric;
 
     /** Whether INPUT is a distance table. */
     public boolean distances() {
@@ -73,10 +76,14 @@ public final class InputOptions {
         return Optional.ofNullable(delimiter);
     }
 
-    /** The effective preparation of a data table, defaults filled in. */
+    /**
+     * The effective preparation of a data table, defaults filled in: {@link Preparation#DEFAULT_SCALE}, or no
+     * scaling for a 0/1 metric (see {@link #fitTo}).
+     */
     public Preparation preparation() {
+        Scale defaultScale = binaryMetric ? Scale.NONE : Preparation.DEFAULT_SCALE;
         return new Preparation(missing == null ? MissingPolicy.ERROR : missing, log2,
-                scale == null ? Preparation.DEFAULT_SCALE : scale, topVariable == null ? 0 : topVariable);
+                scale == null ? defaultScale : scale, topVariable == null ? 0 : topVariable);
     }
 
     /**
@@ -105,17 +112,21 @@ public final class InputOptions {
     }
 
     /**
-     * Refuses a preparation that would turn 0/1 data into other values before a 0/1 measure sees them
-     * (log2 and any scaling do).
+     * Fits the preparation to {@code metric}: a 0/1 measure takes the data as they are, so its default scaling is
+     * {@code none}, and an explicit log2 or scaling, which would turn 0/1 values into others, is refused.
+     *
+     * @throws InputException naming the option that transforms the values
      */
-    public void requireUntransformedFor(org.treeproof.distance.Metric metric) {
-        if (!metric.binaryOnly() || distances) {
+    public void fitTo(org.treeproof.distance.Metric metric) {
+        binaryMetric = metric.binaryOnly() && !distances;
+        if (!binaryMetric) {
             return;
         }
         Preparation p = preparation();
         if (p.log2() || p.scale() != Scale.NONE) {
-            throw new InputException("--metric " + metric.id() + " takes 0/1 data as they are; add --scale none"
-                    + (p.log2() ? " and drop --log2" : "") + " (the default z-scoring changes 0/1 values)");
+            throw new InputException("--metric " + metric.id() + " takes 0/1 data as they are; "
+                    + (p.scale() != Scale.NONE ? "drop --scale " + p.scale().userName() + (p.log2() ? " and " : "")
+                    : "") + (p.log2() ? "drop --log2" : "") + " (they change 0/1 values)");
         }
     }
 

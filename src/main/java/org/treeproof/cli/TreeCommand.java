@@ -57,7 +57,7 @@ final class TreeCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         Linkage link = Linkage.parse(linkage);
         if (!inputOptions.distances()) {
-            inputOptions.requireUntransformedFor(Metric.parse(metric));
+            inputOptions.fitTo(Metric.parse(metric));
         }
         var loaded = inputOptions.load(input);
         if (loaded.samples() > CondensedDistances.MAX_ITEMS) {

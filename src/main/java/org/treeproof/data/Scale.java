@@ -38,8 +38,9 @@ public enum Scale {
                 left += c ? 0 : 1;
             }
             if (left == 0) {
-                throw new InputException(run.where.source() + ": every feature is constant across the samples, so "
-                        + "--scale zscore leaves nothing to cluster");
+                throw new InputException(run.where.source() + ": all " + run.table.samples() + " samples are "
+                        + "identical: every feature is constant across the samples, so --scale zscore leaves nothing"
+                        + " to cluster");
             }
             run.dropFeatures(constant, PreparationReport.Reason.CONSTANT, new int[constant.length]);
             double[] mean = run.table.means();

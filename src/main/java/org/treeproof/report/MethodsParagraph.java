@@ -107,9 +107,9 @@ public final class MethodsParagraph {
                 cite(c, Reference.HENNIG)));
         if (model.nullCalibrated()) {
             out.add(f("To tell stability from chance, the same procedure (%d replicates each) was applied to %d null "
-                    + "data sets drawn from a Gaussian distribution with the data's principal-axis variances (the same "
-                    + "covariance, no clusters); p-values are Monte Carlo p-values, (1 + null sets at least as "
-                    + "stable) / (1 + %d) (%s).", s.nullReplicates(), s.nullSets(), s.nullSets(), cite(c, Reference.HOPE)));
+                    + "data sets %s; p-values are Monte Carlo p-values, (1 + null sets at least as "
+                    + "stable) / (1 + %d) (%s).", s.nullReplicates(), s.nullSets(), Names.nullModelProse(s.metric()),
+                    s.nullSets(), cite(c, Reference.HOPE)));
         } else {
             out.add("Stability was not calibrated against null data.");
         }
@@ -120,7 +120,7 @@ public final class MethodsParagraph {
         }
         fit += f(" and the Dunn index (%s)", cite(c, Reference.DUNN));
         if (model.gapComputed()) {
-            fit += f("; the gap statistic (%s) was computed with %d reference data sets drawn uniformly over the %s, "
+            fit += f("; the gap statistic (%s) was computed with %d reference data sets %s, "
                     + "taking the smallest k with Gap(k) ≥ Gap(k+1) − s(k+1)", cite(c, Reference.TIBSHIRANI),
                     s.referenceSets(), Names.gapReferenceProse(s.gapReference()));
         }

@@ -140,7 +140,7 @@ public final class StudyRunner {
     private NullTable nullCalibration(DataMatrix data, int linkages) {
         int sets = settings.nullSets();
         int maxK = settings.maxK();
-        var generator = org.treeproof.resample.ReferenceData.gaussian(data);
+        var generator = org.treeproof.resample.ReferenceData.nullModel(settings.metric(), data);
         double[][][] meanAri = new double[linkages][maxK - 1][sets];
         double[][][] pac = new double[linkages][maxK - 1][sets];
         double[][][] sil = new double[linkages][maxK - 1][sets];
