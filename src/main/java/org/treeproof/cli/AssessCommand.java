@@ -42,7 +42,8 @@ import picocli.CommandLine.Parameters;
 final class AssessCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "INPUT", description = "Data table (CSV/TSV, optionally .gz), samples in rows "
-            + "unless --samples-in-columns; or a distance table with --distances.")
+            + "unless --samples-in-columns; or a distance table with --distances; - reads standard input (with "
+            + "--delimiter).")
     Path input;
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "Output directory (must not exist "

@@ -53,6 +53,11 @@ public final class InputOptions {
             description = "Keep the N features of largest variance (ties by input order), 0 for all. Default: 0.")
     private Integer topVariable;
 
+    @Option(names = "--no-ids",
+            description = "The table has no id column: every column is a feature, and samples are named by their"
+                    + " row, 1 to n.")
+    private boolean noIds;
+
     @Option(names = "--distances",
             description = "INPUT is a square, symmetric table of distances with ids in its header row and first"
                     + " column, not a data table.")
@@ -60,6 +65,14 @@ public final class InputOptions {
 
     /** Set by {@link #fitTo}: a 0/1 metric, whose default scaling is none. */
     private boolean binaryMetric;
+
+    /** How messages name the input when INPUT is {@code -}. */
+    static final String STANDARD_INPUT = "standard input";
+
+    /** Whether {@code input} is {@code -}, which stands for standard input. */
+    static boolean isStandardInput(Path input) {
+        return input.toString().equals("-");
+    }
 
     /** Whether INPUT is a distance table. */
     public boolean distances() {
@@ -100,14 +113,17 @@ public final class InputOptions {
             addIf(notForDistances, log2, "--log2");
             addIf(notForDistances, scale != null, "--scale");
             addIf(notForDistances, topVariable != null, "--top-variable");
+            addIf(notForDistances, noIds, "--no-ids");
             if (!notForDistances.isEmpty()) {
                 throw new InputException(String.join(", ", notForDistances) + (notForDistances.size() == 1 ? " does"
                         : " do") + " not apply to a distance table (--distances)");
             }
-            return LoadedInput.of(new DistanceTableReader(delimiter).read(input));
+            DistanceTableReader reader = new DistanceTableReader(delimiter);
+            return LoadedInput.of(isStandardInput(input) ? reader.read(STANDARD_INPUT, System.in) : reader.read(input));
         }
         Preparation preparation = preparation();
-        DataTable table = new DataTableReader(delimiter, samplesInColumns).read(input);
+        DataTableReader reader = new DataTableReader(delimiter, samplesInColumns, noIds);
+        DataTable table = isStandardInput(input) ? reader.read(STANDARD_INPUT, System.in) : reader.read(input);
         return LoadedInput.of(table, preparation.apply(table.matrix(), table.locator()));
     }
 

@@ -23,6 +23,7 @@ public enum Scale {
             double[] one = new double[mean.length];
             Arrays.fill(one, 1.0);
             run.table.shiftAndDivide(mean, one);
+            run.refuseNonFinite("centring");
         }
     },
     /**
@@ -43,6 +44,10 @@ public enum Scale {
                         + " to cluster");
             }
             run.dropFeatures(constant, PreparationReport.Reason.CONSTANT, new int[constant.length]);
+            // z-scores do not change when a feature is scaled, so each is first divided by a power of two near its
+            // largest magnitude (exactly): then neither the squares of 1e308 overflow nor those of 1e-310 underflow,
+            // and ordinary values give the same bits as without it.
+            run.table.scaleByPowerOfTwo(run.table.powerOfTwoExponents(), -1);
             double[] mean = run.table.means();
             double[] sd = run.table.variances(mean);
             for (int j = 0; j < sd.length; j++) {
