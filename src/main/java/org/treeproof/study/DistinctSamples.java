@@ -32,11 +32,18 @@ public final class DistinctSamples {
      * but by chance of measure 0). The 0/1 reference data ({@link ReferenceData.Kind#FEATURE_FREQUENCY}) are drawn
      * here exactly as the gap statistic will draw them, one at a time, so a study that would meet a reference set
      * with too few distinct samples can be refused before any work; drawing costs a small share of clustering them.
+     * Data that are not all 0/1 are left to the metric to refuse.
      */
     public static int fewestInGapReferences(StudyInput input, StudySettings settings) {
         if (!input.hasData() || settings.referenceSets() == 0
                 || settings.gapReference() != ReferenceData.Kind.FEATURE_FREQUENCY) {
             return Integer.MAX_VALUE;
+        }
+        for (double v : input.data().rowMajorCopy()) {
+            if (v != 0 && v != 1) {
+                // not 0/1 data: the metric refuses them, naming the cell, when it computes the distances
+                return Integer.MAX_VALUE;
+            }
         }
         ReferenceData generator = settings.gapReference().prepare(input.data());
         int fewest = Integer.MAX_VALUE;
