@@ -51,13 +51,13 @@ public final class ReplicateBench {
         for (String kind : List.of("sample", "feature")) {
             double fraction = kind.equals("sample") ? 1.0 : ff;
             var planner = new ReplicatePlanner(n, p, Resampling.SUBSAMPLE, 0.8, fraction, 1, Seeds.Purpose.REPLICATE);
-            var work = new ReplicateWork(data, d, Metric.EUCLIDEAN, refs, supports, planner, 10);
+            var work = new ReplicateWork(data, d, Metric.EUCLIDEAN, List.of(Linkage.AVERAGE), supports, planner, 10);
             var executor = new LocalExecutor(threads);
             double[] rates = new double[5];
             for (int round = 0; round < rates.length + 1; round++) {
                 var tally = new StabilityTally(refs, n, 10, reps, true);
                 long t0 = System.nanoTime();
-                executor.run(0, reps, work::run, tally::add);
+                executor.run(0, reps, work, tally::add);
                 double s = (System.nanoTime() - t0) / 1e9;
                 if (round > 0) {    // round 0 warms the JIT up
                     rates[round - 1] = reps / s;

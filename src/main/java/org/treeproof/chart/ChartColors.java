@@ -39,10 +39,19 @@ public final class ChartColors {
         return CLUSTER.length;
     }
 
-    /** The colour of cluster {@code label} (0-based); repeats after {@link #clusterColorCount()}. */
+    /** The colour of samples set aside as outliers (label -1): a light neutral grey, unlike any cluster's. */
+    public static final Color OUTLIER = new Color(0xBDBDBD);
+
+    /**
+     * The colour of cluster {@code label} (0-based); repeats after {@link #clusterColorCount()}. Label -1, an
+     * outlier, is {@link #OUTLIER}.
+     */
     public static Color cluster(int label) {
+        if (label == -1) {
+            return OUTLIER;
+        }
         if (label < 0) {
-            throw new IllegalArgumentException("cluster label must be non-negative, got " + label);
+            throw new IllegalArgumentException("cluster label must be -1 (outlier) or non-negative, got " + label);
         }
         return new Color(CLUSTER[label % CLUSTER.length]);
     }

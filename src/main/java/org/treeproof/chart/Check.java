@@ -68,14 +68,17 @@ final class Check {
         length(labels.length, length, what);
         int k = 0;
         for (int i = 0; i < labels.length; i++) {
-            if (labels[i] < 0) {
-                throw new IllegalArgumentException(what + "[" + i + "] is " + labels[i] + "; labels start at 0");
+            if (labels[i] < -1) {
+                throw new IllegalArgumentException(what + "[" + i + "] is " + labels[i]
+                        + "; labels start at 0 (-1 marks an outlier)");
             }
             k = Math.max(k, labels[i] + 1);
         }
         boolean[] used = new boolean[k];
         for (int l : labels) {
-            used[l] = true;
+            if (l >= 0) {
+                used[l] = true;
+            }
         }
         for (int c = 0; c < k; c++) {
             if (!used[c]) {

@@ -12,6 +12,11 @@ final class Clusters {
     private Clusters() {
     }
 
+    /** The strip's text for a run of one label: the 1-based cluster number, or "out" for outliers (-1). */
+    static String stripText(int label) {
+        return label < 0 ? "out" : Integer.toString(label + 1);
+    }
+
     /** Labels are 0-based inside the program and 1-based for readers, as on the command line. */
     static String name(int label) {
         return "cluster " + (label + 1);
@@ -28,9 +33,27 @@ final class Clusters {
     static int[] sizes(int[] labels, int k) {
         int[] s = new int[k];
         for (int l : labels) {
-            s[l]++;
+            if (l >= 0) {
+                s[l]++;
+            }
         }
         return s;
+    }
+
+    /** The number of outliers (label -1). */
+    static int outliers(int[] labels) {
+        int c = 0;
+        for (int l : labels) {
+            c += l < 0 ? 1 : 0;
+        }
+        return c;
+    }
+
+    /** The key's swatch for outliers, or none when there are none. */
+    static List<Key.Entry> outlierEntry(int[] labels, String unit) {
+        int o = outliers(labels);
+        return o == 0 ? List.of() : List.of(Key.Entry.fill(ChartColors.OUTLIER, "outliers (no cluster): " + o + " "
+                + unit(unit, o)));
     }
 
     /** One swatch per cluster with its size, e.g. "cluster 2: 41 samples". */

@@ -63,7 +63,7 @@ public final class ConsensusChart {
             g.fill(new Rectangle2D.Double(x0 - 14, y0 + a, 10, b - a));
             if (b - a >= 16) {
                 g.setColor(Look.INK);
-                Look.textCentredBelow(g, Integer.toString(run[2] + 1), x0 + (a + b) / 2, y0 - 32);
+                Look.textCentredBelow(g, Clusters.stripText(run[2]), x0 + (a + b) / 2, y0 - 32);
             }
         }
         g.setColor(Look.RULE);
@@ -92,6 +92,7 @@ public final class ConsensusChart {
         double y = Key.colourBar(g, scale, kx, top + 30, 240, "Share of replicates that put the two samples in"
                 + " the same cluster", kw, 0, 1, ticks, labels);
         List<Key.Entry> entries = new ArrayList<>(Clusters.entries(Clusters.sizes(in.clusterView(), k), "samples"));
+        entries.addAll(Clusters.outlierEntry(in.clusterView(), "samples"));
         entries.add(Key.Entry.line(Look.RULE, new BasicStroke(1.3f), "outline: a cluster's own pairs"));
         if (hasMissing()) {
             entries.add(Key.Entry.fill(scale.missing(), "pairs never drawn in the same replicate"));

@@ -214,6 +214,7 @@ public final class DataHeatmapChart {
         List<Key.Entry> entries = new ArrayList<>();
         if (k > 0) {
             entries.addAll(Clusters.entries(Clusters.sizes(in.clusterView(), k), "samples"));
+            entries.addAll(Clusters.outlierEntry(in.clusterView(), "samples"));
             entries.add(Key.Entry.line(ChartColors.ABOVE_CUT, new BasicStroke(2f), "branches that join clusters"));
         }
         boolean missing = false;

@@ -126,7 +126,7 @@ public final class DendrogramChart {
             double x1 = placed.along(run[1]);
             g.fill(new Rectangle2D.Double(x0, stripTop, x1 - x0, STRIP));
             // the number tells clusters apart where colours repeat (more than nine clusters)
-            String number = Integer.toString(run[2] + 1);
+            String number = Clusters.stripText(run[2]);
             if (x1 - x0 >= Look.width(g, number) + 6) {
                 g.setColor(ChartColors.textOn(colour));
                 Look.textLeft(g, number, (x0 + x1) / 2 - Look.width(g, number) / 2, stripTop + STRIP / 2);
@@ -148,6 +148,7 @@ public final class DendrogramChart {
         Look.textCentredBelow(g, axisTitle, plot.getCenterX(), y + 6);
 
         List<Key.Entry> entries = new ArrayList<>(Clusters.entries(Clusters.sizes(in.clusterView(), k), "samples"));
+        entries.addAll(Clusters.outlierEntry(in.clusterView(), "samples"));
         if (k > 1) {
             entries.add(Key.Entry.line(ChartColors.ABOVE_CUT, new BasicStroke(2f), "branches that join clusters"));
         }

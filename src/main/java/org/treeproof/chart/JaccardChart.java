@@ -20,10 +20,10 @@ import java.util.Objects;
 public final class JaccardChart {
     public static final int WIDTH = 900;
     public static final int HEIGHT = 580;
-    /** Below this a cluster "falls apart". */
-    public static final double LOW = 0.5;
-    /** At or above this a cluster "holds up". */
-    public static final double HIGH = 0.75;
+    /** Below this a cluster "falls apart" (Hennig's dissolution threshold, from the score). */
+    public static final double LOW = org.treeproof.score.JaccardStability.DISSOLVED_AT;
+    /** At or above this a cluster "holds up" (Hennig's stable band, from the score). */
+    public static final double HIGH = org.treeproof.score.JaccardStability.STABLE_FROM;
 
     private static final Color[] BAND_FILL = {new Color(0xE8E8E8), new Color(0xF4F4F4), Color.WHITE};
 

@@ -76,7 +76,7 @@ final class StudyChartInputs {
                 + " linkage)";
         return new Plan("dendrogram", title, "", (dir, base) -> {
             var in = new DendrogramInput(title, chartTree(chosen.tree()), evidence.sampleIds().toArray(String[]::new),
-                    solution == null ? new int[n] : solution.partition().labels(),
+                    solution == null ? new int[n] : solution.clustering().labels(),
                     solution == null ? Double.NaN : rec.cutHeight().chosen(), chosen.branchSupport(), heightLabel);
             var chart = new DendrogramChart(in);
             return new Drawn(chart.write(dir, base), chart.width(), chart.height());
@@ -90,7 +90,14 @@ final class StudyChartInputs {
         }
         String title = "Silhouette of " + rec.k() + " clusters, " + linkage + " linkage";
         return new Plan("silhouette", title, "", (dir, base) -> {
-            var in = new SilhouetteInput(title, solution.sampleSilhouette(), solution.partition().labels());
+            // outliers have no silhouette width: the chart shows the clustered samples
+            int[] clustered = solution.clustering().clustered();
+            double[] widths = new double[clustered.length];
+            double[] all = solution.sampleSilhouette();
+            for (int t = 0; t < clustered.length; t++) {
+                widths[t] = all[clustered[t]];
+            }
+            var in = new SilhouetteInput(title, widths, solution.clustering().clusteredPartition().labels());
             return new Drawn(new SilhouetteChart(in).write(dir, base), SilhouetteChart.WIDTH, SilhouetteChart.HEIGHT);
         });
     }
@@ -141,15 +148,19 @@ final class StudyChartInputs {
             k = rec.k();
             title = "Consensus of " + replicates + " replicates, " + linkage + " linkage, k = " + k;
         } else {
-            int stable = mostStableK(chosen);
+            int stable = strongestK(chosen, rec);
             k = stable == 0 ? 2 : stable;
-            String why = stable == 0 ? "" : hasNull(chosen) ? "; the most stable against null data" : "; the most stable";
+            String why = stable == 0 ? "" : "; the strongest by the decision rule";
             title = "Consensus of " + replicates + " replicates, " + linkage + " linkage, k = " + k
                     + " (no k is supported" + why + ")";
         }
+        if (chosen.at(k) == null) {
+            return Plan.skipped("consensus", title, "no cut of this tree into " + k + " clusters of the minimum size");
+        }
+        final int kk = k;
         return new Plan("consensus", title, "", (dir, base) -> {
-            var in = new ConsensusInput(title, evidence.samples(), condensed(chosen.consensus(), k),
-                    chosen.tree().leafOrder(), chosen.at(k).partition().labels());
+            var in = new ConsensusInput(title, evidence.samples(), condensed(chosen.consensus(), kk),
+                    chosen.tree().leafOrder(), chosen.at(kk).clustering().labels());
             return new Drawn(new ConsensusChart(in).write(dir, base), ConsensusChart.WIDTH, ConsensusChart.HEIGHT);
         });
     }
@@ -219,7 +230,7 @@ final class StudyChartInputs {
         return new Plan("heatmap", title, note, (dir, base) -> {
             var in = new DataHeatmapInput(title, n, q, features.values(data), data.sampleIds().toArray(String[]::new),
                     features.names(data), chartTree(chosen.tree()), features.tree(),
-                    solution == null ? null : solution.partition().labels());
+                    solution == null ? null : solution.clustering().labels());
             var chart = new DataHeatmapChart(in);
             return new Drawn(chart.write(dir, base), DataHeatmapChart.WIDTH, chart.height());
         });
@@ -251,22 +262,12 @@ final class StudyChartInputs {
     }
 
     /**
-     * The k whose mean ARI most exceeds the null data's mean ARI (the mean ARI itself without null data), the
-     * smaller k on ties: the same criterion the recommendation reports as "stability (ARI)". 0 when no k has a
-     * value.
+     * The k of the linkage's first solution in the decision rule's order (its strongest, though not good enough to
+     * recommend), as the recommendation assessed it; 0 when the linkage has no solution.
      */
-    static int mostStableK(LinkageEvidence le) {
-        int best = 0;
-        double bestValue = Double.NaN;
-        for (KEvidence e : le.byK()) {
-            NullStability nul = e.stability().nullModel();
-            double v = e.stability().ari().mean() - (nul == null ? 0 : nul.ariMean());
-            if (!Double.isNaN(v) && (best == 0 || v > bestValue)) {
-                best = e.k();
-                bestValue = v;
-            }
-        }
-        return best;
+    static int strongestK(LinkageEvidence le, Recommendation rec) {
+        return rec.assessments().stream().filter(a -> a.linkage() == le.linkage()).sorted(rec.rule().order())
+                .findFirst().map(org.treeproof.study.Assessment::k).orElse(0);
     }
 
     /** The recommended linkage if its solutions were compared with null data, else the first that was. */

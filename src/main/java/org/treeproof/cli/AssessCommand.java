@@ -10,10 +10,13 @@ import org.treeproof.data.DataMatrix;
 import org.treeproof.data.InputException;
 import org.treeproof.distance.Metric;
 import org.treeproof.io.CheckpointFile;
+import org.treeproof.io.CovariatesReader;
 import org.treeproof.io.CsvOutputs;
+import org.treeproof.io.DiskFull;
 import org.treeproof.io.LabelsReader;
 import org.treeproof.io.LoadedInput;
 import org.treeproof.io.OutputDirectory;
+import org.treeproof.io.OutputGuard;
 import org.treeproof.io.SummaryJson;
 import org.treeproof.resample.ReferenceData;
 import org.treeproof.resample.Resampling;
@@ -38,12 +41,12 @@ import picocli.CommandLine.Parameters;
 @Command(name = "assess", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Cluster the input with each linkage, recluster resampled replicates, calibrate against null "
                 + "data and the gap statistic, and recommend a number of clusters with its reasons.",
-            "Writes DIR/summary.json, clusters.csv, scores.csv, methods.md, report.html and charts/."})
+            "Writes DIR/summary.json, clusters.csv, scores.csv, features.csv, methods.md, report.html and charts/ "
+                + "(covariates.csv with --covariates, sensitivity.csv with --sensitivity)."})
 final class AssessCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "INPUT", description = "Data table (CSV/TSV, optionally .gz), samples in rows "
-            + "unless --samples-in-columns; or a distance table with --distances; - reads standard input (with "
-            + "--delimiter).")
+            + "unless --samples-in-columns; or a distance table with --distances.")
     Path input;
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "Output directory (must not exist "
@@ -60,6 +63,9 @@ final class AssessCommand implements Callable<Integer> {
             + "compare the recommended clusters with.")
     Path labels;
 
+    @Mixin
+    ExplainOptions explain;
+
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores). Results do not "
             + "depend on it.")
     Integer threads;
@@ -69,7 +75,9 @@ final class AssessCommand implements Callable<Integer> {
             + "master). Results do not depend on it.")
     String engine;
 
-    @Option(names = "--force", description = "Replace DIR if it exists (only once the new results are complete).")
+    @Option(names = "--force", description = "Replace DIR if it exists and treeproof wrote it, unchanged (only once the "
+            + "new results are complete). Never replaces a folder holding the input, the current directory or a folder "
+            + "above it.")
     boolean force;
 
     @Option(names = "--resume", description = "Continue a run of the same study that was interrupted, from the "
@@ -86,10 +94,12 @@ final class AssessCommand implements Callable<Integer> {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
-    /** The command line as typed (after the program name), for the reproducibility section. */
+    /** The command line as typed (the words after the sub-command's name), for the reproducibility section. */
     private String[] commandLine() {
-        var args = new ArrayList<String>(List.of("treeproof", "assess"));
-        args.addAll(spec.commandLine().getParseResult().originalArgs());
+        List<String> typed = spec.commandLine().getParseResult().originalArgs();
+        int at = typed.indexOf(spec.name());
+        var args = new ArrayList<String>(List.of("treeproof", spec.name()));
+        args.addAll(typed.subList(at + 1, typed.size()));
         return args.toArray(String[]::new);
     }
 
@@ -115,24 +125,41 @@ final class AssessCommand implements Callable<Integer> {
         Engine chosen = engine == null ? Engine.LOCAL : Engine.parse(engine);
         chosen.requireAvailable();
         StudySettings settings = study.settings(inputOptions.distances());
-        if (OutputDirectory.exists(out) && !force) {
-            throw new InputException("--out " + out + ": already exists; choose another directory or add --force");
+        List<Path> reads = labels == null ? List.of(input) : List.of(input, labels);
+        InputHints.requireReadable(input, "INPUT");
+        if (labels != null) {
+            InputHints.requireReadable(labels, "--labels");
         }
+        OutputGuard.check(out, "--out", force, reads);
         inputOptions.fitTo(settings.metric());
         LoadedInput loaded = inputOptions.load(input);
         StudyInput studyInput = loaded.isDistanceTable()
                 ? StudyInput.ofDistances(loaded.sampleIds(), loaded.distances().orElseThrow())
                 : StudyInput.of(loaded.matrix().orElseThrow());
         SampleVariety.require(input, studyInput, settings);
-        settings.checkAgainst(studyInput.samples(), studyInput.hasData());
+        settings.checkAgainst(studyInput.samples(), studyInput.hasData(), study.maxKGiven());
+        org.treeproof.study.Magnitudes.requireWithinLimit(studyInput);
         String[] classes = labels == null ? null
                 : LabelsReader.read(labels, inputOptions.delimiter().orElse(null), loaded.sampleIds());
+        var covariateKinds = explain.kinds();
+        var testOfFeatures = explain.test();
+        var covariates = explain.covariates == null ? null
+                : CovariatesReader.read(explain.covariates, loaded.sampleIds(), covariateKinds);
+        if (explain.sensitivity && loaded.isDistanceTable()) {
+            throw new InputException("--sensitivity reruns other preparations of a data table; a distance table has none");
+        }
         MemoryEstimate.of(studyInput.samples(), loaded.features(), settings, nThreads, studyInput.hasData())
                 .requireFits(Runtime.getRuntime().maxMemory(), studyInput.samples());
 
+        if (!quiet) {
+            for (String w : StudyOutputs.loneFeatureWarnings(loaded)) {
+                System.err.println("treeproof: " + w);
+            }
+        }
         String fingerprint = fingerprint(loaded, settings);
         Evidence evidence;
         CheckpointFile checkpoint = CheckpointFile.open(out, fingerprint, resume);
+        KeptWork kept = new KeptWork(checkpoint, out.toString(), System.err);
         try (Engine.Run run = chosen.start(nThreads);
                 var progress = new ProgressReporter(System.err, quiet || noProgress)) {
             if (resume && !quiet) {
@@ -146,18 +173,29 @@ final class AssessCommand implements Callable<Integer> {
                     .withCheckpoint(checkpoint).run();
         } catch (InputException e) {
             // the input cannot be studied as asked: nothing worth resuming
+            kept.close();
             checkpoint.discard();
             throw e;
+        } catch (RuntimeException e) {
+            kept.close();
+            checkpoint.close();
+            throw DiskFull.causedBy(e) ? kept.diskFullDuringStudy() : e;
         } finally {
             checkpoint.close();
         }
         Recommendation rec = Recommender.of(evidence, DecisionRule.DEFAULT).recommend();
+        var explanation = ExplainRun.explain(loaded, evidence, rec, testOfFeatures, covariates,
+                explain.sensitivity ? inputOptions.readRaw(input) : null, inputOptions.preparation(), nThreads);
         var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine(), nThreads,
-                (System.nanoTime() - started) / 1e9);
-        try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force)) {
+                (System.nanoTime() - started) / 1e9, explanation);
+        try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force, reads)) {
             outputs.writeInto(dir);
             dir.commit();
+        } catch (RuntimeException e) {
+            kept.close();
+            throw DiskFull.causedBy(e) ? kept.diskFullDuringResults() : e;
         }
+        kept.close();
         checkpoint.discard();
         if (!quiet) {
             System.out.println(outputs.headline());

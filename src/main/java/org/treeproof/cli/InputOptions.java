@@ -106,6 +106,14 @@ public final class InputOptions {
      *                        apply to a distance table
      */
     public LoadedInput load(Path input) {
+        try {
+            return loadAsGiven(input);
+        } catch (InputException e) {
+            throw InputHints.explain(input, e, this);
+        }
+    }
+
+    private LoadedInput loadAsGiven(Path input) {
         if (distances) {
             List<String> notForDistances = new ArrayList<>();
             addIf(notForDistances, samplesInColumns, "--samples-in-columns");
@@ -125,6 +133,11 @@ public final class InputOptions {
         DataTableReader reader = new DataTableReader(delimiter, samplesInColumns, noIds);
         DataTable table = isStandardInput(input) ? reader.read(STANDARD_INPUT, System.in) : reader.read(input);
         return LoadedInput.of(table, preparation.apply(table.matrix(), table.locator()));
+    }
+
+    /** Reads {@code input}, a data table, as it is (before any preparation), for rerunning other preparations. */
+    public org.treeproof.data.DataMatrix readRaw(Path input) {
+        return new DataTableReader(delimiter, samplesInColumns).read(input).matrix();
     }
 
     /**

@@ -9,7 +9,7 @@ import picocli.CommandLine.Command;
 @Command(name = "treeproof", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Hierarchical clustering with resampling evidence for the number of clusters.",
         subcommands = {TreeCommand.class, AssessCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
-public final class Main implements Runnable {
+public final class Main implements java.util.concurrent.Callable<Integer> {
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -29,7 +29,8 @@ public final class Main implements Runnable {
 
     /** Runs the command line and returns the exit code (see {@link ExitCodes}). */
     public static int run(String... args) {
-        return new CommandLine(new Main()).setParameterExceptionHandler(Main::onBadUsage)
+        return new CommandLine(new Main()).registerConverter(Integer.class, Main::wholeNumber)
+                .setParameterExceptionHandler(Main::onBadUsage)
                 .setExecutionExceptionHandler(Main::onFailure).execute(args);
     }
 
@@ -44,6 +45,11 @@ public final class Main implements Runnable {
             err.println("treeproof: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
+        if (org.treeproof.io.DiskFull.causedBy(e)) {
+            err.println("treeproof: no space left on device; free some space and run the command again (" + e.getMessage()
+                    + ")");
+            return ExitCodes.BAD_INPUT;
+        }
         if (e instanceof NotEnoughMemoryException) {
             err.println("treeproof: " + e.getMessage());
             return ExitCodes.NOT_ENOUGH_MEMORY;
@@ -56,14 +62,39 @@ public final class Main implements Runnable {
     }
 
     private static int onBadUsage(CommandLine.ParameterException e, String[] args) {
-        e.getCommandLine().getErr().println("treeproof: " + e.getMessage()
-                + " (see 'treeproof " + e.getCommandLine().getCommandName() + " --help')");
+        String message = e.getMessage();
+        if (message.contains(OUT_OF_RANGE) && e.getArgSpec() instanceof CommandLine.Model.OptionSpec o) {
+            String range = StudyOptions.rangeOf(o.longestName());
+            message = "Invalid value for option '" + o.longestName() + "': '" + e.getValue() + "' is " + (range == null
+                    ? "too large (at most " + Integer.MAX_VALUE + ")" : "out of range; " + range);
+        }
+        e.getCommandLine().getErr().println("treeproof: " + message
+                + " (see '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help')");
         return ExitCodes.BAD_INPUT;
     }
 
+    private static final String OUT_OF_RANGE = "is out of the range of whole numbers";
+
+    /** A whole number; one beyond int's range is said to be out of range (the option's own range is added). */
+    private static Integer wholeNumber(String value) {
+        String v = value.strip();
+        try {
+            return Integer.valueOf(v);
+        } catch (NumberFormatException e) {
+            try {
+                new java.math.BigInteger(v);
+            } catch (NumberFormatException notWhole) {
+                throw new CommandLine.TypeConversionException("'" + value + "' is not a whole number");
+            }
+            throw new CommandLine.TypeConversionException("'" + value + "' " + OUT_OF_RANGE);
+        }
+    }
+
+    /** Without a command: the usage on stderr and exit 2, since nothing was done. */
     @Override
-    public void run() {
-        spec.commandLine().usage(spec.commandLine().getOut());
+    public Integer call() {
+        spec.commandLine().usage(spec.commandLine().getErr());
+        return ExitCodes.BAD_INPUT;
     }
 
     /** The version from the jar's manifest, or "dev" when run from classes. */

@@ -57,13 +57,58 @@ final class StudyOptions {
     @Option(names = "--null-replicates", paramLabel = "B", description = "Replicates per null data set (default: 10, sized so that a 2000-sample study stays within a minute on two cores).")
     Integer nullReplicates;
 
+    @Option(names = "--min-cluster-size", paramLabel = "M", description = "Fewest samples a cluster holds; samples "
+            + "on smaller branches are reported as outliers, not clusters (default: the larger of 5 and 1% of the "
+            + "samples; 1 turns outliers off).")
+    Integer minClusterSize;
+
     @Option(names = "--seed", paramLabel = "S", description = "Master seed; every random draw derives from it "
             + "(default: 1).")
     Long seed;
 
     /**
-     * The settings for a data table, every problem reported at once.
+     * The valid range of a whole-number option, in the words of the rule that owns it ("--replicates must be between
+     * 2 and 10000"), or null when the option has no upper limit; for a value too large to be read at all.
      */
+    static String rangeOf(String option) {
+        if (option.equals("--threads")) {
+            try {
+                Threads.resolve(Integer.MAX_VALUE, option);
+            } catch (InputException e) {
+                return e.getMessage().replaceFirst(", got .*$", "");
+            }
+            return null;
+        }
+        StudySettings.Builder b = StudySettings.builder();
+        switch (option) {
+            case "--max-k" -> b.maxK(Integer.MAX_VALUE);
+            case "--replicates" -> b.replicates(Integer.MAX_VALUE);
+            case "--null-replicates" -> b.nullReplicates(Integer.MAX_VALUE);
+            case "--reference-sets" -> b.referenceSets(Integer.MAX_VALUE);
+            case "--null-sets" -> b.nullSets(Integer.MAX_VALUE);
+            default -> {
+                return null;
+            }
+        }
+        try {
+            b.build();
+            return null;
+        } catch (InputException e) {
+            for (String part : e.getMessage().split("; ")) {
+                if (part.startsWith(option + " ")) {
+                    return part.replaceFirst(", got .*$", "");
+                }
+            }
+            return null;
+        }
+    }
+
+    /** Whether the user gave --max-k (otherwise the default applies). */
+    boolean maxKGiven() {
+        return maxK != null;
+    }
+
+    /** The settings for a data table, every problem reported at once. */
     StudySettings settings() {
         return settings(false);
     }
@@ -134,6 +179,9 @@ final class StudyOptions {
         }
         if (nullReplicates != null) {
             b.nullReplicates(nullReplicates);
+        }
+        if (minClusterSize != null) {
+            b.minClusterSize(minClusterSize);
         }
         if (seed != null) {
             b.seed(seed);

@@ -11,7 +11,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.treeproof.data.Preparation;
+import org.treeproof.chart.ExplainCharts;
+import org.treeproof.explain.Explanation;
 import org.treeproof.io.CsvOutputs;
+import org.treeproof.io.ExplainCsv;
 import org.treeproof.io.LoadedInput;
 import org.treeproof.io.OutputDirectory;
 import org.treeproof.io.SummaryJson;
@@ -37,9 +40,10 @@ final class StudyOutputs {
     private final String[] commandLine;
     private final int threads;
     private final double seconds;
+    private final Explanation explanation;
 
     StudyOutputs(LoadedInput loaded, Evidence evidence, Recommendation rec, String[] classes, Path labelsFile,
-            String[] commandLine, int threads, double seconds) {
+            String[] commandLine, int threads, double seconds, Explanation explanation) {
         this.loaded = loaded;
         this.evidence = evidence;
         this.rec = rec;
@@ -48,6 +52,7 @@ final class StudyOutputs {
         this.commandLine = commandLine.clone();
         this.threads = threads;
         this.seconds = seconds;
+        this.explanation = explanation;
     }
 
     LabelComparison labels() {
@@ -61,8 +66,31 @@ final class StudyOutputs {
     }
 
     List<String> preparationSteps() {
-        return loaded.preparation().map(r -> r.steps())
-                .orElse(List.of(String.format(Locale.ROOT, "Read a distance table of %d samples.", loaded.samples())));
+        var steps = new ArrayList<String>(loaded.preparation().map(r -> r.steps())
+                .orElse(List.of(String.format(Locale.ROOT, "Read a distance table of %d samples.", loaded.samples()))));
+        steps.addAll(loneFeatureWarnings(loaded));
+        return steps;
+    }
+
+    /** A warning per feature that alone puts a sample far out (at most five named, then a count). */
+    static List<String> loneFeatureWarnings(LoadedInput loaded) {
+        var flags = loaded.matrix().map(org.treeproof.data.LoneFeatureOutliers::of).orElse(List.of());
+        var out = new ArrayList<String>();
+        for (int i = 0; i < Math.min(5, flags.size()); i++) {
+            var f = flags.get(i);
+            out.add(String.format(Locale.ROOT, "Warning: feature %s alone puts sample %s %.0f standard deviations "
+                    + "from its mean%s, which can split that sample off as an outlier whatever the other features "
+                    + "say; a nearly constant feature scaled to unit variance does this. To avoid it, drop such "
+                    + "features (--top-variable keeps the most variable ones) or use --scale center or none.",
+                    f.feature(), f.sample(), f.sds(), f.samples() > 1
+                            ? String.format(Locale.ROOT, " (%d samples lie beyond %.0f)", f.samples(),
+                                    org.treeproof.data.LoneFeatureOutliers.LIMIT) : ""));
+        }
+        if (flags.size() > 5) {
+            out.add(String.format(Locale.ROOT, "Warning: %d more features each put a sample more than %.0f standard "
+                    + "deviations from their mean.", flags.size() - 5, org.treeproof.data.LoneFeatureOutliers.LIMIT));
+        }
+        return out;
     }
 
     List<SummaryJson.Option> inputOptions() {
@@ -81,13 +109,14 @@ final class StudyOutputs {
     SummaryJson summary(LabelComparison labels) {
         var provenance = new SummaryJson.Provenance("treeproof", Main.toolVersion(), loaded.source().path(),
                 loaded.source().sha256(), preparationSteps(), inputOptions(), labelsSummary(labels));
-        return new SummaryJson(evidence, rec, provenance);
+        return new SummaryJson(evidence, rec, provenance, new org.treeproof.report.ReasonWords(rec.rule())::word,
+                explanation);
     }
 
     RunInfo runInfo() {
         return new RunInfo("treeproof", Main.toolVersion(), loaded.source().path(), loaded.source().sha256(),
                 evidence.samples(), evidence.features(), preparationSteps(), evidence.settings().metric().id(),
-                String.join(" ", commandLine), evidence.settings().seed(), threads, seconds,
+                ShellWords.join(commandLine), evidence.settings().seed(), threads, seconds,
                 DateTimeFormatter.ISO_OFFSET_DATE_TIME.format(ZonedDateTime.now().withNano(0)));
     }
 
@@ -97,14 +126,19 @@ final class StudyOutputs {
         dir.write("summary.json", summary(labels).toBytes());
         dir.write("clusters.csv", CsvOutputs.clusters(evidence, rec).getBytes(StandardCharsets.UTF_8));
         dir.write("scores.csv", CsvOutputs.scores(evidence, rec).getBytes(StandardCharsets.UTF_8));
-        ReportModel model = ReportModel.of(evidence, rec, runInfo(), labels);
+        writeExplanation(dir);
+        ReportModel model = ReportModel.of(evidence, rec, runInfo(), labels, explanation);
         dir.write("methods.md", MethodsParagraph.of(model).render().getBytes(StandardCharsets.UTF_8));
         List<EmbeddedImage> images = new ArrayList<>();
         try {
             Path charts = dir.file("charts/.keep").getParent();
             Files.deleteIfExists(charts.resolve(".keep"));
             DataMatrix data = loaded.matrix().orElse(null);
-            for (Figure f : StudyCharts.drawAll(evidence, rec, data, charts, threads)) {
+            var figures = new ArrayList<>(StudyCharts.drawAll(evidence, rec, data, charts, threads));
+            if (explanation != null) {
+                figures.addAll(ExplainCharts.drawAll(explanation, charts));
+            }
+            for (Figure f : figures) {
                 String png = f.files().stream().filter(n -> n.endsWith(".png")).findFirst().orElse(null);
                 if (png != null && model.figure(f.id()).isPresent()) {
                     images.add(new EmbeddedImage(f.id(), "image/png", Files.readAllBytes(charts.resolve(png))));
@@ -116,12 +150,34 @@ final class StudyOutputs {
         dir.write("report.html", HtmlReport.of(model, images).render().getBytes(StandardCharsets.UTF_8));
     }
 
+    /** features.csv, and covariates.csv and sensitivity.csv when they were asked for and there were clusters. */
+    private void writeExplanation(OutputDirectory dir) {
+        if (explanation == null) {
+            return;
+        }
+        if (explanation.features() != null) {
+            dir.write("features.csv", ExplainCsv.features(explanation.features()).getBytes(StandardCharsets.UTF_8));
+        }
+        if (explanation.covariates() != null && explanation.solution() != null) {
+            dir.write("covariates.csv", ExplainCsv.covariates(explanation.covariates())
+                    .getBytes(StandardCharsets.UTF_8));
+        }
+        if (explanation.sensitivity() != null) {
+            dir.write("sensitivity.csv", ExplainCsv.sensitivity(explanation.sensitivity())
+                    .getBytes(StandardCharsets.UTF_8));
+        }
+    }
+
     /** One line for the terminal: the verdict and the decision. */
     String headline() {
         return rec.k() == 1
-                ? "treeproof: unsupported: no convincing cluster structure (k = 1)"
+                ? "treeproof: unsupported: no convincing cluster structure (k = 1" + (rec.outlierCount() == 0 ? ")"
+                        : String.format(Locale.ROOT, ", %d far sample%s set aside as outlier%s)", rec.outlierCount(),
+                                rec.outlierCount() == 1 ? "" : "s", rec.outlierCount() == 1 ? "" : "s"))
                 : String.format(Locale.ROOT, "treeproof: %s: k = %d with %s linkage (cut height %.4g)",
-                        rec.verdict().id(), rec.k(), rec.linkage().id(), rec.cutHeight().chosen());
+                        rec.verdict().id(), rec.k(), rec.linkage().id(), rec.cutHeight().chosen())
+                        + (rec.outlierCount() == 0 ? "" : String.format(Locale.ROOT, ", %d outlier%s set aside",
+                                rec.outlierCount(), rec.outlierCount() == 1 ? "" : "s"));
     }
 
     int threads() {

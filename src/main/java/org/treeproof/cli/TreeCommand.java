@@ -8,8 +8,11 @@ import java.io.OutputStream;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.function.DoubleSupplier;
+import org.treeproof.data.DataMatrix;
 import org.treeproof.distance.CondensedDistances;
 import org.treeproof.distance.Metric;
+import org.treeproof.distance.OwnedDistances;
 import org.treeproof.partition.Partition;
 import org.treeproof.tree.Linkage;
 import org.treeproof.tree.MergeTree;
@@ -59,29 +62,49 @@ final class TreeCommand implements Callable<Integer> {
         if (!inputOptions.distances()) {
             inputOptions.fitTo(Metric.parse(metric));
         }
+        InputHints.requireReadable(input, "INPUT");
         var loaded = inputOptions.load(input);
         if (loaded.samples() > CondensedDistances.MAX_ITEMS) {
             throw new org.treeproof.data.InputException(input + ": " + loaded.samples() + " samples; the tree command "
                     + "holds at most " + CondensedDistances.MAX_ITEMS + " (their pairwise distances must fit one array)");
         }
-        CondensedDistances d;
+        // Only the cophenetic correlation needs the distances once the tree is built. For a data table they are
+        // computed again for it, row band by row band, and the linkage works in place on the one matrix; a
+        // distance table is held, and the linkage works on a copy.
+        MergeTree tree;
         String metricId;
+        DoubleSupplier cophenetic;
         if (loaded.isDistanceTable()) {
-            d = loaded.distances().orElseThrow();
+            CondensedDistances d = loaded.distances().orElseThrow();
             metricId = "precomputed";
             if (link.requiresEuclidean()) {
                 System.err.println("treeproof: note: " + link.id() + " linkage assumes the given distances are Euclidean");
             }
+            org.treeproof.study.Magnitudes.requireWithinLimit(loaded.sampleIds(), d);
+            checkCuts(d.size());
+            tree = link.cluster(d);
+            cophenetic = () -> tree.copheneticCorrelation(d);
         } else {
             Metric m = Metric.parse(metric);
             if (link.requiresEuclidean() && !m.euclidean()) {
                 throw new org.treeproof.data.InputException("--linkage " + link.id()
                         + " needs --metric euclidean (it is defined on Euclidean distances), not " + m.id());
             }
-            d = m.compute(loaded.matrix().orElseThrow(), Threads.resolve(threads, "--threads"));
+            DataMatrix data = loaded.matrix().orElseThrow();
+            org.treeproof.study.Magnitudes.requireWithinLimit(data);
+            int kernelThreads = Threads.resolve(threads, "--threads");
+            OwnedDistances d = m.computeOwned(data, kernelThreads);
+            checkCuts(d.size());
+            double meanDistance = MergeTree.meanDistance(d);
+            tree = link.clusterInPlace(d);
+            cophenetic = () -> tree.copheneticCorrelation(meanDistance, m.rows(data, kernelThreads));
             metricId = m.id();
         }
-        int n = d.size();
+        write(System.out, loaded.sampleIds(), metricId, link, tree, cophenetic);
+        return ExitCodes.OK;
+    }
+
+    private void checkCuts(int n) {
         for (int k : cutK) {
             if (k < 1 || k > n) {
                 throw new org.treeproof.data.InputException("--cut-k " + k + " is outside 1.." + n
@@ -91,13 +114,10 @@ final class TreeCommand implements Callable<Integer> {
         if (cutHeight != null && !(cutHeight >= 0) ) {
             throw new org.treeproof.data.InputException("--cut-height must be a non-negative number, got " + cutHeight);
         }
-        MergeTree tree = link.cluster(d);
-        write(System.out, loaded.sampleIds(), metricId, link, tree, d);
-        return ExitCodes.OK;
     }
 
     private void write(OutputStream out, List<String> ids, String metricId, Linkage link, MergeTree tree,
-            CondensedDistances d) throws IOException {
+            DoubleSupplier cophenetic) throws IOException {
         try (JsonGenerator g = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)) {
             g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
             g.writeStartObject();
@@ -119,7 +139,7 @@ final class TreeCommand implements Callable<Integer> {
                 g.writeEndObject();
             }
             g.writeEndArray();
-            double cc = tree.leaves() > 2 ? tree.copheneticCorrelation(d) : Double.NaN;
+            double cc = tree.leaves() > 2 ? cophenetic.getAsDouble() : Double.NaN;
             if (Double.isFinite(cc)) {
                 g.writeNumberField("copheneticCorrelation", cc);
             } else {

@@ -15,7 +15,7 @@ import java.util.Objects;
  * <p>Serializable through a proxy that is checked again when read; a study ships distances only when it has
  * no data table to compute them from.
  */
-public final class CondensedDistances implements Serializable {
+public final class CondensedDistances implements Serializable, CondensedRows {
     private static final long serialVersionUID = 1L;
 
     private final int n;
@@ -38,6 +38,21 @@ public final class CondensedDistances implements Serializable {
 
     /** Takes ownership of {@code condensed} without copying; only for code in this package that made it. */
     static CondensedDistances wrap(int n, double[] condensed) {
+        check(n, condensed);
+        return new CondensedDistances(n, condensed);
+    }
+
+    /** Takes ownership of an array already {@linkplain #check checked}, without looking at it again. */
+    static CondensedDistances trusted(int n, double[] condensed) {
+        return new CondensedDistances(n, condensed);
+    }
+
+    /**
+     * Checks a condensed array over {@code n} items: its length, and every value finite and non-negative.
+     *
+     * @throws IllegalArgumentException naming the first violation
+     */
+    static void check(int n, double[] condensed) {
         if (n < 1) {
             throw new IllegalArgumentException("need at least one item, got " + n);
         }
@@ -52,7 +67,6 @@ public final class CondensedDistances implements Serializable {
                         + "; distances must be finite and non-negative");
             }
         }
-        return new CondensedDistances(n, condensed);
     }
 
     /** The most items a condensed matrix holds: n(n-1)/2 pairs must fit one Java array. */
@@ -94,6 +108,19 @@ public final class CondensedDistances implements Serializable {
         return values[t];
     }
 
+    /** Each row is copied into a buffer of the pass, so the visitor never sees this matrix's own array. */
+    @Override
+    public void forEachRow(RowVisitor visitor) {
+        double[] row = new double[Math.max(0, n - 1)];
+        int t = 0;
+        for (int i = 0; i < n - 1; i++) {
+            int len = n - i - 1;
+            System.arraycopy(values, t, row, 0, len);
+            visitor.row(i, row, 0);
+            t += len;
+        }
+    }
+
     /** A fresh copy of the condensed array (for algorithms that update distances in place). */
     public double[] toCondensedArray() {
         return values.clone();
@@ -109,18 +136,35 @@ public final class CondensedDistances implements Serializable {
      * item is at distance 0 from its copy. Never recomputes a distance.
      */
     public CondensedDistances gather(int[] items) {
+        return new CondensedDistances(items.length, gatherValues(items));
+    }
+
+    /** {@link #gather} as a matrix the caller owns and may give up to a linkage that works in place. */
+    public OwnedDistances gatherOwned(int[] items) {
+        return OwnedDistances.trusted(items.length, gatherValues(items));
+    }
+
+    private double[] gatherValues(int[] items) {
         int m = items.length;
-        double[] out = new double[length(m)];
-        int t = 0;
+        // (i, j) with i < j is at base[i] + j: one addition per pair instead of the index arithmetic
+        int[] base = new int[m];
         for (int a = 0; a < m; a++) {
             int i = items[a];
             Objects.checkIndex(i, n);
+            base[a] = (int) ((long) n * i - (long) i * (i + 1) / 2 - i - 1);
+        }
+        double[] out = new double[length(m)];
+        double[] v = values;
+        int t = 0;
+        for (int a = 0; a < m; a++) {
+            int i = items[a];
+            int bi = base[a];
             for (int b = a + 1; b < m; b++) {
                 int j = items[b];
-                out[t++] = i == j ? 0.0 : values[index(n, i, j)];
+                out[t++] = i < j ? v[bi + j] : i > j ? v[base[b] + i] : 0.0;
             }
         }
-        return new CondensedDistances(m, out);
+        return out;
     }
 
     /** Bytes needed to hold a condensed matrix over {@code n} items. */

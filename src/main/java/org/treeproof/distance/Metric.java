@@ -194,6 +194,10 @@ public enum Metric {
      */
     public CondensedDistances compute(DataMatrix data, int[] features, int threads) {
         Objects.requireNonNull(data, "data");
+        return run(data, checkedFeatures(data, features), threads);
+    }
+
+    private static int[] checkedFeatures(DataMatrix data, int[] features) {
         Objects.requireNonNull(features, "features");
         if (features.length == 0) {
             throw new IllegalArgumentException("no features selected");
@@ -201,7 +205,7 @@ public enum Metric {
         for (int f : features) {
             Objects.checkIndex(f, data.features());
         }
-        return run(data, features.clone(), threads);
+        return features.clone();
     }
 
     /**
@@ -220,7 +224,82 @@ public enum Metric {
         return compute(new DataMatrix(List.of("x", "y"), names, both), 1).at(0);
     }
 
+    /**
+     * Distances between all samples over all features, as a matrix the caller owns and may give up to a linkage
+     * that works in place: the same values as {@link #compute(DataMatrix, int)}, without a second copy.
+     *
+     * @throws InputException as for {@link #compute(DataMatrix, int)}
+     */
+    public OwnedDistances computeOwned(DataMatrix data, int threads) {
+        Objects.requireNonNull(data, "data");
+        return OwnedDistances.wrap(data.samples(), kernel(data, null, threads));
+    }
+
+    /**
+     * {@link #compute(DataMatrix, int[], int)} as a matrix the caller owns (see {@link #computeOwned(DataMatrix, int)}).
+     */
+    public OwnedDistances computeOwned(DataMatrix data, int[] features, int threads) {
+        Objects.requireNonNull(data, "data");
+        return OwnedDistances.wrap(data.samples(), kernel(data, checkedFeatures(data, features), threads));
+    }
+
+    /**
+     * The distances between all samples over all features, computed again band by band whenever they are read:
+     * each pass holds about {@value #BAND_VALUES} values at a time instead of the n(n-1)/2 of the matrix, and
+     * gives the same bits as {@link #compute(DataMatrix, int)}, since every pair is computed on its own in
+     * feature order. A pass costs as much time as computing the matrix. The data are checked at once, as by
+     * {@code compute}; {@code data} must not change while the rows are in use.
+     *
+     * @param threads worker threads for each band, at least 1
+     * @throws InputException as for {@link #compute(DataMatrix, int)}
+     */
+    public CondensedRows rows(DataMatrix data, int threads) {
+        return rows(data, threads, BAND_VALUES);
+    }
+
+    /** {@link #rows(DataMatrix, int)} holding about {@code bandValues} values at a time (at least one row). */
+    CondensedRows rows(DataMatrix data, int threads, int bandValues) {
+        Objects.requireNonNull(data, "data");
+        checkArguments(data, threads);
+        RowPreparation.Prepared prepared = preparation.prepare(new RowSource.Columns(data, null), data, id);
+        int n = data.samples();
+        Metric metric = this;
+        return new CondensedRows() {
+            @Override
+            public int size() {
+                return n;
+            }
+
+            @Override
+            public void forEachRow(RowVisitor visitor) {
+                double[] band = new double[Math.min(CondensedDistances.length(n), Math.max(bandValues, n))];
+                for (int from = 0; from < n - 1; ) {
+                    int to = from;
+                    while (to < n - 1 && PairwiseKernel.rowStart(n, to + 1) - PairwiseKernel.rowStart(n, from)
+                            <= band.length) {
+                        to++;
+                    }
+                    PairwiseKernel.Result r = PairwiseKernel.band(prepared.rows(), metric, prepared.perRow(), from,
+                            to, band, threads);
+                    checkFinite(data, r.firstNonFinite());
+                    int base = PairwiseKernel.rowStart(n, from);
+                    for (int i = from; i < to; i++) {
+                        visitor.row(i, band, PairwiseKernel.rowStart(n, i) - base);
+                    }
+                    from = to;
+                }
+            }
+        };
+    }
+
+    /** Values a pass of {@link #rows} holds at a time, at least one row (4 Mi values, 32 MiB). */
+    static final int BAND_VALUES = 1 << 22;
+
     private CondensedDistances run(DataMatrix data, int[] features, int threads) {
+        return CondensedDistances.wrap(data.samples(), kernel(data, features, threads));
+    }
+
+    private void checkArguments(DataMatrix data, int threads) {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be at least 1, got " + threads);
         }
@@ -230,14 +309,22 @@ public enum Metric {
         if (data.features() == 0) {
             throw new InputException("no features to compute " + id + " distances from");
         }
+    }
+
+    private double[] kernel(DataMatrix data, int[] features, int threads) {
+        checkArguments(data, threads);
         RowPreparation.Prepared prepared = preparation.prepare(new RowSource.Columns(data, features), data, id);
         PairwiseKernel.Result result = PairwiseKernel.run(prepared.rows(), this, prepared.perRow(), threads);
-        if (result.firstNonFinite() != Long.MAX_VALUE) {
-            int[] pair = pairAt(data.samples(), result.firstNonFinite());
+        checkFinite(data, result.firstNonFinite());
+        return result.condensed();
+    }
+
+    private void checkFinite(DataMatrix data, long firstNonFinite) {
+        if (firstNonFinite != Long.MAX_VALUE) {
+            int[] pair = pairAt(data.samples(), firstNonFinite);
             throw new InputException("the " + id + " distance between samples '" + data.sampleIds().get(pair[0])
                     + "' and '" + data.sampleIds().get(pair[1]) + "' is too large to represent; rescale the data");
         }
-        return CondensedDistances.wrap(data.samples(), result.condensed());
     }
 
     /** The pair (i, j), i < j, at condensed position {@code t}; only for messages, so a linear walk will do. */

@@ -32,20 +32,36 @@ final class PairwiseKernel {
     private final double[] perRow;
     private final int n;
     private final int m;
+    /** The band of rows computed: {@code rowFrom <= i < rowTo}, all {@code j > i}. */
+    private final int rowFrom;
+    private final int rowTo;
+    /** The condensed position of the band's first value, which goes to {@code out[0]}. */
+    private final int base;
     private final double[] out;
+    private final int firstTask;
     private final int tasks;
     private final AtomicInteger nextTask = new AtomicInteger();
     /** Smallest condensed index whose value is not finite, or Long.MAX_VALUE. */
     private final AtomicLong firstNonFinite = new AtomicLong(Long.MAX_VALUE);
 
-    private PairwiseKernel(RowSource rows, Metric metric, double[] perRow) {
+    private PairwiseKernel(RowSource rows, Metric metric, double[] perRow, int rowFrom, int rowTo, double[] out) {
         this.rows = rows;
         this.metric = metric;
         this.perRow = perRow;
         this.n = rows.rows();
         this.m = rows.width();
-        this.out = new double[CondensedDistances.length(n)];
-        this.tasks = (n + BLOCK_J - 1) / BLOCK_J;
+        this.rowFrom = rowFrom;
+        this.rowTo = rowTo;
+        this.base = rowStart(n, rowFrom);
+        this.out = out;
+        // column blocks holding some j > rowFrom; none when the band is empty
+        this.firstTask = rowFrom < rowTo ? (rowFrom + 1) / BLOCK_J : 0;
+        this.tasks = rowFrom < rowTo ? (n + BLOCK_J - 1) / BLOCK_J : 0;
+    }
+
+    /** The condensed position of pair {@code (i, i+1)}; {@code n(n-1)/2} for {@code i = n-1}. */
+    static int rowStart(int n, int i) {
+        return (int) ((long) n * i - (long) i * (i + 1) / 2);
     }
 
     /**
@@ -58,8 +74,23 @@ final class PairwiseKernel {
 
     /** Computes all pairs of {@code rows} with {@code threads} threads (1 runs in the caller's thread). */
     static Result run(RowSource rows, Metric metric, double[] perRow, int threads) {
-        PairwiseKernel k = new PairwiseKernel(rows, metric, perRow);
-        int workers = Math.max(1, Math.min(threads, k.tasks));
+        int n = rows.rows();
+        return band(rows, metric, perRow, 0, Math.max(0, n - 1), new double[CondensedDistances.length(n)], threads);
+    }
+
+    /**
+     * Computes rows {@code rowFrom <= i < rowTo} of the condensed matrix (every {@code j > i}) into
+     * {@code out[0 ..]}, in the condensed order: the same bits as those positions of {@link #run}. The
+     * position of the first non-finite value, if any, is its position in the whole matrix.
+     */
+    static Result band(RowSource rows, Metric metric, double[] perRow, int rowFrom, int rowTo, double[] out,
+            int threads) {
+        PairwiseKernel k = new PairwiseKernel(rows, metric, perRow, rowFrom, rowTo, out);
+        if (out.length < rowStart(k.n, rowTo) - k.base) {
+            throw new IllegalArgumentException("band of " + out.length + " values too short for rows " + rowFrom
+                    + ".." + (rowTo - 1));
+        }
+        int workers = Math.max(1, Math.min(threads, k.tasks - k.firstTask));
         if (workers == 1) {
             k.new Worker().call();
         } else {
@@ -112,7 +143,7 @@ final class PairwiseKernel {
         @Override
         public Void call() {
             int b;
-            while ((b = nextTask.getAndIncrement()) < tasks) {
+            while ((b = nextTask.getAndIncrement()) < tasks - firstTask) {
                 runTask(tasks - 1 - b);
             }
             return null;
@@ -127,8 +158,9 @@ final class PairwiseKernel {
                     block[k][jj] = row[k];
                 }
             }
-            int iEnd = j0 + bj - 1; // row samples i pair with j > i, so the last column sample has none
-            for (int i0 = 0; i0 < iEnd; i0 += BLOCK_I) {
+            // row samples i pair with j > i, so the last column sample has none
+            int iEnd = Math.min(j0 + bj - 1, rowTo);
+            for (int i0 = rowFrom; i0 < iEnd; i0 += BLOCK_I) {
                 int bi = Math.min(BLOCK_I, iEnd - i0);
                 for (int ii = 0; ii < bi; ii++) {
                     rows.load(i0 + ii, group, ii * m, scratch);
@@ -172,12 +204,12 @@ final class PairwiseKernel {
                 }
                 double[] a = acc[ii];
                 double rowI = perRow == null ? 0 : perRow[i];
-                int t = CondensedDistances.index(n, i, jStart);
+                int t = CondensedDistances.index(n, i, jStart) - base;
                 for (int j = jStart; j < jEnd; j++, t++) {
                     double v = metric.finish(a[j - j0], rowI, perRow == null ? 0 : perRow[j], m);
                     out[t] = v;
                     if (!(v <= Double.MAX_VALUE)) {
-                        long at = t;
+                        long at = (long) t + base;
                         firstNonFinite.accumulateAndGet(at, Math::min);
                     }
                 }

@@ -42,6 +42,8 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
     private final Map<Stage, DataOutputStream> writers = new EnumMap<>(Stage.class);
     private final long faultAfter = Long.getLong("treeproof.faultAfterReplicates", -1L);
     private long replicatesWritten;
+    /** Records on disk: those loaded on resume and those appended since; read by an interrupt notice. */
+    private volatile long recordsWritten;
 
     private CheckpointFile(Path dir, boolean load) throws IOException {
         this.dir = dir;
@@ -50,6 +52,17 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
             keptRows.put(s, load ? readRows(dir.resolve(fileOf(s))) : List.of());
         }
         replicatesWritten = keptReplicates.size();
+        recordsWritten = replicatesWritten + keptRows.values().stream().mapToLong(List::size).sum();
+    }
+
+    /** How many finished pieces of work (replicates, null sets, reference sets) the checkpoint holds. */
+    public long recordsKept() {
+        return recordsWritten;
+    }
+
+    /** Where the checkpoint is kept. */
+    public Path location() {
+        return dir;
     }
 
     /** The checkpoint directory that belongs to output directory {@code out}. */
@@ -82,7 +95,8 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
             Files.writeString(dir.resolve(FINGERPRINT), fingerprint + "\n", StandardCharsets.UTF_8);
             return new CheckpointFile(dir, false);
         } catch (IOException e) {
-            throw new InputException("--out " + out + ": cannot keep a checkpoint beside it (" + e.getMessage() + ")");
+            throw new InputException("--out " + out + ": cannot keep a checkpoint beside it (" + OutputGuard.describe(e)
+                    + ")");
         }
     }
 
@@ -163,12 +177,14 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
                 w = new DataOutputStream(new BufferedOutputStream(f, 1 << 16));
                 writers.put(stage, w);
             }
+            DiskFull.beforeCheckpointRecord(recordsWritten);
             var crc = new CRC32();
             crc.update(payload);
             w.writeInt(payload.length);
             w.write(payload);
             w.writeInt((int) crc.getValue());
             w.flush();
+            recordsWritten++;
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the checkpoint in " + dir, e);
         }

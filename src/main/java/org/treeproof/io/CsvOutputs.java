@@ -15,7 +15,6 @@ import org.treeproof.study.KEvidence;
 import org.treeproof.study.LinkageEvidence;
 import org.treeproof.study.NullStability;
 import org.treeproof.study.Recommendation;
-import org.treeproof.study.Recommender;
 
 /**
  * Writes {@code clusters.csv} (one row per sample, the recommended solution) and {@code scores.csv} (one row
@@ -30,43 +29,62 @@ public final class CsvOutputs {
     public static final List<String> CLUSTER_COLUMNS = List.of("sample", "cluster", "stability", "silhouette", "flag");
 
     /** The columns of {@code scores.csv}. */
-    public static final List<String> SCORE_COLUMNS = List.of("linkage", "k", "cutHeightLow", "cutHeightHigh",
-            "cutHeightChosen", "tieDependent", "silhouette", "calinskiHarabasz", "daviesBouldin", "dunn", "gap", "gapSE",
-            "ariMean", "ariSD", "ariLow", "ariHigh", "pac", "nullAriMean", "nullAriLow", "nullAriHigh", "nullPacMean",
-            "nullSilhouetteMean", "pValueAri", "pValuePac", "pValueSilhouette", "pValueCombined", "smallestJaccard", "doubtfulClusters", "dissolvedClusters", "verdict");
+    public static final List<String> SCORE_COLUMNS = columns();
 
-    /** {@code clusters.csv}: per sample, its cluster in the recommended solution and its flags. */
+    private static List<String> columns() {
+        var c = new ArrayList<String>(List.of("linkage", "k", "cutHeightLow", "cutHeightHigh", "cutHeightChosen",
+                "tieDependent"));
+        for (org.treeproof.study.Criterion m : org.treeproof.study.Criterion.fitMeasures()) {
+            c.add(m.key());
+        }
+        c.addAll(List.of("gap", "gapSE", "ariMean", "ariSD", "ariLow", "ariHigh", "pac", "nullAriMean", "nullAriSD", "nullPacMean",
+            "nullSilhouetteMean", "nullSilhouetteSD", "excess", "pValueAdjusted", "smallestJaccard", "doubtfulClusters",
+            "dissolvedClusters", "outliers", "verdict"));
+        return List.copyOf(c);
+    }
+
+    /**
+     * {@code clusters.csv}: per sample, its cluster in the recommended solution and its flags, as the
+     * recommendation made them: {@code outlier} (set aside, empty cluster), {@code unstable},
+     * {@code negative-silhouette}.
+     */
     public static String clusters(Evidence evidence, Recommendation r) {
         var rows = new ArrayList<List<String>>();
         int n = evidence.samples();
-        if (r.k() == 1) {
-            for (int i = 0; i < n; i++) {
-                rows.add(List.of(text(evidence.sampleIds().get(i)), "1", "", "", ""));
-            }
-            return csv(CLUSTER_COLUMNS, rows);
+        var flags = new java.util.HashMap<Integer, Recommendation.SampleFlag>();
+        for (Recommendation.SampleFlag f : r.flaggedSamples()) {
+            flags.put(f.sample(), f);
         }
-        KEvidence e = evidence.linkages().stream().filter(le -> le.linkage() == r.linkage()).findFirst()
-                .orElseThrow().at(r.k());
-        double[] st = e.sampleStability();
-        double[] sil = e.sampleSilhouette();
-        double unstable = r.rule().unstableSample();
+        KEvidence e = r.k() == 1 ? null : evidence.linkages().stream().filter(le -> le.linkage() == r.linkage())
+                .findFirst().orElseThrow().at(r.k());
+        double[] st = e == null ? null : e.sampleStability();
+        double[] sil = e == null ? null : e.sampleSilhouette();
         for (int i = 0; i < n; i++) {
-            var flags = new ArrayList<String>();
-            if (st[i] < unstable) {
-                flags.add("unstable");
+            String id = text(evidence.sampleIds().get(i));
+            if (r.clustering().isOutlier(i)) {
+                rows.add(List.of(id, "", "", "", "outlier"));
+                continue;
             }
-            if (sil[i] < 0) {
-                flags.add("negative-silhouette");
+            String cluster = String.valueOf(r.clustering().label(i) + 1);
+            if (e == null) {
+                rows.add(List.of(id, cluster, "", "", ""));
+                continue;
             }
-            rows.add(List.of(text(evidence.sampleIds().get(i)), String.valueOf(e.partition().label(i) + 1), num(st[i]),
-                    num(sil[i]), String.join(";", flags)));
+            var f = flags.get(i);
+            var words = new ArrayList<String>();
+            if (f != null && f.unstable()) {
+                words.add("unstable");
+            }
+            if (f != null && f.negativeSilhouette()) {
+                words.add("negative-silhouette");
+            }
+            rows.add(List.of(id, cluster, num(st[i]), num(sil[i]), String.join(";", words)));
         }
         return csv(CLUSTER_COLUMNS, rows);
     }
 
     /** {@code scores.csv}: every measure for every linkage and k. */
     public static String scores(Evidence evidence, Recommendation r) {
-        Recommender verdicts = Recommender.of(evidence, r.rule());
         var rows = new ArrayList<List<String>>();
         for (LinkageEvidence le : evidence.linkages()) {
             for (KEvidence e : le.byK()) {
@@ -86,10 +104,9 @@ public final class CsvOutputs {
                 row.add(num(e.cutHeight().high()));
                 row.add(num(e.cutHeight().chosen()));
                 row.add(String.valueOf(e.tieDependent()));
-                row.add(num(e.silhouette()));
-                row.add(num(e.calinskiHarabasz()));
-                row.add(num(e.daviesBouldin()));
-                row.add(num(e.dunn()));
+                for (org.treeproof.study.Criterion c : org.treeproof.study.Criterion.fitMeasures()) {
+                    row.add(num(c.of(e)));
+                }
                 row.add(num(e.gap()));
                 row.add(num(e.gapSE()));
                 row.add(num(a.mean()));
@@ -98,18 +115,17 @@ public final class CsvOutputs {
                 row.add(num(a.high()));
                 row.add(num(e.stability().pac()));
                 row.add(ns == null ? "" : num(ns.ariMean()));
-                row.add(ns == null ? "" : num(ns.ariLow()));
-                row.add(ns == null ? "" : num(ns.ariHigh()));
+                row.add(ns == null ? "" : num(ns.ariSD()));
                 row.add(ns == null ? "" : num(ns.pacMean()));
                 row.add(ns == null ? "" : num(ns.silhouetteMean()));
-                row.add(ns == null ? "" : num(ns.pValueAri()));
-                row.add(ns == null ? "" : num(ns.pValuePac()));
-                row.add(ns == null ? "" : num(ns.pValueSilhouette()));
-                row.add(ns == null ? "" : num(ns.pValueCombined()));
+                row.add(ns == null ? "" : num(ns.silhouetteSD()));
+                row.add(ns == null ? "" : num(ns.excess()));
+                row.add(ns == null ? "" : num(ns.pValueAdjusted()));
                 row.add(num(e.worstJaccard()));
                 row.add(String.valueOf(doubtful));
                 row.add(String.valueOf(dissolved));
-                row.add(verdicts.verdictOf(e).id());
+                row.add(String.valueOf(e.outliers()));
+                row.add(r.assessment(le.linkage(), e.k()).verdict().id());
                 rows.add(row);
             }
         }
@@ -135,13 +151,23 @@ public final class CsvOutputs {
         return Double.isFinite(v) ? Double.toString(v) : "";
     }
 
+    /** A minus sign followed by a plain decimal number: a spreadsheet reads it as that number and runs nothing. */
+    private static final java.util.regex.Pattern NEGATIVE_NUMBER =
+            java.util.regex.Pattern.compile("-[0-9]+(\\.[0-9]+)?([eE][-+]?[0-9]+)?");
+
     /**
-     * Neutralises text that a spreadsheet would evaluate: a leading {@code = + - @}, tab or carriage return
-     * gets a leading apostrophe (the OWASP advice on CSV injection). Numbers written by {@link #num} never
-     * pass through here, so negative values stay numbers.
+     * Neutralises text that a spreadsheet would evaluate: a leading {@code =}, {@code +}, {@code @}, tab or
+     * carriage return, or a leading {@code -} that does not start a plain number, gets a leading apostrophe (the
+     * OWASP advice on CSV injection). Ids such as {@code -5} or {@code -0.25e3} stay as they are, so joins in R or
+     * pandas still match; {@code -2+3} or {@code -A1} are guarded. Numbers written by {@link #num} never pass
+     * through here, so negative values stay numbers.
      */
     public static String text(String s) {
-        if (!s.isEmpty() && "=+-@\t\r".indexOf(s.charAt(0)) >= 0) {
+        if (s.isEmpty()) {
+            return s;
+        }
+        char c = s.charAt(0);
+        if ("=+@\t\r".indexOf(c) >= 0 || (c == '-' && !NEGATIVE_NUMBER.matcher(s).matches())) {
             return "'" + s;
         }
         return s;

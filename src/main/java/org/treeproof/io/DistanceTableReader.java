@@ -152,7 +152,7 @@ public final class DistanceTableReader {
             if (!id.equals(ids.get(i))) {
                 throw new InputException(at + "1: row id '" + id + "' does not match column id '" + ids.get(i)
                         + "' (line " + headerLine + ", column " + (i + 2) + "); rows and columns must list the same"
-                        + " ids in the same order" + (ids.contains(id) ? "" : dataTableHint()));
+                        + " ids in the same order");
             }
             rowLines[i] = row.line();
             if (i < n - 1) {
@@ -197,14 +197,6 @@ public final class DistanceTableReader {
                 }
             }
             rows++;
-        }
-
-        /**
-         * A hint for a row id that is no column id at all, as in a data table (sample ids in the rows, feature names
-         * in the header) given with {@code --distances}.
-         */
-        private String dataTableHint() {
-            return rows == 0 ? "; if this is a data table (samples in rows, features in columns), drop --distances" : "";
         }
 
         /** Grows the condensed array as rows arrive, so a wrong file fails before a large allocation. */

@@ -9,6 +9,7 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.util.List;
+import org.treeproof.explain.Explanation;
 import org.treeproof.score.GapResult;
 import org.treeproof.score.ReplicateSummary;
 import org.treeproof.study.ClusterEvidence;
@@ -32,6 +33,8 @@ public final class SummaryJson {
     private final Evidence evidence;
     private final Recommendation recommendation;
     private final Provenance provenance;
+    private final java.util.function.Function<org.treeproof.study.Reason, String> wording;
+    private final Explanation explanation;
 
     /**
      * Where the data came from and how it was prepared.
@@ -60,10 +63,23 @@ public final class SummaryJson {
     public record LabelsSummary(String file, double ari, List<String> classes, int[][] table) {
     }
 
-    public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance) {
+    /**
+     * @param wording the report's sentence for each reason (JSON carries each reason's kind and its sentence;
+     *                the wording has one owner, the report)
+     */
+    public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
+            java.util.function.Function<org.treeproof.study.Reason, String> wording) {
+        this(evidence, recommendation, provenance, wording, null);
+    }
+
+    /** With the explanation of the recommended solution ({@code null} for none): the {@code explain} block. */
+    public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
+            java.util.function.Function<org.treeproof.study.Reason, String> wording, Explanation explanation) {
+        this.wording = wording;
         this.evidence = evidence;
         this.recommendation = recommendation;
         this.provenance = provenance;
+        this.explanation = explanation;
     }
 
     /** The JSON as UTF-8 bytes, pretty-printed, ending with a newline. */
@@ -96,6 +112,9 @@ public final class SummaryJson {
             writeRecommendation(g);
             if (provenance.labels() != null) {
                 writeLabels(g, provenance.labels());
+            }
+            if (explanation != null) {
+                ExplainJson.write(g, explanation);
             }
             g.writeEndObject();
             g.writeRaw('\n');
@@ -143,6 +162,7 @@ public final class SummaryJson {
         g.writeNumberField("high", s.pacHigh());
         g.writeEndObject();
         g.writeNumberField("seed", s.seed());
+        g.writeNumberField("minClusterSize", evidence.minClusterSize());
         for (Option o : provenance.inputOptions()) {
             g.writeStringField(o.name(), o.value());
         }
@@ -173,7 +193,7 @@ public final class SummaryJson {
         }
         g.writeArrayFieldStart("byK");
         for (KEvidence e : le.byK()) {
-            writeK(g, e);
+            writeK(g, e, recommendation.assessment(le.linkage(), e.k()));
         }
         g.writeEndArray();
         g.writeArrayFieldStart("branchSupport");
@@ -214,15 +234,29 @@ public final class SummaryJson {
         g.writeEndObject();
     }
 
-    private static void writeK(JsonGenerator g, KEvidence e) throws IOException {
+    private static void writeK(JsonGenerator g, KEvidence e, org.treeproof.study.Assessment as) throws IOException {
         g.writeStartObject();
         g.writeNumberField("k", e.k());
+        g.writeNumberField("outliers", e.outliers());
+        g.writeNumberField("branches", e.branches());
+        if (as != null) {
+            g.writeStringField("verdict", as.verdict().id());
+            g.writeArrayFieldStart("conditionsMet");
+            for (var c : as.met()) {
+                g.writeString(c.id());
+            }
+            g.writeEndArray();
+            g.writeArrayFieldStart("conditionsFailed");
+            for (var c : as.failed()) {
+                g.writeString(c.id());
+            }
+            g.writeEndArray();
+        }
         cutHeight(g, "cutHeight", e.cutHeight());
         g.writeBooleanField("tieDependent", e.tieDependent());
-        number(g, "silhouette", e.silhouette());
-        number(g, "calinskiHarabasz", e.calinskiHarabasz());
-        number(g, "daviesBouldin", e.daviesBouldin());
-        number(g, "dunn", e.dunn());
+        for (org.treeproof.study.Criterion c : org.treeproof.study.Criterion.fitMeasures()) {
+            number(g, c.key(), c.of(e));
+        }
         number(g, "gap", e.gap());
         number(g, "gapSE", e.gapSE());
         g.writeObjectFieldStart("stability");
@@ -241,18 +275,17 @@ public final class SummaryJson {
             g.writeNumberField("sets", n.sets());
             g.writeNumberField("replicatesPerSet", n.replicatesPerSet());
             number(g, "ariMean", n.ariMean());
+            number(g, "ariSD", n.ariSD());
             number(g, "ariLow", n.ariLow());
             number(g, "ariHigh", n.ariHigh());
             number(g, "pacMean", n.pacMean());
-            number(g, "pacLow", n.pacLow());
-            number(g, "pacHigh", n.pacHigh());
             number(g, "silhouetteMean", n.silhouetteMean());
+            number(g, "silhouetteSD", n.silhouetteSD());
             number(g, "silhouetteLow", n.silhouetteLow());
             number(g, "silhouetteHigh", n.silhouetteHigh());
-            number(g, "pValueAri", n.pValueAri());
-            number(g, "pValuePac", n.pValuePac());
-            number(g, "pValueSilhouette", n.pValueSilhouette());
-            number(g, "pValueCombined", n.pValueCombined());
+            number(g, "excess", n.excess());
+            number(g, "testExcess", n.testExcess());
+            number(g, "pValueAdjusted", n.pValueAdjusted());
             g.writeEndObject();
         }
         g.writeEndObject();
@@ -284,14 +317,58 @@ public final class SummaryJson {
         }
         g.writeEndArray();
         g.writeArrayFieldStart("reasons");
-        for (String s : r.reasons()) {
-            g.writeString(s);
+        // a covariate the clusters follow leads the reasons (the explanation's own sentence)
+        if (explanation != null) {
+            for (String flag : ExplainJson.withFlags(List.of(), explanation)) {
+                g.writeStartObject();
+                g.writeStringField("kind", "covariate-followed");
+                g.writeStringField("text", flag);
+                g.writeEndObject();
+            }
+        }
+        for (org.treeproof.study.Reason reason : r.reasons()) {
+            g.writeStartObject();
+            g.writeStringField("kind", reason.kind());
+            g.writeStringField("text", wording.apply(reason));
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeNumberField("minClusterSize", r.minClusterSize());
+        g.writeArrayFieldStart("outliers");
+        for (int i : r.clustering().outliers()) {
+            g.writeString(evidence.sampleIds().get(i));
+        }
+        g.writeEndArray();
+        var t = r.structureTest();
+        if (t == null) {
+            g.writeNullField("structureTest");
+        } else {
+            g.writeObjectFieldStart("structureTest");
+            number(g, "statistic", t.statistic());
+            number(g, "pValue", t.pValue());
+            number(g, "pValueFitted", t.pValueFitted());
+            g.writeNumberField("nullSets", t.nullSets());
+            g.writeNumberField("replicatesPerSet", t.replicatesPerSet());
+            g.writeStringField("method", org.treeproof.study.StructureTest.METHOD);
+            g.writeArrayFieldStart("nullMaxima");
+            for (double v : t.nullMaxima()) {
+                number(g, v);
+            }
+            g.writeEndArray();
+            g.writeEndObject();
+        }
+        g.writeArrayFieldStart("replicateVotes");
+        for (Recommendation.KShare v : r.votes()) {
+            g.writeStartObject();
+            g.writeNumberField("k", v.k());
+            number(g, "share", v.share());
+            g.writeEndObject();
         }
         g.writeEndArray();
         g.writeArrayFieldStart("criteria");
         for (Recommendation.CriterionChoice c : r.criteria()) {
             g.writeStartObject();
-            g.writeStringField("criterion", c.criterion());
+            g.writeStringField("criterion", c.name());
             g.writeNumberField("k", c.k());
             g.writeStringField("basis", c.basis());
             g.writeEndObject();
@@ -314,11 +391,8 @@ public final class SummaryJson {
             g.writeNumberField("cluster", f.cluster());
             number(g, "stability", f.stability());
             number(g, "silhouette", f.silhouette());
-            g.writeArrayFieldStart("reasons");
-            for (String s : f.reasons()) {
-                g.writeString(s);
-            }
-            g.writeEndArray();
+            g.writeBooleanField("unstable", f.unstable());
+            g.writeBooleanField("negativeSilhouette", f.negativeSilhouette());
             g.writeEndObject();
         }
         g.writeEndArray();

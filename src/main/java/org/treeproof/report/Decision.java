@@ -18,9 +18,13 @@ import org.treeproof.tree.Linkage;
  * @param levels    the numbers of clusters that are each supported with all clusters stable (nested levels)
  * @param reasons   plain sentences on what carried the decision and what disagreed
  * @param criteria  each criterion's own choice of k beside the decision
+ * @param outliers  the ids of the samples set aside as outliers, in input order
+ * @param minClusterSize the smallest cluster
+ * @param structureTest the test of any cluster structure, or {@code null} without null data
  */
 public record Decision(Verdict verdict, String headline, Linkage linkage, int k, CutHeight cutHeight,
-        List<Integer> levels, List<String> reasons, List<CriterionRow> criteria) {
+        List<Integer> levels, List<String> reasons, List<CriterionRow> criteria, List<String> outliers,
+        int minClusterSize, org.treeproof.study.StructureTest structureTest) {
 
     public Decision {
         Objects.requireNonNull(verdict, "verdict");
@@ -30,6 +34,7 @@ public record Decision(Verdict verdict, String headline, Linkage linkage, int k,
         levels = List.copyOf(levels);
         reasons = List.copyOf(reasons);
         criteria = List.copyOf(criteria);
+        outliers = List.copyOf(outliers);
         if ((verdict == Verdict.UNSUPPORTED) != (k == 1)) {
             throw new IllegalArgumentException("k = 1 goes with an unsupported verdict and only with it, got k = " + k
                     + " and " + verdict.id());

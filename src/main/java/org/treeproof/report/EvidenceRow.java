@@ -19,12 +19,12 @@ import org.treeproof.study.Verdict;
  * @param nullAriMean      mean over null data sets of their mean ARI
  * @param nullAriLow       2.5% quantile of the null sets' mean ARI
  * @param nullAriHigh      97.5% quantile of the null sets' mean ARI
- * @param pValueAri        Monte Carlo p-value of the observed mean ARI against the null sets
- * @param nullSilhouette   mean over null data sets of the average silhouette of their own cut at this k
- * @param pValueCombined   Monte Carlo p-value of mean ARI + average silhouette, the test the decision rule uses
  * @param pac              proportion of ambiguous clustering of the consensus matrix
  * @param nullPac          mean PAC over the null sets
- * @param pValuePac        Monte Carlo p-value of the observed PAC against the null sets
+ * @param nullSilhouette   mean over null data sets of the average silhouette of their own cut at this k
+ * @param excess           null-standardised stability plus separation (the decision rule's ordering)
+ * @param pValueAdjusted   max-statistic Monte Carlo p-value of the excess, adjusted for the choice of linkage and k
+ * @param outliers         samples set aside as outliers in this solution
  * @param worstJaccard     the smallest mean Jaccard over the clusters
  * @param silhouette       average silhouette width
  * @param calinskiHarabasz Calinski-Harabasz index
@@ -36,9 +36,10 @@ import org.treeproof.study.Verdict;
  * @param recommended      true for the recommended solution
  */
 public record EvidenceRow(int k, CutHeight cutHeight, boolean tieDependent, double ariMean, double ariLow,
-        double ariHigh, int replicates, double nullAriMean, double nullAriLow, double nullAriHigh, double pValueAri,
-        double pac, double nullPac, double pValuePac, double nullSilhouette, double pValueCombined, double worstJaccard, double silhouette, double calinskiHarabasz,
-        double daviesBouldin, double dunn, double gap, double gapSE, Verdict verdict, boolean recommended) {
+        double ariHigh, int replicates, double nullAriMean, double nullAriLow, double nullAriHigh, double pac,
+        double nullPac, double nullSilhouette, double excess, double pValueAdjusted, int outliers, double worstJaccard,
+        double silhouette, double calinskiHarabasz, double daviesBouldin, double dunn, double gap, double gapSE,
+        Verdict verdict, boolean recommended) {
 
     public EvidenceRow {
         Objects.requireNonNull(cutHeight, "cutHeight");
@@ -53,6 +54,6 @@ public record EvidenceRow(int k, CutHeight cutHeight, boolean tieDependent, doub
 
     /** Whether null calibration was run for this row. */
     public boolean calibrated() {
-        return !Double.isNaN(pValueAri);
+        return !Double.isNaN(pValueAdjusted);
     }
 }

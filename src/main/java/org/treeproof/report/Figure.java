@@ -15,7 +15,7 @@ import java.util.Objects;
 public record Figure(String id, String title, String caption, String fileName) {
     /** The figure ids, in the order the report shows them. */
     public static final List<String> IDS = List.of("dendrogram", "silhouette", "stability", "gap", "consensus",
-            "jaccard", "linkages", "heatmap");
+            "jaccard", "linkages", "heatmap", "features", "sensitivity");
 
     /** The directory of the output that holds the charts. */
     public static final String DIRECTORY = "charts";

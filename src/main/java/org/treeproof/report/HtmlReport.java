@@ -14,7 +14,9 @@ import org.treeproof.study.Verdict;
  *
  * <p>Sections, in order (element ids in brackets): the decision and its reasons [{@code decision}], the evidence
  * for each number of clusters [{@code evidence}], how the linkages compare [{@code linkages}], clusters and samples
- * to check [{@code flags}], the comparison with known classes when given [{@code labels}], settings and
+ * to check [{@code flags}], the comparison with known classes when given [{@code labels}], what sets each cluster
+ * apart [{@code features}], the covariates when given [{@code covariates}], the alternative analyses when asked
+ * for [{@code sensitivity}] (these three only when the study was explained), settings and
  * reproducibility [{@code reproducibility}], what the evidence does not show [{@code caution}], and the references
  * [{@code references}]. Every string that comes from the user or the input (sample ids, class names, file name,
  * command line) is escaped with {@code StringEscapeUtils.escapeHtml4}. A value that is not a finite number prints
@@ -26,7 +28,7 @@ public final class HtmlReport {
 
     /** The section ids, in the order of the page ({@code labels} only when classes were given). */
     public static final List<String> SECTION_IDS = List.of("decision", "evidence", "linkages", "flags", "labels",
-            "reproducibility", "caution", "references");
+            "features", "covariates", "sensitivity", "reproducibility", "caution", "references");
 
     private final ReportModel model;
     private final Map<String, EmbeddedImage> images;
@@ -91,9 +93,19 @@ public final class HtmlReport {
         if (model.labels() != null) {
             tables.labels();
         }
+        model.explained().ifPresent(x -> {
+            var explain = new ExplainHtml(x, page);
+            explain.features(model);
+            if (ExplainHtml.shows(model, "covariates")) {
+                explain.covariates();
+            }
+            if (ExplainHtml.shows(model, "sensitivity")) {
+                explain.sensitivity(model);
+            }
+        });
         tables.reproducibility();
         caution(h);
-        references(h);
+        references(h, model);
         h.open("footer").text(f("Made with %s %s from %s (SHA-256 %s).", run.toolName(), run.toolVersion(),
                 run.inputFile(), run.inputSha256())).close("footer").newline();
         h.close("body").newline().close("html").newline();
@@ -103,7 +115,9 @@ public final class HtmlReport {
     private void nav(Html h) {
         h.open("nav", "aria-label", "Sections").open("ol");
         for (String id : SECTION_IDS) {
-            if (!id.equals("labels") || model.labels() != null) {
+            boolean shown = id.equals("labels") ? model.labels() != null
+                    : !ExplainHtml.TITLES.containsKey(id) || ExplainHtml.shows(model, id);
+            if (shown) {
                 h.open("li").open("a", "href", "#" + id).text(HtmlTables.title(id)).close("a").close("li");
             }
         }
@@ -160,6 +174,9 @@ public final class HtmlReport {
     private void caution(Html h) {
         HtmlTables.openSection(h, "caution");
         h.element("p", "caution", model.caution());
+        if (model.explained().map(x -> x.features() != null).orElse(false)) {
+            h.element("p", ExplainProse.doubleDipping());
+        }
         if (model.decision().verdict() == Verdict.UNSUPPORTED) {
             h.element("p", "No cluster solution is recommended; describing these samples as groups would need evidence "
                     + "this study did not find.");
@@ -167,14 +184,21 @@ public final class HtmlReport {
         h.close("section").newline();
     }
 
-    private static void references(Html h) {
+    private static void references(Html h, ReportModel model) {
         HtmlTables.openSection(h, "references");
         h.open("ol", "class", "references");
-        for (Reference r : List.of(Reference.CALINSKI_HARABASZ, Reference.DAVIES_BOULDIN, Reference.DUNN,
-                Reference.HENNIG, Reference.HOPE, Reference.HUBERT_ARABIE, Reference.KAUFMAN_ROUSSEEUW,
-                Reference.MONTI, Reference.MULLNER, Reference.MURTAGH_LEGENDRE, Reference.ROUSSEEUW,
-                Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD)) {
-            h.open("li").text(r.entry() + " ").open("a", "href", r.url()).text("doi:" + r.doi()).close("a").close("li");
+        var refs = new java.util.ArrayList<>(List.of(Reference.CALINSKI_HARABASZ, Reference.DAVIES_BOULDIN,
+                Reference.DUNN, Reference.HENNIG, Reference.HOPE, Reference.HUBERT_ARABIE, Reference.KAUFMAN_ROUSSEEUW,
+                Reference.LIU, Reference.MONTI, Reference.MULLNER, Reference.MURTAGH_LEGENDRE, Reference.ROUSSEEUW,
+                Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD, Reference.WESTFALL_YOUNG));
+        model.explained().ifPresent(x -> refs.addAll(ExplainProse.references(x)));
+        for (Reference r : refs) {
+            if (r.doi().isEmpty()) {
+                h.element("li", r.entry());
+            } else {
+                h.open("li").text(r.entry() + " ").open("a", "href", r.url()).text("doi:" + r.doi()).close("a")
+                        .close("li");
+            }
         }
         h.close("ol").close("section").newline();
     }

@@ -28,7 +28,7 @@ final class HtmlTables {
     }
 
     static String title(String sectionId) {
-        return TITLES.get(sectionId);
+        return TITLES.containsKey(sectionId) ? TITLES.get(sectionId) : ExplainHtml.TITLES.get(sectionId);
     }
 
     static void openSection(Html h, String id) {
@@ -52,23 +52,28 @@ final class HtmlTables {
             page.table("evidence", f("Cophenetic correlation of the tree with the distances: %s%s",
                     Numbers.fixed(t.copheneticCorrelation(), 3), t.monotone() ? ""
                             : "; the tree has inversions, so each row is the state after the first n − k merges"),
-                    "#k", "#Cut height", "#Range giving k", "#Mean ARI [95% interval]", "#Null ARI [95% range]",
-                    "#p (ARI)", "#PAC", "#Null PAC", "#Smallest Jaccard", "#Silhouette", "#Null silhouette",
-                    "#p (ARI + silhouette)", "#Calinski-Harabasz",
+                    "#k", "#Outliers", "#Cut height", "#Range giving k", "#Mean ARI [middle 95% of replicates]",
+                    "#Null ARI [middle 95% of sets]", "#PAC", "#Null PAC", "#Smallest Jaccard", "#Silhouette",
+                    "#Null silhouette", "#Excess over null", "#Adjusted p", "#Calinski-Harabasz",
                     "#Davies-Bouldin", "#Dunn", "#Gap ± s_k", "Verdict");
             for (EvidenceRow r : t.rows()) {
                 h.open("tr", "class", r.recommended() ? "recommended" : null);
                 tie |= r.tieDependent();
-                page.num(Integer.toString(r.k())).num(Numbers.scaled(r.cutHeight().chosen()) + (r.tieDependent() ? " †"
-                        : "")).num(Numbers.scaled(r.cutHeight().low()) + " to " + Numbers.scaled(r.cutHeight().high()))
+                // wide cells may wrap only at one ordinary space (no-break spaces elsewhere), so that at narrower
+                // widths the table fits by putting a figure's interval, range end or s_k on a second line
+                page.num(Integer.toString(r.k())).num(Integer.toString(r.outliers()))
+                        .num(Numbers.scaled(r.cutHeight().chosen()) + (r.tieDependent()
+                        ? NBSP + "†" : "")).num(Numbers.scaled(r.cutHeight().low()) + NBSP + "to "
+                                + Numbers.scaled(r.cutHeight().high()))
                         .num(interval(r.ariMean(), r.ariLow(), r.ariHigh()))
-                        .num(interval(r.nullAriMean(), r.nullAriLow(), r.nullAriHigh())).num(Numbers.p(r.pValueAri()))
+                        .num(interval(r.nullAriMean(), r.nullAriLow(), r.nullAriHigh()))
                         .num(Numbers.fixed(r.pac(), 3)).num(Numbers.fixed(r.nullPac(), 3))
                         .num(Numbers.fixed(r.worstJaccard(), 2)).num(Numbers.fixed(r.silhouette(), 2))
-                        .num(Numbers.fixed(r.nullSilhouette(), 2)).num(Numbers.p(r.pValueCombined()))
+                        .num(Numbers.fixed(r.nullSilhouette(), 2)).num(Numbers.fixed(r.excess(), 1))
+                        .num(Numbers.p(r.pValueAdjusted()))
                         .num(Numbers.scaled(r.calinskiHarabasz())).num(Numbers.fixed(r.daviesBouldin(), 2))
                         .num(Numbers.fixed(r.dunn(), 3)).num(Double.isFinite(r.gap()) ? Numbers.fixed(r.gap(), 3)
-                                + " ± " + Numbers.fixed(r.gapSE(), 3) : Numbers.MISSING);
+                                + " ±" + NBSP + Numbers.fixed(r.gapSE(), 3) : Numbers.MISSING);
                 h.open("td", "class", "verdict-cell").text(r.verdict().id());
                 if (r.recommended()) {
                     h.element("span", "tag tag-recommended", "recommended");
@@ -95,8 +100,11 @@ final class HtmlTables {
         if (!Double.isFinite(mean)) {
             return Numbers.MISSING;
         }
-        return Numbers.fixed(mean, 2) + " [" + Numbers.fixed(low, 2) + ", " + Numbers.fixed(high, 2) + "]";
+        return Numbers.fixed(mean, 2) + " [" + Numbers.fixed(low, 2) + "," + NBSP + Numbers.fixed(high, 2) + "]";
     }
+
+    /** A no-break space: keeps the parts of a figure together when a wide table's cells wrap. */
+    private static final String NBSP = "\u00A0";
 
     void linkages() {
         openSection(h, "linkages");
@@ -175,7 +183,7 @@ final class HtmlTables {
             for (Recommendation.SampleFlag s : flags.subList(0, Math.min(sampleRows, flags.size()))) {
                 h.open("tr");
                 page.cell(s.sampleId()).num(Integer.toString(s.cluster())).num(Numbers.percent(s.stability()))
-                        .num(Numbers.fixed(s.silhouette(), 3)).cell(String.join("; ", s.reasons()));
+                        .num(Numbers.fixed(s.silhouette(), 3)).cell(sampleWhy(s));
                 h.close("tr");
             }
             page.endTable();
@@ -277,5 +285,16 @@ final class HtmlTables {
         h.open("tr");
         page.cell(name).cell(value);
         h.close("tr");
+    }
+
+    private static String sampleWhy(Recommendation.SampleFlag s) {
+        var why = new java.util.ArrayList<String>();
+        if (s.unstable()) {
+            why.add("stays with its cluster in " + Numbers.percent(s.stability()) + " of replicates");
+        }
+        if (s.negativeSilhouette()) {
+            why.add("negative silhouette: closer to another cluster");
+        }
+        return String.join("; ", why);
     }
 }

@@ -48,14 +48,18 @@ public final class MethodsParagraph {
         Set<Reference> cited = new LinkedHashSet<>();
         var sb = new StringBuilder("# Methods\n\n");
         sb.append(methods(cited)).append("\n\n");
+        model.explained().map(x -> ExplainProse.methods(x, cited)).filter(m -> !m.isEmpty())
+                .ifPresent(m -> sb.append(md(String.join(" ", m))).append("\n\n"));
         sb.append("# Result\n\n").append(result()).append("\n\n");
+        model.explained().ifPresent(x -> sb.append(explained(x)));
         sb.append("## References\n\n");
         List<Reference> refs = new ArrayList<>(cited);
         // alphabetical as a reader expects (Şenbabaoğlu among the S, Müllner before Murtagh), not by code point
         Collator collator = Collator.getInstance(Locale.ENGLISH);
         refs.sort(Comparator.comparing(Reference::entry, collator));
         for (Reference r : refs) {
-            sb.append("- ").append(r.entry()).append(" https://doi.org/").append(r.doi()).append('\n');
+            sb.append("- ").append(r.entry()).append(r.doi().isEmpty() ? "" : " https://doi.org/" + r.doi())
+                    .append('\n');
         }
         return sb.toString();
     }
@@ -105,11 +109,30 @@ public final class MethodsParagraph {
                 + "replicates (%s).", cite(c, Reference.HUBERT_ARABIE), cite(c, Reference.MONTI),
                 Numbers.plain(s.pacLow()), Numbers.plain(s.pacHigh()), cite(c, Reference.SENBABAOGLU),
                 cite(c, Reference.HENNIG)));
+        int m = model.decision().minClusterSize();
+        out.add(f("Only branches of at least %d samples counted as clusters, in the full-data trees and in every "
+                + "replicate and null data set; samples on smaller branches were set aside as outliers, left out of k "
+                + "and of the fit measures, and counted as clusters of their own in the ARI and consensus. A replicate "
+                + "was cut into as many clusters as the full-data solution had with at least that many (scaled to the "
+                + "replicate's size) of their samples drawn.", m));
         if (model.nullCalibrated()) {
-            out.add(f("To tell stability from chance, the same procedure (%d replicates each) was applied to %d null "
-                    + "data sets %s; p-values are Monte Carlo p-values, (1 + null sets at least as "
-                    + "stable) / (1 + %d) (%s).", s.nullReplicates(), s.nullSets(), Names.nullModelProse(s.metric()),
-                    s.nullSets(), cite(c, Reference.HOPE)));
+            String nullData = s.metric().binaryOnly() ? Names.nullModelProse(s.metric())
+                    : f("drawn from a unimodal elliptical distribution with the data's principal axes, robust "
+                    + "scales along them (normalised median absolute deviations, floored at the data's background "
+                    + "noise level; %s) and the data's own distribution of distances from the centre, so that "
+                    + "heavy tails and far samples are kept and clusters are not", cite(c, Reference.LIU));
+            out.add(f("To tell structure from noise, the same procedure (%d replicates each) was applied to %d null "
+                    + "data sets %s. For each linkage and k, the excess "
+                    + "over the null was the mean ARI and the average silhouette, each standardised by the null sets' "
+                    + "mean and standard deviation at that linkage and k, added together. Its p-value was adjusted "
+                    + "for the choice among every linkage and k by the maximum statistic (%s): the Monte Carlo share "
+                    + "(1 + sets reaching it) / (1 + %d) (%s) of null sets whose largest excess over all linkages and "
+                    + "k reached it, with the observed excess taken from its first %d replicates so that both rest "
+                    + "on the same number. The largest observed excess against the null sets' largest is the test of "
+                    + "any cluster structure; beside its Monte Carlo p-value a p-value from a normal distribution "
+                    + "fitted to the null sets' largest excess is reported.", s.nullReplicates(), s.nullSets(),
+                    nullData, cite(c, Reference.WESTFALL_YOUNG), s.nullSets(), cite(c, Reference.HOPE),
+                    s.nullReplicates()));
         } else {
             out.add("Stability was not calibrated against null data.");
         }
@@ -138,56 +161,44 @@ public final class MethodsParagraph {
     }
 
     private String rule(Set<Reference> c, DecisionRule r) {
-        String kr = model.nullCalibrated() ? cite(c, Reference.KAUFMAN_ROUSSEEUW)
-                : narrative(c, Reference.KAUFMAN_ROUSSEEUW);
         if (model.nullCalibrated()) {
-            return f("A solution was eligible when it beat the null data on stability plus separation (its mean ARI plus "
-                    + "its average silhouette width exceeded that of the null data sets, each clustered and resampled "
-                    + "the same way; Monte Carlo p ≤ %s), its mean ARI was at least %s, and no cluster dissolved (every "
-                    + "mean Jaccard above %s). An eligible solution was called supported when, in addition, every "
-                    + "cluster was stable (mean Jaccard at least %s; %s) and its average silhouette was above %s (%s); "
-                    + "tentative otherwise; when no solution was eligible the verdict was unsupported (k = 1). Among the "
-                    + "eligible solutions the better verdict was preferred, then the higher average silhouette, the "
-                    + "higher smallest cluster Jaccard and the higher cophenetic correlation.", Numbers.plain(r.alpha()),
-                    Numbers.plain(r.stableJaccard()), Numbers.plain(r.dissolvedJaccard()),
-                    Numbers.plain(r.stableJaccard()), Reference.HENNIG.cite(), Numbers.plain(r.reasonableSilhouette()),
-                    kr);
+            return f("A solution was called supported when it beat the null data (adjusted p ≤ %s) and every cluster "
+                    + "was stable (mean Jaccard at least %s; %s); tentative when it beat the null data and no cluster "
+                    + "dissolved (every mean Jaccard above %s) but a cluster was only doubtful; and unsupported "
+                    + "otherwise. No silhouette threshold entered the verdict; the average silhouette was read only as a "
+                    + "description (%s). Among the solutions the better verdict was preferred, then the "
+                    + "larger excess over the null, the higher smallest cluster Jaccard and the higher cophenetic "
+                    + "correlation; when no solution was better than unsupported, the data were treated as one group "
+                    + "(k = 1).", Numbers.plain(r.alpha()), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
+                    Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW));
         }
-        return f("Without null calibration a solution was eligible when its mean ARI was at least %s and no cluster "
-                + "dissolved (every mean Jaccard above %s; %s), and could be called no more than tentative; the "
-                + "average silhouette was read as %s suggest (above %s, a reasonable structure). Among the eligible solutions the higher "
-                + "average silhouette was preferred, then the higher smallest cluster Jaccard and the higher cophenetic "
-                + "correlation.", Numbers.plain(r.stableJaccard()), Numbers.plain(r.dissolvedJaccard()),
-                Reference.HENNIG.cite(), kr, Numbers.plain(r.reasonableSilhouette()));
+        return f("Without null data no solution could be called more than tentative, which needed every cluster "
+                + "stable (mean Jaccard at least %s; %s), a mean ARI of at least %s and an average silhouette above "
+                + "%s, the reading of a reasonable structure of %s; among such solutions the higher mean ARI was "
+                + "preferred, then the higher smallest cluster Jaccard and the higher cophenetic correlation.",
+                Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG), Numbers.plain(r.stableJaccard()),
+                Numbers.plain(r.reasonableSilhouette()), narrative(c, Reference.KAUFMAN_ROUSSEEUW));
     }
 
+    /**
+     * The result: the decision's headline and its reasons, as the report words them (the same sentences as the
+     * report's decision section), then the flagged clusters and samples.
+     */
     private String result() {
         Decision d = model.decision();
         var out = new ArrayList<String>();
         if (d.verdict() == Verdict.UNSUPPORTED) {
-            out.add(f("No convincing cluster structure was found: no cut of any tree into 2 to %d clusters met the "
-                    + "conditions above, so the samples are treated as a single group.", model.settings().maxK()));
-            for (EvidenceTable t : model.evidence()) {
-                out.add(unsupportedLinkage(t));
-            }
+            out.add(d.headline());
         } else {
             EvidenceRow r = model.recommendedRow().orElseThrow();
             out.add(f("The evidence %s k = %d clusters with %s linkage (%s).", d.verdict() == Verdict.SUPPORTED
-                    ? "supported" : "tentatively supported", d.k(), Names.linkage(d.linkage()), Prose.cut(r, model.table(d.linkage()))));
-            out.add(stability(r) + f(" The smallest cluster Jaccard was %s and the average silhouette %s.",
-                    Numbers.fixed(r.worstJaccard(), 2), Numbers.fixed(r.silhouette(), 2)));
-            if (d.verdict() == Verdict.TENTATIVE) {
-                out.add(whyTentative(r));
-            }
-            EvidenceTable t = model.table(d.linkage());
-            if (t.hasGap()) {
-                out.add(f("The gap statistic chose k = %d%s.", t.gapChoice(), t.gapRuleMet() ? ""
-                        : ", the largest k examined, because its rule was not met below it"));
-            }
-            if (d.levels().size() > 1) {
-                out.add(f("k = %s were each supported with every cluster stable; as cuts of one tree they are nested.",
-                        Prose.and(d.levels().stream().map(String::valueOf).toList())));
-            }
+                    ? "supported" : "tentatively supported", d.k(), Names.linkage(d.linkage()),
+                    Prose.cut(r, model.table(d.linkage()))));
+        }
+        for (String reason : d.reasons()) {
+            out.add(md(reason));
+        }
+        if (d.hasClusters()) {
             for (ClusterEvidence ce : model.flaggedClusters()) {
                 out.add(f("Cluster %d (%d samples) was %s: mean Jaccard %s; it dissolved in %s and was recovered in %s "
                         + "of the replicates.", ce.id(), ce.size(), ce.status().label(), Numbers.fixed(ce.jaccard(), 2),
@@ -199,43 +210,32 @@ public final class MethodsParagraph {
                         flagged == 1 ? " was" : "s were"));
             }
         }
+        if (!d.outliers().isEmpty()) {
+            int shown = Math.min(20, d.outliers().size());
+            out.add(f("Outliers: %s%s.", String.join(", ", d.outliers().subList(0, shown).stream()
+                    .map(MethodsParagraph::md).toList()), shown < d.outliers().size()
+                            ? f(" and %d more (clusters.csv lists all)", d.outliers().size() - shown) : ""));
+        }
         return String.join(" ", out);
     }
 
-    private String whyTentative(EvidenceRow r) {
-        DecisionRule rule = model.rule();
-        if (!r.calibrated()) {
-            return "It is tentative because, without null calibration, no solution can be more than tentative.";
+    /** The explanation's result: one sentence per cluster, the covariates, the alternative analyses, the caution. */
+    private static String explained(org.treeproof.explain.Explanation x) {
+        var out = new ArrayList<String>();
+        if (x.features() != null) {
+            out.addAll(ExplainProse.clusterSentences(x.features()));
         }
-        if (r.worstJaccard() < rule.stableJaccard()) {
-            return f("It is tentative because not every cluster is stable (smallest mean Jaccard %s, below %s).",
-                    Numbers.fixed(r.worstJaccard(), 2), Numbers.plain(rule.stableJaccard()));
+        if (x.covariates() != null && !x.covariates().isEmpty()) {
+            out.add(ExplainProse.covariates(x.covariates()));
         }
-        return f("It is tentative because its average silhouette (%s) is not above %s.", Numbers.fixed(r.silhouette(),
-                2), Numbers.plain(rule.reasonableSilhouette()));
-    }
-
-    private String unsupportedLinkage(EvidenceTable t) {
-        EvidenceRow r = t.mostStable();
-        String gap = t.hasGap() ? f("; the gap statistic chose k = %d", t.gapChoice()) : "";
-        return f("With %s linkage the most stable cut (k = %d) had a %s%s.", Names.linkage(t.linkage()), r.k(),
-                stabilityClause(r, "of"), gap);
-    }
-
-    private static String stability(EvidenceRow r) {
-        return f("Across the %d replicates the ", r.replicates()) + stabilityClause(r, "was") + f("; PAC was %s%s.", Numbers.fixed(r.pac(), 3),
-                r.calibrated() ? f(" (%s on null data)", Numbers.fixed(r.nullPac(), 3)) : "");
-    }
-
-    private static String stabilityClause(EvidenceRow r, String verb) {
-        String s = f("mean ARI " + verb + " %s (95%% interval %s to %s)", Numbers.fixed(r.ariMean(), 2), Numbers.fixed(r.ariLow(), 2),
-                Numbers.fixed(r.ariHigh(), 2));
-        if (r.calibrated()) {
-            s += f(" against %s on null data (Monte Carlo p = %s); mean ARI plus average silhouette beat the null data "
-                    + "with p = %s", Numbers.fixed(r.nullAriMean(), 2), Numbers.p(r.pValueAri()),
-                    Numbers.p(r.pValueCombined()));
+        if (x.sensitivity() != null) {
+            out.add(ExplainProse.sensitivity(x.sensitivity()));
         }
-        return s;
+        out.addAll(x.notes());
+        if (x.features() != null) {
+            out.add(ExplainProse.doubleDipping());
+        }
+        return out.isEmpty() ? "" : md(String.join(" ", out)) + "\n\n";
     }
 
     private static String md(String text) {

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.regex.Pattern;
+import org.treeproof.explain.Explanation;
 import org.treeproof.resample.Resampling;
 import org.treeproof.study.ClusterEvidence;
 import org.treeproof.study.DecisionRule;
@@ -13,6 +14,7 @@ import org.treeproof.study.KEvidence;
 import org.treeproof.study.LinkageEvidence;
 import org.treeproof.study.NullStability;
 import org.treeproof.study.Recommendation;
+import org.treeproof.study.Reason;
 import org.treeproof.study.Recommender;
 import org.treeproof.study.StudySettings;
 import org.treeproof.study.Verdict;
@@ -23,13 +25,13 @@ final class ModelFactory {
     private final Evidence evidence;
     private final Recommendation rec;
     private final RunInfo run;
-    private final Recommender recommender;
+    private final ReasonWords words;
 
     ModelFactory(Evidence evidence, Recommendation rec, RunInfo run) {
         this.evidence = Objects.requireNonNull(evidence, "evidence");
         this.rec = Objects.requireNonNull(rec, "recommendation");
         this.run = Objects.requireNonNull(run, "run");
-        this.recommender = Recommender.of(evidence, rec.rule());
+        this.words = new ReasonWords(rec.rule());
         check();
     }
 
@@ -43,7 +45,20 @@ final class ModelFactory {
             throw new IllegalArgumentException("the run's seed or metric differ from the study's settings");
         }
         LinkageEvidence le = linkageEvidence(rec.linkage());
-        if (rec.k() > 1 && recommender.verdictOf(le.at(rec.k())) != rec.verdict()) {
+        if (rec.k() > 1 && le.at(rec.k()) == null) {
+            throw new IllegalArgumentException("the recommendation does not come from this evidence");
+        }
+        int assessed = 0;
+        for (LinkageEvidence l : evidence.linkages()) {
+            for (KEvidence e : l.byK()) {
+                var a = rec.assessment(l.linkage(), e.k());
+                if (a == null || !a.facts().equals(Recommender.facts(l, e))) {
+                    throw new IllegalArgumentException("the recommendation does not come from this evidence");
+                }
+                assessed++;
+            }
+        }
+        if (assessed != rec.assessments().size()) {
             throw new IllegalArgumentException("the recommendation does not come from this evidence");
         }
         if (rec.linkages().size() != evidence.linkages().size()) {
@@ -58,18 +73,21 @@ final class ModelFactory {
                         + " is not in the evidence"));
     }
 
-    ReportModel build(LabelComparison labels) {
+    ReportModel build(LabelComparison labels, Explanation explanation) {
         var tables = new ArrayList<EvidenceTable>();
         for (LinkageEvidence le : evidence.linkages()) {
             tables.add(table(le));
         }
-        Decision decision = decision();
+        Decision decision = decision(explanation);
         List<ClusterEvidence> clusters = rec.k() > 1 ? linkageEvidence(rec.linkage()).at(rec.k()).clusters() : List.of();
         var notes = new ArrayList<String>();
         notes.addAll(dataNotes());
-        var figures = Figures.of(evidence, rec, notes);
+        var figures = new ArrayList<>(Figures.of(evidence, rec, notes));
+        if (explanation != null) {
+            figures.addAll(ExplainFigures.of(explanation));
+        }
         return new ReportModel(run, evidence.settings(), rec.rule(), decision, tables, comparison(),
-                clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes);
+                clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes, explanation);
     }
 
     private EvidenceTable table(LinkageEvidence le) {
@@ -77,34 +95,46 @@ final class ModelFactory {
         for (KEvidence e : le.byK()) {
             NullStability n = e.stability().nullModel();
             double nan = Double.NaN;
-            Verdict v = recommender.verdictOf(e);
+            Verdict v = rec.assessment(le.linkage(), e.k()).verdict();
             boolean recommended = rec.k() > 1 && le.linkage() == rec.linkage() && e.k() == rec.k();
             rows.add(new EvidenceRow(e.k(), e.cutHeight(), e.tieDependent(), e.stability().ari().mean(),
                     e.stability().ari().low(), e.stability().ari().high(), e.stability().ari().count(),
                     n == null ? nan : n.ariMean(), n == null ? nan : n.ariLow(), n == null ? nan : n.ariHigh(),
-                    n == null ? nan : n.pValueAri(), e.stability().pac(), n == null ? nan : n.pacMean(),
-                    n == null ? nan : n.pValuePac(), n == null ? nan : n.silhouetteMean(),
-                    n == null ? nan : n.pValueCombined(), e.worstJaccard(), e.silhouette(), e.calinskiHarabasz(),
+                    e.stability().pac(), n == null ? nan : n.pacMean(), n == null ? nan : n.silhouetteMean(),
+                    n == null ? nan : n.excess(), n == null ? nan : n.pValueAdjusted(), e.outliers(),
+                    e.worstJaccard(), e.silhouette(), e.calinskiHarabasz(),
                     e.daviesBouldin(), e.dunn(), e.gap(), e.gapSE(), v, recommended));
         }
         return new EvidenceTable(le.linkage(), le.copheneticCorrelation(), le.tree().monotone(), le.gapChoice(),
                 le.gap() != null && le.gap().ruleMet(), rows);
     }
 
-    private Decision decision() {
+    private Decision decision(Explanation explanation) {
         String link = Names.linkage(rec.linkage());
         String headline = switch (rec.verdict()) {
             case SUPPORTED -> f("The evidence supports %d clusters with %s linkage.", rec.k(), link);
             case TENTATIVE -> f("The evidence tentatively supports %d clusters with %s linkage; it falls short of full "
                     + "support.", rec.k(), link);
-            case UNSUPPORTED -> "No convincing cluster structure was found; the samples are treated as one group.";
+            case UNSUPPORTED -> rec.outlierCount() == 0
+                    ? "No convincing cluster structure was found; the samples are treated as one group."
+                    : f("No convincing cluster structure was found; the samples are treated as one group, with %d far "
+                            + "sample%s set aside as outlier%s.", rec.outlierCount(), rec.outlierCount() == 1 ? "" : "s",
+                            rec.outlierCount() == 1 ? "" : "s");
         };
         var criteria = new ArrayList<Decision.CriterionRow>();
         for (Recommendation.CriterionChoice c : rec.criteria()) {
-            criteria.add(new Decision.CriterionRow(c.criterion(), c.k(), c.basis(), c.k() == rec.k()));
+            criteria.add(new Decision.CriterionRow(c.name(), c.k(), c.basis(), c.k() == rec.k()));
         }
+        var reasons = new ArrayList<String>();
+        // a covariate the clusters largely follow leads the reasons: it is what a reviewer checks first
+        if (explanation != null) {
+            explanation.flags().forEach(flag -> reasons.add(flag.reason()));
+        }
+        reasons.addAll(reasons());
+        var outliers = java.util.Arrays.stream(rec.clustering().outliers()).mapToObj(evidence.sampleIds()::get)
+                .toList();
         return new Decision(rec.verdict(), headline, rec.linkage(), rec.k(), rec.cutHeight(), rec.levels(),
-                reasons(), criteria);
+                reasons, criteria, outliers, rec.minClusterSize(), rec.structureTest());
     }
 
     private LinkageComparison comparison() {
@@ -113,11 +143,11 @@ final class ModelFactory {
             rows.add(new LinkageComparison.Row(s.linkage(), s.copheneticCorrelation(), s.k(), s.verdict(), s.ariMean(),
                     s.pac(), s.silhouette(), s.worstJaccard(), s.linkage() == rec.linkage()));
         }
-        // the recommendation's own sentences on the linkages, when it wrote them; otherwise one of ours
+        // the recommendation's own reasons on the linkages, when it gave them; otherwise one of ours
         var why = new ArrayList<String>();
-        for (String r : reasons()) {
-            if (r.startsWith("Among the linkages") || startsWithLinkage(r)) {
-                why.add(r);
+        for (Reason r : rec.reasons()) {
+            if (r instanceof Reason.OtherLinkages || r instanceof Reason.BestFailed) {
+                why.add(clean(words.word(r)));
             }
         }
         if (why.isEmpty()) {
@@ -126,7 +156,7 @@ final class ModelFactory {
                             ? f("No linkage gives a convincing solution; the %s tree is shown because it represents "
                                     + "the distances best (highest cophenetic correlation).", rec.linkage().id())
                             : f("%s linkage gives the best-supported solution under the decision rule (best verdict, "
-                                    + "then higher average silhouette, then higher smallest cluster Jaccard, then "
+                                    + "then larger excess over the null, then higher smallest cluster Jaccard, then "
                                     + "higher cophenetic correlation).", capital(rec.linkage().id())));
         }
         return new LinkageComparison(rows, rec.agreement(), rec.linkage(), why);
@@ -137,19 +167,14 @@ final class ModelFactory {
      * replicate held has no mean Jaccard) shows as the report's dash, never as "NaN".
      */
     private List<String> reasons() {
-        return rec.reasons().stream().map(r -> NOT_A_NUMBER.matcher(r).replaceAll(Numbers.MISSING)).toList();
+        return rec.reasons().stream().map(r -> clean(words.word(r))).toList();
+    }
+
+    private static String clean(String sentence) {
+        return NOT_A_NUMBER.matcher(sentence).replaceAll(Numbers.MISSING);
     }
 
     private static final Pattern NOT_A_NUMBER = Pattern.compile("-?\\b(?:NaN|Infinity)\\b");
-
-    private boolean startsWithLinkage(String reason) {
-        for (LinkageEvidence le : evidence.linkages()) {
-            if (reason.startsWith("With " + le.linkage().id() + " linkage")) {
-                return true;
-            }
-        }
-        return false;
-    }
 
     private List<String> dataNotes() {
         var out = new ArrayList<String>();
@@ -200,6 +225,9 @@ final class ModelFactory {
         out.add(new ReportModel.Setting("PAC interval", "(" + Numbers.plain(s.pacLow()) + ", "
                 + Numbers.plain(s.pacHigh()) + "]"));
         out.add(new ReportModel.Setting("Seed", Long.toString(s.seed())));
+        out.add(new ReportModel.Setting("Smallest cluster (samples; smaller branches are outliers)",
+                Integer.toString(s.minClusterSize(evidence.samples())) + (s.minClusterSize() == 0
+                        ? " (default: the larger of 5 and 1% of the samples)" : "")));
         out.add(new ReportModel.Setting("Null test level (p at most)", Numbers.plain(r.alpha())));
         out.add(new ReportModel.Setting("Stable cluster (mean Jaccard at least)", Numbers.plain(r.stableJaccard())));
         out.add(new ReportModel.Setting("Dissolved cluster (mean Jaccard at most)", Numbers.plain(r.dissolvedJaccard())));

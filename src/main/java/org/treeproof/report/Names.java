@@ -58,7 +58,6 @@ final class Names {
      */
     static String nullModelProse(Metric metric) {
         return metric.binaryOnly() ? BINARY_DRAW + " (the same feature frequencies, no clusters)"
-                : "drawn from a Gaussian distribution with the data's principal-axis variances (the same covariance,"
-                + " no clusters)";
+                : "drawn from a unimodal elliptical distribution with the data's principal axes (no clusters)";
     }
 }

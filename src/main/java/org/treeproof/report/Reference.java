@@ -10,7 +10,7 @@ import java.util.Objects;
  *
  * @param cite  the citation in running text, e.g. "Hubert &amp; Arabie, 1985"
  * @param entry the full entry without the DOI
- * @param doi   the DOI, without a resolver prefix
+ * @param doi   the DOI, without a resolver prefix; empty for a book without one (its ISBN is in the entry)
  */
 public record Reference(String cite, String entry, String doi) {
     public Reference {
@@ -66,6 +66,13 @@ public record Reference(String cite, String entry, String doi) {
     static final Reference HOPE = new Reference("Hope, 1968",
             "Hope, A. C. A. (1968). A simplified Monte Carlo significance test procedure. Journal of the Royal "
                     + "Statistical Society: Series B, 30, 582–598.", "10.1111/j.2517-6161.1968.tb00759.x");
+    static final Reference LIU = new Reference("Liu et al., 2008",
+            "Liu, Y., Hayes, D. N., Nobel, A. & Marron, J. S. (2008). Statistical significance of clustering for "
+                    + "high-dimension, low-sample size data. Journal of the American Statistical Association, 103, "
+                    + "1281–1293.", "10.1198/016214508000000454");
+    static final Reference WESTFALL_YOUNG = new Reference("Westfall & Young, 1993",
+            "Westfall, P. H. & Young, S. S. (1993). Resampling-Based Multiple Testing: Examples and Methods for "
+                    + "p-Value Adjustment. Wiley, New York. ISBN 978-0-471-55761-6.", "");
     static final Reference MULLNER = new Reference("Müllner, 2011",
             "Müllner, D. (2011). Modern hierarchical, agglomerative clustering algorithms. arXiv:1109.2378.",
             "10.48550/arXiv.1109.2378");

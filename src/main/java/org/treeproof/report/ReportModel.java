@@ -4,6 +4,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import org.treeproof.explain.Explanation;
 import org.treeproof.partition.Partition;
 import org.treeproof.score.JaccardStability;
 import org.treeproof.study.ClusterEvidence;
@@ -30,11 +31,22 @@ import org.treeproof.tree.Linkage;
  * @param caution         what the evidence does not show
  * @param figures         the charts, in {@link Figure#IDS} order, without those whose data is missing
  * @param notes           plain sentences on what was left out and why
+ * @param explanation     what sets the recommended clusters apart, the covariates and the alternative analyses;
+ *                        {@code null} when the study was not explained
  */
 public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule, Decision decision,
         List<EvidenceTable> evidence, LinkageComparison linkages, List<ClusterEvidence> clusters,
         List<Recommendation.SampleFlag> flaggedSamples, LabelComparison labels, List<Setting> effectiveSettings,
-        String caution, List<Figure> figures, List<String> notes) {
+        String caution, List<Figure> figures, List<String> notes, Explanation explanation) {
+
+    /** A model without an explanation. */
+    public ReportModel(RunInfo run, StudySettings settings, DecisionRule rule, Decision decision,
+            List<EvidenceTable> evidence, LinkageComparison linkages, List<ClusterEvidence> clusters,
+            List<Recommendation.SampleFlag> flaggedSamples, LabelComparison labels, List<Setting> effectiveSettings,
+            String caution, List<Figure> figures, List<String> notes) {
+        this(run, settings, rule, decision, evidence, linkages, clusters, flaggedSamples, labels, effectiveSettings,
+                caution, figures, notes, null);
+    }
 
     public ReportModel {
         Objects.requireNonNull(run, "run");
@@ -86,7 +98,22 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
      * @throws IllegalArgumentException if the recommendation, the run or the labels do not belong to the evidence
      */
     public static ReportModel of(Evidence evidence, Recommendation recommendation, RunInfo run, LabelComparison labels) {
-        return new ModelFactory(evidence, recommendation, run).build(labels);
+        return of(evidence, recommendation, run, labels, null);
+    }
+
+    /**
+     * The model of a study with the explanation of its recommended solution.
+     *
+     * @param explanation the explanation, or {@code null} when there is none
+     */
+    public static ReportModel of(Evidence evidence, Recommendation recommendation, RunInfo run, LabelComparison labels,
+            Explanation explanation) {
+        return new ModelFactory(evidence, recommendation, run).build(labels, explanation);
+    }
+
+    /** The explanation of the recommended solution, if the study was explained. */
+    public Optional<Explanation> explained() {
+        return Optional.ofNullable(explanation);
     }
 
     /**
@@ -100,7 +127,7 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
         return evidence.linkages().stream().filter(l -> l.linkage() == recommendation.linkage()).findFirst()
                 .orElseThrow(() -> new IllegalArgumentException("the recommended linkage "
                         + recommendation.linkage().id() + " is not in the evidence"))
-                .at(recommendation.k()).partition();
+                .at(recommendation.k()).clustering().withSingletons();
     }
 
     /** The evidence table of a linkage. */

@@ -46,6 +46,7 @@ final class ReportStyle {
             table.evidence thead th { hyphens: auto; }
             td.num, th.num { text-align: right; font-variant-numeric: tabular-nums; }
             td.num { white-space: nowrap; }
+            table.evidence td.num { white-space: normal; }
             tr.recommended td { background: var(--mark); }
             tr.recommended td:first-child { box-shadow: inset .3rem 0 0 var(--blue); }
             tr.flagged td:first-child { box-shadow: inset .3rem 0 0 var(--vermillion); }

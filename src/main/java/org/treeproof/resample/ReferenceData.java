@@ -172,6 +172,22 @@ public final class ReferenceData implements Serializable {
                     z[c] = ref.sd[c] * normal.next(rng);
                 }
             }
+
+        },
+        ELLIPTICAL {
+            @Override
+            void coordinates(ReferenceData ref, SplittableRandom rng, Normal normal, double[] z) {
+                double norm = 0;
+                for (int c = 0; c < z.length; c++) {
+                    z[c] = normal.next(rng);
+                    norm += z[c] * z[c];
+                }
+                double radius = ref.radii[rng.nextInt(ref.radii.length)];
+                double f = norm > 0 ? radius / Math.sqrt(norm) : 0;
+                for (int c = 0; c < z.length; c++) {
+                    z[c] = ref.sd[c] * f * z[c];
+                }
+            }
         };
 
         abstract void coordinates(ReferenceData ref, SplittableRandom rng, Normal normal, double[] z);
@@ -191,9 +207,17 @@ public final class ReferenceData implements Serializable {
     /** {@code Vᵀ} r × p and the means to add back, or null when coordinates are the features themselves. */
     private final double[] axes;
     private final double[] means;
+    /** The observed samples' radii in axis units scaled by {@link #sd}; elliptical only. */
+    private final double[] radii;
 
     private ReferenceData(DataMatrix observed, Shape shape, double[] lower, double[] upper, double[] sd,
             double[] axes, double[] means) {
+        this(observed, shape, lower, upper, sd, axes, means, null);
+    }
+
+    private ReferenceData(DataMatrix observed, Shape shape, double[] lower, double[] upper, double[] sd,
+            double[] axes, double[] means, double[] radii) {
+        this.radii = radii;
         this.sampleIds = observed.sampleIds();
         this.featureNames = observed.featureNames();
         this.shape = shape;
@@ -251,12 +275,12 @@ public final class ReferenceData implements Serializable {
 
     /**
      * The null model of stability calibration for {@code metric}: structureless data the metric can measure,
-     * {@link #featureFrequency} for the 0/1 metrics and {@link #gaussian} for every other.
+     * {@link #featureFrequency} for the 0/1 metrics and {@link #ellipticalNull} for every other.
      *
      * @throws InputException as those factories
      */
     public static ReferenceData nullModel(Metric metric, DataMatrix observed) {
-        return metric.binaryOnly() ? featureFrequency(observed) : gaussian(observed);
+        return metric.binaryOnly() ? featureFrequency(observed) : ellipticalNull(observed);
     }
 
     /** Uniform over the principal-axis box of {@code observed} (method (b)), computing its axes. */
@@ -292,6 +316,94 @@ public final class ReferenceData implements Serializable {
             sd[c] = Math.sqrt(var[c]);
         }
         return new ReferenceData(observed, Shape.GAUSSIAN, null, null, sd, axes.axes(), axes.means());
+    }
+
+    /** The normal consistency factor of the median absolute deviation, 1 / Φ⁻¹(3/4). */
+    private static final double MAD_TO_SD = 1.482602218505602;
+    /** Entries read for the background noise level; larger tables are read at an even stride. */
+    private static final int NOISE_SAMPLE = 1 << 22;
+
+    /** The elliptical null of {@code observed}, computing its axes. */
+    public static ReferenceData ellipticalNull(DataMatrix observed) {
+        return ellipticalNull(observed, PrincipalAxes.of(observed));
+    }
+
+    /**
+     * A unimodal elliptical null shaped like {@code observed} in everything but clusters: the data's principal
+     * axes; along each axis a robust scale, the normalised median absolute deviation (MAD × 1.4826; F. R. Hampel,
+     * J. Am. Stat. Assoc. 69 (1974) 383-393, doi:10.1080/01621459.1974.10482962) of the data's scores on it,
+     * never less than the background noise level (the normalised MAD of all entries of the column-centred data,
+     * as Y. Liu, D. N. Hayes, A. Nobel and J. S. Marron, J. Am. Stat. Assoc. 103 (2008) 1281-1293,
+     * doi:10.1198/016214508000000454, floor their Gaussian null's eigenvalues; an axis whose MAD is 0 keeps its
+     * SD); and the data's own radial distribution: each null sample lies in a uniformly random direction (in the
+     * axes scaled by those scales) at the radius of a randomly chosen observed sample, measured the same way.
+     *
+     * <p>So the null is an elliptical distribution (K.-T. Fang, S. Kotz and K. W. Ng, <i>Symmetric Multivariate
+     * and Related Distributions</i>, Chapman and Hall, 1990) with no modes but the centre, whose tails are as
+     * heavy as the data's: Gaussian data give a near-Gaussian null, heavy-tailed data a heavy-tailed one, and
+     * far points stay far. Clusters do not survive it, because directions are redrawn. Using the radial
+     * distribution is our choice: a Gaussian null, with any scale, is beaten by heavy tails alone.
+     *
+     * <p>Each sample's coordinates take {@code rank} normal variates and then one {@code nextInt} for its radius,
+     * in that order, from the generator's one stream.
+     */
+    public static ReferenceData ellipticalNull(DataMatrix observed, PrincipalAxes axes) {
+        requireMatch(observed, axes);
+        int n = observed.samples();
+        int r = axes.rank();
+        double[] scores = axes.scores(observed);
+        double[] var = axes.variances();
+        double noise = backgroundNoise(observed, axes.means());
+        double[] sd = new double[r];
+        double[] column = new double[n];
+        for (int c = 0; c < r; c++) {
+            for (int i = 0; i < n; i++) {
+                column[i] = scores[i * r + c];
+            }
+            double mad = MAD_TO_SD * mad(column);
+            sd[c] = mad > 0 ? Math.max(mad, noise) : Math.sqrt(var[c]);
+        }
+        double[] radii = new double[n];
+        for (int i = 0; i < n; i++) {
+            double s2 = 0;
+            for (int c = 0; c < r; c++) {
+                double z = sd[c] > 0 ? scores[i * r + c] / sd[c] : 0;
+                s2 += z * z;
+            }
+            radii[i] = Math.sqrt(s2);
+        }
+        return new ReferenceData(observed, Shape.ELLIPTICAL, null, null, sd, axes.axes(), axes.means(), radii);
+    }
+
+    private static double backgroundNoise(DataMatrix observed, double[] means) {
+        double[] x = observed.rowMajorCopy();
+        int p = means.length;
+        long total = x.length;
+        int stride = (int) Math.max(1, (total + NOISE_SAMPLE - 1) / NOISE_SAMPLE);
+        double[] e = new double[(int) ((total + stride - 1) / stride)];
+        int t = 0;
+        for (long a = 0; a < total; a += stride) {
+            e[t++] = x[(int) a] - means[(int) (a % p)];
+        }
+        return MAD_TO_SD * mad(java.util.Arrays.copyOf(e, t));
+    }
+
+    /** The median absolute deviation from the median; sorts {@code v} in place. */
+    private static double mad(double[] v) {
+        if (v.length == 0) {
+            return 0;
+        }
+        double med = median(v);
+        for (int i = 0; i < v.length; i++) {
+            v[i] = Math.abs(v[i] - med);
+        }
+        return median(v);
+    }
+
+    private static double median(double[] v) {
+        java.util.Arrays.sort(v);
+        int m = v.length / 2;
+        return v.length % 2 == 1 ? v[m] : (v[m - 1] + v[m]) / 2;
     }
 
     private static void requireMatch(DataMatrix observed, PrincipalAxes axes) {

@@ -24,7 +24,9 @@ public final class Seeds {
         /** The replicates drawn from one null data set. */
         NULL_REPLICATE(0x5EED_0004L),
         /** Random keys for hashing clades when counting branch support. */
-        CLADE_KEYS(0x5EED_0005L);
+        CLADE_KEYS(0x5EED_0005L),
+        /** The permutations of a covariate for a Monte Carlo test of its association with the clusters. */
+        COVARIATE_PERMUTATION(0x5EED_0101L);
 
         private final long salt;
 

@@ -29,6 +29,44 @@ public final class DunnIndex {
         }
     }
 
+    /**
+     * The Dunn index of the clusters of {@code clustering}, outliers ignored (neither within nor between
+     * clusters).
+     */
+    public static Result of(CondensedDistances distances, org.treeproof.partition.Clustering clustering) {
+        if (clustering.outlierCount() == 0) {
+            return new DunnIndex(distances, clustering.clusteredPartition()).compute();
+        }
+        int n = clustering.size();
+        double separation = Double.POSITIVE_INFINITY;
+        double diameter = 0;
+        int t = 0;
+        for (int i = 0; i < n; i++) {
+            int li = clustering.label(i);
+            if (li < 0) {
+                t += n - i - 1;
+                continue;
+            }
+            for (int j = i + 1; j < n; j++) {
+                double d = distances.at(t++);
+                int lj = clustering.label(j);
+                if (lj < 0) {
+                    continue;
+                }
+                if (lj == li) {
+                    diameter = Math.max(diameter, d);
+                } else {
+                    separation = Math.min(separation, d);
+                }
+            }
+        }
+        if (clustering.k() < 2) {
+            return new Result(Double.NaN, Double.NaN, diameter);
+        }
+        double value = diameter == 0 ? (separation > 0 ? Double.POSITIVE_INFINITY : Double.NaN) : separation / diameter;
+        return new Result(value, separation, diameter);
+    }
+
     /** The Dunn index of {@code partition} under {@code distances} (same items, same order). */
     public static DunnIndex of(CondensedDistances distances, Partition partition) {
         return new DunnIndex(distances, partition);

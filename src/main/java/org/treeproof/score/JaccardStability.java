@@ -27,6 +27,10 @@ import org.treeproof.partition.Partition;
  * floating-point mean is within 10<sup>-9</sup> of a threshold.
  */
 public final class JaccardStability {
+    /** Hennig's stable band starts here (inclusive): 3/4. The one owner of this threshold. */
+    public static final double STABLE_FROM = 0.75;
+    /** Hennig's dissolution threshold (inclusive): 1/2. The one owner of this threshold. */
+    public static final double DISSOLVED_AT = 0.5;
     private final Partition reference;
     private final List<ResampledPartition> replicates;
 

@@ -3,6 +3,7 @@ package org.treeproof.score;
 import java.util.Arrays;
 import java.util.Objects;
 import org.treeproof.distance.CondensedDistances;
+import org.treeproof.partition.Clustering;
 import org.treeproof.partition.Partition;
 
 /**
@@ -30,8 +31,15 @@ public final class Silhouette {
     private final CondensedDistances distances;
     private final Partition partition;
     private final long sumsLimit;
+    /** Items set aside as outliers (no width, not in the mean, not a cluster), or null. */
+    private final boolean[] outlier;
 
     private Silhouette(CondensedDistances distances, Partition partition, long sumsLimit) {
+        this(distances, partition, sumsLimit, null);
+    }
+
+    private Silhouette(CondensedDistances distances, Partition partition, long sumsLimit, boolean[] outlier) {
+        this.outlier = outlier;
         this.distances = Objects.requireNonNull(distances, "distances");
         this.partition = Objects.requireNonNull(partition, "partition");
         if (distances.size() != partition.size()) {
@@ -44,6 +52,23 @@ public final class Silhouette {
     /** The silhouette of {@code partition} under {@code distances} (same items, same order). */
     public static Silhouette of(CondensedDistances distances, Partition partition) {
         return new Silhouette(distances, partition, SUMS_LIMIT);
+    }
+
+    /**
+     * The silhouette of the clusters of {@code clustering}, outliers ignored: an outlier has no width
+     * ({@code NaN}), is left out of the mean, and is neither a cluster-mate nor a neighbouring cluster of anyone.
+     * The same as the silhouette of {@link Clustering#clusteredPartition()} on the clustered items' distances.
+     */
+    public static Silhouette of(CondensedDistances distances, Clustering clustering) {
+        int n = clustering.size();
+        int k = clustering.k();
+        boolean[] out = new boolean[n];
+        int[] raw = new int[n];
+        for (int i = 0; i < n; i++) {
+            out[i] = clustering.isOutlier(i);
+            raw[i] = out[i] ? k : clustering.label(i);
+        }
+        return new Silhouette(distances, Partition.of(raw), SUMS_LIMIT, clustering.outlierCount() > 0 ? out : null);
     }
 
     /** As {@link #of}, choosing the pass by the given limit; lets tests exercise both passes. */
@@ -62,7 +87,7 @@ public final class Silhouette {
         public Result {
             values = values.clone();
             for (double v : values) {
-                if (v < -1 || v > 1) {
+                if (v < -1 || v > 1) {   // NaN (an outlier's or an undefined width) passes
                     throw new IllegalArgumentException("silhouette width " + v + " is outside [-1, 1]");
                 }
             }
@@ -105,6 +130,9 @@ public final class Silhouette {
         int n = partition.size();
         int k = partition.clusterCount();
         double[] s = new double[n];
+        if (outlier != null) {
+            return computeIgnoringOutliers();
+        }
         if (k < 2) {
             Arrays.fill(s, Double.NaN);
             return new Result(s, Double.NaN);
@@ -129,6 +157,46 @@ public final class Silhouette {
             total += v;
         }
         return new Result(s, total / n);
+    }
+
+    private Result computeIgnoringOutliers() {
+        int n = partition.size();
+        int all = partition.clusterCount();   // the clusters and one group of outliers
+        int[] labels = partition.labels();
+        int[] sizes = partition.clusterSizes();
+        int outlierLabel = -1;
+        for (int i = 0; i < n; i++) {
+            if (outlier[i]) {
+                outlierLabel = labels[i];
+                break;
+            }
+        }
+        int clusters = all - 1;
+        double[] s = new double[n];
+        if (clusters < 2) {
+            Arrays.fill(s, Double.NaN);
+            return new Result(s, Double.NaN);
+        }
+        double[] rowSums = new double[all];
+        double[] sums = (long) n * all <= sumsLimit ? clusterSumsAllPairs(labels, all) : null;
+        double total = 0;
+        int counted = 0;
+        for (int i = 0; i < n; i++) {
+            if (outlier[i]) {
+                s[i] = Double.NaN;
+                continue;
+            }
+            if (sums != null) {
+                System.arraycopy(sums, i * all, rowSums, 0, all);
+            } else {
+                clusterSumsOfRow(i, labels, rowSums);
+            }
+            rowSums[outlierLabel] = Double.NaN;
+            s[i] = width(rowSums, labels[i], sizes);
+            total += s[i];
+            counted++;
+        }
+        return new Result(s, total / counted);
     }
 
     /** {@code sums[i*k + c]} = Σ of d(i, j) over the members j of cluster c; one sequential pass. */
@@ -176,7 +244,7 @@ public final class Silhouette {
         double a = sums[own] / (sizes[own] - 1);
         double b = Double.POSITIVE_INFINITY;
         for (int c = 0; c < sums.length; c++) {
-            if (c != own) {
+            if (c != own && !Double.isNaN(sums[c])) {   // NaN marks the outliers' column
                 b = Math.min(b, sums[c] / sizes[c]);
             }
         }

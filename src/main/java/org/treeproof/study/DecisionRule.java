@@ -1,63 +1,119 @@
 package org.treeproof.study;
 
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import org.treeproof.score.JaccardStability;
+
 /**
- * The thresholds that turn evidence into a verdict. The defaults, and where each comes from:
+ * The decision rule: typed facts of one (linkage, k) solution in, an {@link Assessment} out, and the order in
+ * which assessed solutions compete. The only place where evidence becomes a verdict; everything downstream reads
+ * the assessments.
  *
+ * <p>Thresholds, and where each comes from:
  * <ul>
- *   <li>{@code alpha = 0.05}: the Monte Carlo p-value against null data of the observed mean ARI plus average
- *       silhouette ({@link NullStability#combined}) must be at most this (with 19 null sets: the observed
- *       solution beats every null set). Conventional level.</li>
+ *   <li>{@code alpha = 0.05}: the largest max-statistic adjusted p-value that beats the null
+ *       ({@link NullStability}, {@link StructureTest}). Conventional level.</li>
  *   <li>{@code stableJaccard = 0.75} and {@code dissolvedJaccard = 0.5}: the bands of C. Hennig,
  *       "Cluster-wise assessment of cluster stability", Comput. Stat. Data Anal. 52 (2007) 258-271,
  *       doi:10.1016/j.csda.2006.11.025.</li>
  *   <li>{@code reasonableSilhouette = 0.5} and {@code weakSilhouette = 0.25}: the reading of the average
  *       silhouette width in L. Kaufman and P. J. Rousseeuw, <i>Finding Groups in Data</i>, Wiley (1990),
- *       doi:10.1002/9780470316801: above 0.50 a reasonable (above 0.70 strong) structure, 0.26-0.50 weak,
- *       0.25 or less no substantial structure (quoted from memory of their chapter 2).</li>
+ *       doi:10.1002/9780470316801: above 0.50 a reasonable structure, 0.26-0.50 weak, 0.25 or less no
+ *       substantial structure (from memory of their chapter 2). Reported as a description; it gates a verdict only
+ *       when no null data could be run.</li>
  *   <li>{@code unstableSample = 0.75}: a sample that stays with its cluster-mates in fewer than 75% of the
- *       replicates holding it is flagged. Our choice, by analogy with Hennig's stable band; common practice
- *       has no published value for this.</li>
+ *       replicates holding it is flagged. Our choice, by analogy with Hennig's stable band.</li>
  * </ul>
  *
- * <p>The rule, for one linkage and one k:
+ * <p>A cluster's band (stable, doubtful, dissolved) is its {@link JaccardStability.Status}, decided there exactly
+ * on the fractions; the rule reads the bands, not the means.
+ *
+ * <p>The rule, for one linkage and one k (k clusters of at least the minimum size; samples on smaller branches
+ * are outliers and count neither as clusters nor in the fit):
  * <ol>
- *   <li>Eligible when the solution beats the null ({@code pValueCombined <= alpha}), the mean ARI reaches
- *       {@code stableJaccard} (a solution that replicates reproduce only partly is not a finding, however much
- *       better than the null it is; the value borrows Hennig's stable band and is our choice), and no cluster
- *       dissolves (every mean Jaccard above {@code dissolvedJaccard}). Without null calibration (distances given
- *       without data, or {@code --null-sets 0}) nothing can be eligible for more than {@code tentative}, and
- *       the stability must instead reach a mean ARI of at least {@code stableJaccard}.</li>
- *   <li>{@code supported} when, in addition, every cluster is stable (Jaccard at least {@code stableJaccard})
- *       and the average silhouette is above {@code reasonableSilhouette}; otherwise {@code tentative}.</li>
- *   <li>The recommendation is the eligible (linkage, k) with the best verdict; ties go to the higher average
- *       silhouette, then the higher smallest cluster Jaccard, then the higher cophenetic correlation, then
- *       the earlier linkage and the smaller k.</li>
- *   <li>When nothing is eligible the verdict is {@code unsupported} and k = 1: the data hold no convincing
- *       cluster structure. The gap statistic's choice is reported beside it.</li>
- *   <li>Levels: the k of the recommended linkage whose solutions are eligible, keep every cluster stable, hold
- *       no cluster smaller than max(3, 2% of the samples), and persist over a range of cut heights at least half
- *       as long (relative to the height) as the longest-persisting such solution; the recommended k is always a
- *       level. Being cuts of one tree, levels are nested, so two or more describe nested structure. The size and
- *       persistence conditions are our own choices, made so that splitting off outliers or a transient state of
- *       the agglomeration does not count as a level.</li>
+ *   <li>With null data: {@code supported} when the solution beats the null ({@link Condition#BEATS_NULL}) and
+ *       every cluster is stable ({@link Condition#EVERY_CLUSTER_STABLE}); {@code tentative} when it beats the null
+ *       and no cluster dissolves but one is only doubtful; otherwise {@code unsupported}. No silhouette band
+ *       enters: separation counts through the excess over the null, which compares each k with noise at the
+ *       same k.</li>
+ *   <li>Without null data (a distance table, or {@code --null-sets 0}) nothing is better than {@code tentative},
+ *       which needs every cluster stable, the replicates to reproduce the solution (mean ARI at least
+ *       {@code stableJaccard}) and an average silhouette above {@code reasonableSilhouette}.</li>
+ *   <li>Order: the better verdict; then the larger excess over the null (without null data: the larger mean
+ *       ARI); then the larger smallest Jaccard; then the larger cophenetic correlation; then the earlier linkage
+ *       and the smaller k. The first solution in this order is recommended.</li>
+ *   <li>When no solution is better than {@code unsupported} the verdict is {@code unsupported} with k = 1: the
+ *       data hold no convincing cluster structure (beside any samples the tree sets aside as outliers).</li>
+ *   <li>Levels: the k of the recommended linkage that are {@code supported} and persist over a range of cut
+ *       heights at least half as long, relative to the height, as the longest-persisting supported one; the
+ *       recommended k is always a level. Being cuts of one tree they are nested, so two or more describe nested
+ *       structure. The persistence condition is our choice.</li>
  * </ol>
  *
- * @param alpha                the largest p-value that beats the null
+ * @param alpha                the largest adjusted p-value that beats the null
  * @param stableJaccard        Hennig's stable band
  * @param dissolvedJaccard     Hennig's dissolved band
- * @param reasonableSilhouette the average silhouette above which the fit is reasonable
- * @param weakSilhouette       the average silhouette at or below which there is no substantial structure
+ * @param reasonableSilhouette Kaufman and Rousseeuw's "reasonable structure" reading
+ * @param weakSilhouette       their "no substantial structure" reading
  * @param unstableSample       per-sample stability below which a sample is flagged
  */
 public record DecisionRule(double alpha, double stableJaccard, double dissolvedJaccard, double reasonableSilhouette,
         double weakSilhouette, double unstableSample) {
 
     /** The defaults documented above. */
-    public static final DecisionRule DEFAULT = new DecisionRule(0.05, 0.75, 0.5, 0.5, 0.25, 0.75);
+    public static final DecisionRule DEFAULT = new DecisionRule(0.05, JaccardStability.STABLE_FROM,
+            JaccardStability.DISSOLVED_AT, 0.5, 0.25, 0.75);
 
     public DecisionRule {
         if (!(alpha > 0 && alpha < 1) || !(dissolvedJaccard < stableJaccard) || !(weakSilhouette < reasonableSilhouette)) {
             throw new IllegalArgumentException("inconsistent decision thresholds");
         }
+    }
+
+    /** The verdict of one solution, with the conditions met and failed. */
+    public Assessment assess(Assessment.Facts f) {
+        var met = new ArrayList<Condition>();
+        var failed = new ArrayList<Condition>();
+        Verdict v;
+        if (f.calibrated()) {
+            boolean beats = check(met, failed, Condition.BEATS_NULL, f.pAdjusted() <= alpha + 1e-12);
+            boolean whole = check(met, failed, Condition.NO_CLUSTER_DISSOLVES, f.noneDissolved());
+            boolean stable = check(met, failed, Condition.EVERY_CLUSTER_STABLE, f.allStable());
+            v = !beats || !whole ? Verdict.UNSUPPORTED : stable ? Verdict.SUPPORTED : Verdict.TENTATIVE;
+        } else {
+            boolean stable = check(met, failed, Condition.EVERY_CLUSTER_STABLE, f.allStable());
+            boolean reproduced = check(met, failed, Condition.REPRODUCED, f.meanAri() >= stableJaccard);
+            boolean separated = check(met, failed, Condition.SEPARATED_WITHOUT_NULL,
+                    f.silhouette() > reasonableSilhouette);
+            v = stable && reproduced && separated ? Verdict.TENTATIVE : Verdict.UNSUPPORTED;
+        }
+        return new Assessment(f, v, met, failed);
+    }
+
+    private static boolean check(List<Condition> met, List<Condition> failed, Condition c, boolean ok) {
+        (ok ? met : failed).add(c);
+        return ok;
+    }
+
+    /**
+     * The order in which solutions compete, best first (item 3 of the rule). Solutions are given in linkage order
+     * and increasing k, and the sort is stable, so the last tie-break is the earlier linkage and the smaller k.
+     */
+    public Comparator<Assessment> order() {
+        Comparator<Assessment> byVerdict = Comparator.comparingInt(a -> a.verdict().ordinal());
+        Comparator<Assessment> byExcess = Comparator.comparingDouble(a -> -strength(a.facts()));
+        return byVerdict.thenComparing(byExcess)
+                .thenComparingDouble(a -> -orZero(a.facts().worstJaccard()))
+                .thenComparingDouble(a -> -orZero(a.facts().cophenetic()));
+    }
+
+    /** The quantity that orders solutions of one verdict: the excess over the null, or mean ARI without a null. */
+    public static double strength(Assessment.Facts f) {
+        return orZero(f.calibrated() ? f.excess() : f.meanAri());
+    }
+
+    private static double orZero(double v) {
+        return Double.isNaN(v) ? Double.NEGATIVE_INFINITY : v;
     }
 }

@@ -13,7 +13,8 @@ import org.treeproof.tree.MergeTree;
  * @param tree                  its tree on all samples
  * @param copheneticCorrelation Sokal & Rohlf's (1962) cophenetic correlation of the tree with the distances
  * @param gap                   the gap statistic for k = 1..maxK, or {@code null} when not computed
- * @param byK                   the evidence for k = 2..maxK
+ * @param byK                   the evidence for each k from 2 to maxK that the tree can be cut into (k clusters of
+ *                              the minimum size), in increasing k
  * @param branchSupport         per merge of {@code tree}, the share of replicates reproducing its clade
  * @param consensus             the consensus matrix for k = 2..maxK
  */
@@ -30,13 +31,14 @@ public record LinkageEvidence(Linkage linkage, MergeTree tree, double cophenetic
         return branchSupport.clone();
     }
 
-    /** The evidence at {@code k}. */
+    /** The evidence at {@code k}, or {@code null} when the tree has no cut into k clusters of the minimum size. */
     public KEvidence at(int k) {
-        KEvidence e = byK.get(k - 2);
-        if (e.k() != k) {
-            throw new IllegalStateException("byK is out of order");
+        for (KEvidence e : byK) {
+            if (e.k() == k) {
+                return e;
+            }
         }
-        return e;
+        return null;
     }
 
     /** The gap statistic's choice of k (1..maxK), or 0 when it was not computed. */

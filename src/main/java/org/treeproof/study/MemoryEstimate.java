@@ -68,14 +68,25 @@ public record MemoryEstimate(long persistent, long peakPhase, String phase) {
     public void requireFits(long heapBytes, int n) {
         long needed = total() + total() / 10 + (64L << 20);
         if (needed > heapBytes) {
+            // the parts are rounded in one unit and the headroom takes the remainder, so the figures add up exactly
+            boolean inGib = needed >= (1L << 30);
+            double unit = inGib ? (1L << 30) / 10.0 : (1L << 20);
+            long all = Math.round(needed / unit);
+            long kept = Math.round(persistent / unit);
+            long during = Math.round(peakPhase / unit);
+            long headroom = all - kept - during;
             throw new NotEnoughMemoryException(String.format(Locale.ROOT,
                     "this study needs about %s of memory (%s for the data, distances and consensus counters, %s more "
-                            + "during %s) but Java may use only %s; give Java more heap (java -Xmx%dg -jar ...), "
-                            + "run fewer --threads, assess fewer samples, reduce features with --top-variable, or "
-                            + "lower --null-sets/--reference-sets",
-                    gib(needed), gib(persistent), gib(peakPhase), phase, gib(heapBytes),
-                    (long) Math.ceil(needed / (double) (1L << 30)) + 1));
+                            + "during %s, %s of headroom for Java itself) but Java may use only %s; give Java more "
+                            + "heap (java -Xmx%dg -jar ...), run fewer --threads, assess fewer samples, reduce features "
+                            + "with --top-variable, or lower --null-sets/--reference-sets",
+                    shown(all, inGib), shown(kept, inGib), shown(during, inGib), phase, shown(headroom, inGib),
+                    gib(heapBytes), (long) Math.ceil(needed / (double) (1L << 30)) + 1));
         }
+    }
+
+    private static String shown(long units, boolean inGib) {
+        return inGib ? String.format(Locale.ROOT, "%d.%d GiB", units / 10, units % 10) : units + " MiB";
     }
 
     private static String gib(long bytes) {

@@ -1,28 +1,38 @@
 package org.treeproof.study;
 
 import java.util.List;
+import org.treeproof.partition.Clustering;
 import org.treeproof.tree.Linkage;
 
 /**
  * The decision drawn from a study's evidence, with its reasons.
  *
  * @param linkage         the recommended linkage
- * @param k               the recommended number of clusters (1 when the verdict is unsupported)
- * @param cutHeight       the heights that give k clusters on the linkage's tree and the chosen one
+ * @param k               the recommended number of clusters (1 when the verdict is unsupported); outliers not counted
+ * @param cutHeight       the heights that give the solution on the linkage's tree and the chosen one
  * @param verdict         how well the evidence supports the solution
- * @param levels          the numbers of clusters of the recommended linkage that are each supported with all
- *                        clusters stable, in increasing order (nested levels when more than one)
- * @param reasons         plain sentences: which evidence carried the decision and which disagreed
+ * @param levels          the supported numbers of clusters of the recommended linkage, in increasing order (nested
+ *                        levels when more than one)
+ * @param reasons         typed reasons: which evidence carried the decision and which disagreed
  * @param criteria        each criterion's own choice of k for the recommended linkage
  * @param flaggedClusters clusters of the recommended solution below Hennig's stable band
  * @param flaggedSamples  samples with low stability or negative silhouette in the recommended solution
  * @param linkages        per linkage: its own best k and key figures
  * @param agreement       ARI between the linkages' own solutions, {@code [a][b]} in the order of {@code linkages}
  * @param rule            the thresholds used
+ * @param assessments     the rule's assessment of every (linkage, k) solution, in linkage order and increasing k
+ * @param structureTest   the test of any cluster structure, or {@code null} without null data
+ * @param clustering      the recommended clusters and outliers (for unsupported: one cluster and the samples the
+ *                        tree sets aside before its first split into two large branches)
+ * @param minClusterSize  the smallest cluster
+ * @param votes           per k, the share of replicates whose own stability ranks that k first on the recommended
+ *                        linkage (empty without null data)
  */
 public record Recommendation(Linkage linkage, int k, CutHeight cutHeight, Verdict verdict, List<Integer> levels,
-        List<String> reasons, List<CriterionChoice> criteria, List<ClusterEvidence> flaggedClusters,
-        List<SampleFlag> flaggedSamples, List<LinkageSummary> linkages, double[][] agreement, DecisionRule rule) {
+        List<Reason> reasons, List<CriterionChoice> criteria, List<ClusterEvidence> flaggedClusters,
+        List<SampleFlag> flaggedSamples, List<LinkageSummary> linkages, double[][] agreement, DecisionRule rule,
+        List<Assessment> assessments, StructureTest structureTest, Clustering clustering, int minClusterSize,
+        List<KShare> votes) {
 
     public Recommendation {
         levels = List.copyOf(levels);
@@ -31,6 +41,8 @@ public record Recommendation(Linkage linkage, int k, CutHeight cutHeight, Verdic
         flaggedClusters = List.copyOf(flaggedClusters);
         flaggedSamples = List.copyOf(flaggedSamples);
         linkages = List.copyOf(linkages);
+        assessments = List.copyOf(assessments);
+        votes = List.copyOf(votes);
         double[][] a = new double[agreement.length][];
         for (int i = 0; i < a.length; i++) {
             a[i] = agreement[i].clone();
@@ -50,16 +62,38 @@ public record Recommendation(Linkage linkage, int k, CutHeight cutHeight, Verdic
         return a;
     }
 
-    /** One criterion's choice of k. */
-    public record CriterionChoice(String criterion, int k, String basis) {
+    /** The assessment of one solution, or {@code null} when that linkage has no cut at k. */
+    public Assessment assessment(Linkage l, int k) {
+        for (Assessment a : assessments) {
+            if (a.linkage() == l && a.k() == k) {
+                return a;
+            }
+        }
+        return null;
     }
 
-    /** A sample flagged in the recommended solution; cluster is 1-based. */
+    /** The ids of the samples set aside as outliers, in input order. */
+    public int outlierCount() {
+        return clustering.outlierCount();
+    }
+
+    /** One criterion's choice of k. */
+    public record CriterionChoice(Criterion criterion, String name, int k, String basis) {
+    }
+
+    /** A share of replicates. */
+    public record KShare(int k, double share) {
+    }
+
+    /**
+     * A sample flagged in the recommended solution; cluster is 1-based.
+     *
+     * @param unstable           it stays with its cluster-mates in fewer replicates than the rule's
+     *                           {@link DecisionRule#unstableSample()}
+     * @param negativeSilhouette it is closer, on average, to another cluster than to its own
+     */
     public record SampleFlag(int sample, String sampleId, int cluster, double stability, double silhouette,
-            List<String> reasons) {
-        public SampleFlag {
-            reasons = List.copyOf(reasons);
-        }
+            boolean unstable, boolean negativeSilhouette) {
     }
 
     /** One linkage's own best solution under the decision rule. */

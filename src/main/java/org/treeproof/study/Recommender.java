@@ -2,15 +2,25 @@ package org.treeproof.study;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
+import org.treeproof.partition.Clustering;
 import org.treeproof.score.AdjustedRandIndex;
 import org.treeproof.score.JaccardStability;
+import org.treeproof.tree.SizedCuts;
 
 /**
- * Applies a {@link DecisionRule} to the evidence of a study. Pure: the same evidence and rule give the
- * same recommendation.
+ * Applies a {@link DecisionRule} to the evidence of a study: assesses every (linkage, k) solution, takes the
+ * first in the rule's order, and gathers the typed reasons. Pure: the same evidence and rule give the same
+ * recommendation.
  */
 public final class Recommender {
+    /**
+     * Without cluster structure, a small branch shed at the top of the tree is a far sample (an outlier) when it
+     * joins at least this many times higher than the tree's first split into two large branches. Our choice: on
+     * Gaussian samples the shed branches join at about 1.3 times that height, a sample far from all others many
+     * times higher.
+     */
+    static final double FAR_FACTOR = 1.5;
+
     private final Evidence evidence;
     private final DecisionRule rule;
 
@@ -23,137 +33,142 @@ public final class Recommender {
         return new Recommender(evidence, rule);
     }
 
-    /** A candidate solution and its verdict; {@code verdict == UNSUPPORTED} means not eligible. */
-    private record Candidate(int linkage, KEvidence e, Verdict verdict, double cophenetic) {
-        /** True when this candidate wins over {@code o} by the rule's order. */
-        boolean beats(Candidate o) {
-            if (verdict != o.verdict) {
-                return verdict.betterThan(o.verdict);
-            }
-            if (e.silhouette() != o.e.silhouette()) {
-                return e.silhouette() > o.e.silhouette();
-            }
-            if (e.worstJaccard() != o.e.worstJaccard()) {
-                return e.worstJaccard() > o.e.worstJaccard();
-            }
-            if (cophenetic != o.cophenetic) {
-                return cophenetic > o.cophenetic;
-            }
-            return false; // keep the earlier linkage and the smaller k
-        }
-    }
-
-    /** The verdict of one solution under the rule. */
-    public Verdict verdictOf(KEvidence e) {
-        Stability s = e.stability();
-        boolean beats;
-        boolean calibrated = s.nullModel() != null;
-        if (calibrated) {
-            beats = s.nullModel().pValueCombined() <= rule.alpha() + 1e-12 && s.ari().mean() >= rule.stableJaccard();
-        } else {
-            beats = s.ari().mean() >= rule.stableJaccard();
-        }
-        if (!beats || !(e.worstJaccard() > rule.dissolvedJaccard())) {
-            return Verdict.UNSUPPORTED;
-        }
-        boolean allStable = e.worstJaccard() >= rule.stableJaccard();
-        if (calibrated && allStable && e.silhouette() > rule.reasonableSilhouette()) {
-            return Verdict.SUPPORTED;
-        }
-        return Verdict.TENTATIVE;
-    }
-
-    private Candidate best(int l) {
-        LinkageEvidence le = evidence.linkages().get(l);
-        Candidate best = null;
-        for (KEvidence e : le.byK()) {
-            var c = new Candidate(l, e, verdictOf(e), le.copheneticCorrelation());
-            if (c.verdict != Verdict.UNSUPPORTED && (best == null || c.beats(best))) {
-                best = c;
-            }
-        }
-        return best;
+    /** The facts the rule reads for one solution. */
+    public static Assessment.Facts facts(LinkageEvidence le, KEvidence e) {
+        NullStability ns = e.stability().nullModel();
+        boolean allStable = e.clusters().stream().allMatch(c -> c.status() == JaccardStability.Status.STABLE);
+        boolean noneDissolved = e.clusters().stream().noneMatch(c -> c.status() == JaccardStability.Status.DISSOLVED
+                || c.status() == JaccardStability.Status.NOT_ASSESSED);
+        return new Assessment.Facts(le.linkage(), e.k(), e.outliers(), e.stability().ari().mean(), e.worstJaccard(),
+                allStable, noneDissolved, e.silhouette(), ns != null, ns == null ? Double.NaN : ns.excess(),
+                ns == null ? Double.NaN : ns.pValueAdjusted(), le.copheneticCorrelation());
     }
 
     /** Decides. */
     public Recommendation recommend() {
         List<LinkageEvidence> all = evidence.linkages();
-        Candidate winner = null;
-        Candidate[] perLinkage = new Candidate[all.size()];
+        var assessments = new ArrayList<Assessment>();
+        Assessment[] perLinkage = new Assessment[all.size()];
+        Assessment[] strongest = new Assessment[all.size()];
         for (int l = 0; l < all.size(); l++) {
-            perLinkage[l] = best(l);
-            if (perLinkage[l] != null && (winner == null || perLinkage[l].beats(winner))) {
+            LinkageEvidence le = all.get(l);
+            for (KEvidence e : le.byK()) {
+                Assessment a = rule.assess(facts(le, e));
+                assessments.add(a);
+                if (strongest[l] == null || rule.order().compare(a, strongest[l]) < 0) {
+                    strongest[l] = a;
+                }
+            }
+            perLinkage[l] = strongest[l] != null && strongest[l].verdict() != Verdict.UNSUPPORTED ? strongest[l] : null;
+        }
+        Assessment winner = null;
+        int winnerLinkage = -1;
+        for (int l = 0; l < all.size(); l++) {
+            if (perLinkage[l] != null && (winner == null || rule.order().compare(perLinkage[l], winner) < 0)) {
                 winner = perLinkage[l];
+                winnerLinkage = l;
             }
         }
         var summaries = new ArrayList<Recommendation.LinkageSummary>();
         for (int l = 0; l < all.size(); l++) {
             LinkageEvidence le = all.get(l);
-            Candidate c = perLinkage[l];
-            if (c == null) {
+            Assessment a = perLinkage[l];
+            if (a == null) {
                 summaries.add(new Recommendation.LinkageSummary(le.linkage(), le.copheneticCorrelation(), 1,
                         Verdict.UNSUPPORTED, Double.NaN, Double.NaN, Double.NaN, Double.NaN));
             } else {
-                summaries.add(new Recommendation.LinkageSummary(le.linkage(), le.copheneticCorrelation(), c.e.k(),
-                        c.verdict, c.e.stability().ari().mean(), c.e.stability().pac(), c.e.silhouette(),
-                        c.e.worstJaccard()));
+                KEvidence e = le.at(a.k());
+                summaries.add(new Recommendation.LinkageSummary(le.linkage(), le.copheneticCorrelation(), a.k(),
+                        a.verdict(), e.stability().ari().mean(), e.stability().pac(), e.silhouette(), e.worstJaccard()));
             }
         }
         double[][] agreement = agreement(perLinkage);
+        var reasons = new ArrayList<Reason>();
+        StructureTest test = evidence.structureTest();
+        if (test != null) {
+            reasons.add(new Reason.Structure(test, rule.alpha()));
+        } else {
+            reasons.add(new Reason.NoNullData(evidence.features() == 0));
+        }
         if (winner == null) {
-            return unsupported(summaries, agreement);
+            return unsupported(summaries, agreement, assessments, strongest, reasons);
         }
-        LinkageEvidence le = all.get(winner.linkage);
-        KEvidence e = winner.e;
-        var levels = levels(le);
-        if (!levels.contains(e.k())) {
-            levels.add(e.k());
-            levels.sort(null);
-        }
+        LinkageEvidence le = all.get(winnerLinkage);
+        KEvidence e = le.at(winner.k());
+        List<Integer> levels = levels(le, assessments, winner);
         List<Recommendation.CriterionChoice> criteria = criteria(le);
-        var reasons = new Reasons(evidence, rule).forSolution(le, e, winner.verdict, levels, criteria, perLinkage.length > 1
-                ? summaries : List.of());
-        return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict, levels, reasons,
-                criteria, flaggedClusters(e), flaggedSamples(e), summaries, agreement, rule);
+        List<Recommendation.KShare> votes = votes(le);
+        reasons.add(new Reason.Chosen(winner, e));
+        if (e.outliers() > 0) {
+            reasons.add(new Reason.Outliers(e.outliers(), evidence.minClusterSize()));
+        }
+        if (!votes.isEmpty()) {
+            reasons.add(new Reason.Votes(le.linkage(), votes, e.k()));
+        }
+        if (le.gap() != null) {
+            reasons.add(new Reason.Gap(le.gapChoice(), le.gap().ruleMet(), e.k()));
+        }
+        var disagreeing = criteria.stream().filter(c -> c.k() != e.k()).toList();
+        if (!disagreeing.isEmpty()) {
+            reasons.add(new Reason.Criteria(disagreeing, e.k()));
+        }
+        if (levels.size() > 1) {
+            reasons.add(new Reason.Levels(levels));
+        }
+        if (e.tieDependent()) {
+            reasons.add(new Reason.TieDependent(e.k()));
+        }
+        if (!le.tree().monotone()) {
+            reasons.add(new Reason.Inversions(le.linkage(), e.k()));
+        }
+        if (all.size() > 1) {
+            reasons.add(new Reason.OtherLinkages(le.linkage(),
+                    summaries.stream().filter(s -> s.linkage() != le.linkage()).toList()));
+        }
+        return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict(), levels, reasons, criteria,
+                flaggedClusters(e), flaggedSamples(e), summaries, agreement, rule, assessments, test, e.clustering(),
+                evidence.minClusterSize(), votes);
     }
 
     /**
-     * The levels of nested structure on one linkage: solutions that are eligible, keep every cluster stable,
-     * hold no cluster smaller than {@code max(3, 2% of n)} (splitting off outliers is not a level), and persist
-     * over a range of cut heights at least half as long, relative to the height, as the longest-persisting such
-     * solution. The last condition reads the dendrogram's merge-height gaps (a cluster solution that exists only
-     * over a sliver of heights is a transient state of the agglomeration, not a level); on trees with inversions
-     * an empty interval never qualifies.
+     * The levels of nested structure on the recommended linkage: its supported solutions that persist over a range
+     * of cut heights at least half as long, relative to the height, as the longest-persisting supported one (a
+     * solution that exists only over a sliver of heights is a passing state of the agglomeration, such as one
+     * family split while the other is not yet); the recommended k is always a level. On trees with inversions an
+     * empty height range never qualifies. The persistence condition is our choice.
      */
-    private List<Integer> levels(LinkageEvidence le) {
-        int n = evidence.samples();
-        int minSize = Math.max(3, (int) Math.ceil(0.02 * n));
-        var candidates = new ArrayList<KEvidence>();
+    private static List<Integer> levels(LinkageEvidence le, List<Assessment> assessments, Assessment winner) {
+        var supported = new ArrayList<KEvidence>();
         double widest = 0;
-        for (KEvidence o : le.byK()) {
-            boolean bigEnough = o.clusters().stream().allMatch(c -> c.size() >= minSize);
-            if (verdictOf(o) != Verdict.UNSUPPORTED && o.worstJaccard() >= rule.stableJaccard() && bigEnough) {
-                candidates.add(o);
-                widest = Math.max(widest, persistence(o));
+        for (Assessment a : assessments) {
+            if (a.linkage() == le.linkage() && a.verdict() == Verdict.SUPPORTED) {
+                KEvidence e = le.at(a.k());
+                supported.add(e);
+                widest = Math.max(widest, persistence(e));
             }
         }
         var out = new ArrayList<Integer>();
-        for (KEvidence o : candidates) {
-            if (widest > 0 && persistence(o) >= 0.5 * widest) {
-                out.add(o.k());
+        for (KEvidence e : supported) {
+            if (e.k() == winner.k() || (widest > 0 && persistence(e) >= 0.5 * widest)) {
+                out.add(e.k());
             }
+        }
+        if (!out.contains(winner.k())) {
+            out.add(winner.k());
+            out.sort(null);
         }
         return out;
     }
 
-    /** The share of the height at which exactly this many clusters exist: (high - low) / high, 0 if empty. */
+    /** The share of the height over which this state exists: (high - low) / high, 0 if empty. */
     private static double persistence(KEvidence e) {
         double low = e.cutHeight().low();
         double high = e.cutHeight().high();
         return high > low && high > 0 && Double.isFinite(high) ? (high - low) / high : 0;
     }
 
-    private Recommendation unsupported(List<Recommendation.LinkageSummary> summaries, double[][] agreement) {
+    private Recommendation unsupported(List<Recommendation.LinkageSummary> summaries, double[][] agreement,
+            List<Assessment> assessments, Assessment[] strongest, List<Reason> reasons) {
         // Report the tree with the highest cophenetic correlation: it represents the distances best.
         int l = 0;
         for (int i = 1; i < evidence.linkages().size(); i++) {
@@ -161,16 +176,66 @@ public final class Recommender {
                 l = i;
             }
         }
+        for (Assessment a : strongest) {
+            if (a != null) {
+                reasons.add(new Reason.BestFailed(a));
+            }
+        }
         LinkageEvidence le = evidence.linkages().get(l);
+        Clustering one = SizedCuts.of(le.tree(), evidence.minClusterSize(), 2).oneClusterWithOutliers(FAR_FACTOR);
+        if (one.outlierCount() > 0) {
+            reasons.add(new Reason.Outliers(one.outlierCount(), evidence.minClusterSize()));
+        }
         int n = le.tree().leaves();
         double root = le.tree().height(n - 2);
         var cut = new CutHeight(root, Double.POSITIVE_INFINITY, root);
-        var reasons = new Reasons(evidence, rule).forUnsupported();
         return new Recommendation(le.linkage(), 1, cut, Verdict.UNSUPPORTED, List.of(), reasons, criteria(le),
-                List.of(), List.of(), summaries, agreement, rule);
+                List.of(), List.of(), summaries, agreement, rule, assessments, evidence.structureTest(), one,
+                evidence.minClusterSize(), List.of());
     }
 
-    private double[][] agreement(Candidate[] perLinkage) {
+    /**
+     * Per k, the share of replicates in which that k has the largest excess over the null when the replicate's
+     * own ARI replaces the mean ARI (the separation term is the solution's own): the rule's ordering read
+     * replicate by replicate.
+     */
+    private List<Recommendation.KShare> votes(LinkageEvidence le) {
+        if (le.byK().isEmpty() || le.byK().get(0).stability().nullModel() == null) {
+            return List.of();
+        }
+        int replicates = le.byK().get(0).replicateAri().length;
+        int[] wins = new int[evidence.settings().maxK() + 1];
+        double[][] ari = new double[le.byK().size()][];
+        for (int t = 0; t < ari.length; t++) {
+            ari[t] = le.byK().get(t).replicateAri();
+        }
+        for (int r = 0; r < replicates; r++) {
+            int best = -1;
+            double bestValue = Double.NEGATIVE_INFINITY;
+            for (int t = 0; t < ari.length; t++) {
+                KEvidence e = le.byK().get(t);
+                NullStability ns = e.stability().nullModel();
+                double v = NullCalibration.excess(ari[t][r], e.silhouette(), ns.ariMean(), ns.ariSD(),
+                        ns.silhouetteMean(), ns.silhouetteSD());
+                if (v > bestValue) {
+                    bestValue = v;
+                    best = e.k();
+                }
+            }
+            if (best > 0) {
+                wins[best]++;
+            }
+        }
+        var out = new ArrayList<Recommendation.KShare>();
+        for (int k = 2; k < wins.length; k++) {
+            if (wins[k] > 0) {
+                out.add(new Recommendation.KShare(k, wins[k] / (double) replicates));
+            }
+        }
+        return out;
+    }
+
+    private double[][] agreement(Assessment[] perLinkage) {
         int m = perLinkage.length;
         double[][] a = new double[m][m];
         for (int i = 0; i < m; i++) {
@@ -178,69 +243,35 @@ public final class Recommender {
                 if (perLinkage[i] == null || perLinkage[j] == null) {
                     a[i][j] = i == j ? 1.0 : Double.NaN;
                 } else {
-                    a[i][j] = AdjustedRandIndex.of(perLinkage[i].e.partition(), perLinkage[j].e.partition())
-                            .compute().value();
+                    var pi = evidence.linkages().get(i).at(perLinkage[i].k()).clustering().withSingletons();
+                    var pj = evidence.linkages().get(j).at(perLinkage[j].k()).clustering().withSingletons();
+                    a[i][j] = AdjustedRandIndex.of(pi, pj).compute().value();
                 }
             }
         }
         return a;
     }
 
-    /** Each criterion's own choice of k on one linkage. */
+    /** Each criterion's own choice of k on one linkage, and the gap statistic's. */
     List<Recommendation.CriterionChoice> criteria(LinkageEvidence le) {
         var out = new ArrayList<Recommendation.CriterionChoice>();
-        KEvidence bestAri = null;
-        KEvidence bestPac = null;
-        KEvidence bestJac = null;
-        KEvidence bestSil = null;
-        KEvidence bestCh = null;
-        KEvidence bestDb = null;
-        KEvidence bestDunn = null;
-        for (KEvidence e : le.byK()) {
-            bestAri = pick(bestAri, e, e.stability().ari().mean() - nullAri(e), bestAri == null ? 0
-                    : bestAri.stability().ari().mean() - nullAri(bestAri), true);
-            bestPac = pick(bestPac, e, e.stability().pac(), bestPac == null ? 0 : bestPac.stability().pac(), false);
-            bestJac = pick(bestJac, e, e.worstJaccard(), bestJac == null ? 0 : bestJac.worstJaccard(), true);
-            bestSil = pick(bestSil, e, e.silhouette(), bestSil == null ? 0 : bestSil.silhouette(), true);
-            bestCh = pick(bestCh, e, e.calinskiHarabasz(), bestCh == null ? 0 : bestCh.calinskiHarabasz(), true);
-            bestDb = pick(bestDb, e, e.daviesBouldin(), bestDb == null ? 0 : bestDb.daviesBouldin(), false);
-            bestDunn = pick(bestDunn, e, e.dunn(), bestDunn == null ? 0 : bestDunn.dunn(), true);
+        for (Criterion c : Criterion.values()) {
+            KEvidence best = null;
+            for (KEvidence e : le.byK()) {
+                if (best == null ? !Double.isNaN(c.of(e)) : c.better(c.of(e), c.of(best))) {
+                    best = e;
+                }
+            }
+            if (best != null) {
+                out.add(new Recommendation.CriterionChoice(c, c.label(), best.k(),
+                        (c.direction() == Criterion.Direction.LARGER ? "largest " : "smallest ") + c.label()));
+            }
         }
-        boolean calibrated = le.byK().get(0).stability().nullModel() != null;
-        add(out, "stability (ARI)", bestAri, calibrated ? "largest mean ARI above the null mean ARI"
-                : "largest mean ARI");
-        add(out, "PAC", bestPac, "smallest proportion of ambiguous clustering");
-        add(out, "cluster-wise Jaccard", bestJac, "largest smallest-cluster Jaccard");
-        add(out, "silhouette", bestSil, "largest average silhouette");
         if (le.gap() != null) {
-            out.add(new Recommendation.CriterionChoice("gap statistic", le.gapChoice(), le.gap().ruleMet()
+            out.add(new Recommendation.CriterionChoice(null, "gap statistic", le.gapChoice(), le.gap().ruleMet()
                     ? "smallest k with Gap(k) >= Gap(k+1) - s(k+1)" : "rule not met up to the largest k; largest k shown"));
         }
-        add(out, "Calinski-Harabasz", bestCh, "largest index");
-        add(out, "Davies-Bouldin", bestDb, "smallest index");
-        add(out, "Dunn", bestDunn, "largest index");
         return out;
-    }
-
-    private static double nullAri(KEvidence e) {
-        NullStability n = e.stability().nullModel();
-        return n == null ? 0 : n.ariMean();
-    }
-
-    private static KEvidence pick(KEvidence best, KEvidence e, double value, double bestValue, boolean larger) {
-        if (Double.isNaN(value)) {
-            return best;
-        }
-        if (best == null || Double.isNaN(bestValue) || (larger ? value > bestValue : value < bestValue)) {
-            return e;
-        }
-        return best;
-    }
-
-    private static void add(List<Recommendation.CriterionChoice> out, String name, KEvidence e, String basis) {
-        if (e != null) {
-            out.add(new Recommendation.CriterionChoice(name, e.k(), basis));
-        }
     }
 
     private List<ClusterEvidence> flaggedClusters(KEvidence e) {
@@ -258,16 +289,14 @@ public final class Recommender {
         double[] st = e.sampleStability();
         double[] sil = e.sampleSilhouette();
         for (int i = 0; i < st.length; i++) {
-            var why = new ArrayList<String>();
-            if (st[i] < rule.unstableSample()) {
-                why.add(String.format(Locale.ROOT, "stays with its cluster in %.0f%% of replicates", 100 * st[i]));
+            if (e.clustering().isOutlier(i)) {
+                continue;
             }
-            if (sil[i] < 0) {
-                why.add(String.format(Locale.ROOT, "negative silhouette (%.2f): closer to another cluster", sil[i]));
-            }
-            if (!why.isEmpty()) {
-                out.add(new Recommendation.SampleFlag(i, evidence.sampleIds().get(i), e.partition().label(i) + 1, st[i],
-                        sil[i], why));
+            boolean unstable = st[i] < rule.unstableSample();
+            boolean negative = sil[i] < 0;
+            if (unstable || negative) {
+                out.add(new Recommendation.SampleFlag(i, evidence.sampleIds().get(i), e.clustering().label(i) + 1,
+                        st[i], sil[i], unstable, negative));
             }
         }
         return out;

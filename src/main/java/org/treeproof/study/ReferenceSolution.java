@@ -3,49 +3,54 @@ package org.treeproof.study;
 import java.util.List;
 import org.treeproof.distance.CondensedDistances;
 import org.treeproof.resample.LocalExecutor;
-import org.treeproof.tree.KCut;
 import org.treeproof.tree.Linkage;
 import org.treeproof.tree.MergeTree;
+import org.treeproof.tree.SizedCut;
+import org.treeproof.tree.SizedCuts;
 
 /**
- * One linkage's tree on all samples and its cuts at k = 2..maxK: the solutions every replicate is
- * compared with.
+ * One linkage's tree on all samples and its cuts into k = 1..maxK clusters of at least the study's minimum
+ * size, smaller branches set aside as outliers: the solutions every replicate is compared with.
  *
  * @param linkage the linkage
  * @param tree    the tree on all samples
- * @param cuts    {@code cuts[k - 2]} is the cut at k
+ * @param cuts    {@code cuts[k - 1]} is the cut at k, or {@code null} when no cut of the tree has exactly k
+ *                clusters of the minimum size
+ * @param minSize the smallest cluster
  */
-record ReferenceSolution(Linkage linkage, MergeTree tree, KCut[] cuts) {
+record ReferenceSolution(Linkage linkage, MergeTree tree, SizedCut[] cuts, int minSize) {
 
     ReferenceSolution {
         cuts = cuts.clone();
     }
 
-    KCut cut(int k) {
-        return cuts[k - 2];
+    /** The cut at k (1..maxK), or {@code null} when it does not exist. */
+    SizedCut cut(int k) {
+        return cuts[k - 1];
     }
 
     int maxK() {
-        return cuts.length + 1;
+        return cuts.length;
     }
 
-    static ReferenceSolution of(Linkage linkage, CondensedDistances d, int maxK) {
+    static ReferenceSolution of(Linkage linkage, CondensedDistances d, int maxK, int minSize) {
         MergeTree tree = linkage.cluster(d);
-        KCut[] cuts = new KCut[maxK - 1];
-        for (int k = 2; k <= maxK; k++) {
-            cuts[k - 2] = tree.cutAtK(k);
+        SizedCuts sized = SizedCuts.of(tree, minSize, maxK);
+        SizedCut[] cuts = new SizedCut[maxK];
+        for (int k = 1; k <= maxK; k++) {
+            cuts[k - 1] = sized.at(k);
         }
-        return new ReferenceSolution(linkage, tree, cuts);
+        return new ReferenceSolution(linkage, tree, cuts, minSize);
     }
 
     /**
      * The reference solutions of every linkage, built in parallel (one linkage per task) in this JVM, where the
      * full matrix is.
      */
-    static List<ReferenceSolution> all(List<Linkage> linkages, CondensedDistances d, int maxK,
+    static List<ReferenceSolution> all(List<Linkage> linkages, CondensedDistances d, int maxK, int minSize,
             LocalExecutor executor) {
         var out = new java.util.ArrayList<ReferenceSolution>(linkages.size());
-        executor.runHere(0, linkages.size(), i -> of(linkages.get(i), d, maxK), out::add);
+        executor.runHere(0, linkages.size(), i -> of(linkages.get(i), d, maxK, minSize), out::add);
         return List.copyOf(out);
     }
 }

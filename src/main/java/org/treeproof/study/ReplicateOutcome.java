@@ -10,8 +10,9 @@ import org.treeproof.score.BranchSupport;
  *
  * @param index    the replicate's index
  * @param distinct the distinct samples it held, sorted
- * @param labels   {@code labels[l][k - 2][a]}: the cluster (0-based, canonical) of {@code distinct[a]} when
- *                 linkage {@code l}'s replicate tree is cut at k
+ * @param labels   {@code labels[l][k - 1][a]}: the cluster (0-based, canonical; -1 for an outlier) of
+ *                 {@code distinct[a]} when linkage {@code l}'s replicate tree is cut into k clusters of at least
+ *                 the replicate's minimum size, for k = 1..maxK
  * @param support  per linkage, which reference clades this replicate counted and reproduced; {@code null}
  *                 when branch support is not computed (null calibration)
  */

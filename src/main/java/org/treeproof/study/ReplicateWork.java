@@ -6,21 +6,24 @@ import java.util.List;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.distance.CondensedDistances;
 import org.treeproof.distance.Metric;
+import org.treeproof.distance.OwnedDistances;
 import org.treeproof.resample.ReplicatePlan;
 import org.treeproof.resample.ReplicatePlanner;
 import org.treeproof.resample.ReplicateTask;
 import org.treeproof.score.BranchSupport;
 import org.treeproof.tree.Linkage;
 import org.treeproof.tree.MergeTree;
+import org.treeproof.tree.SizedCuts;
 
 /**
  * The replicate function: a pure function of (data, distances, linkages, plan) that draws the replicate,
- * reclusters it with every linkage and cuts it at k = 2..maxK.
+ * reclusters it with every linkage and cuts it into k = 1..maxK clusters of at least the (scaled) minimum size,
+ * smaller branches marked as outliers ({@link SizedCuts}).
  *
  * <p>Sample replicates gather their rows of the full distance matrix and never recompute a distance;
  * feature replicates recompute distances over their features, on one thread (the replicates themselves
- * run in parallel). Memory per running replicate: one condensed matrix over its draws, the linkage's
- * working copy of it, and O(n · maxK) labels.
+ * run in parallel). Memory per running replicate: one condensed matrix over its draws, the working copy of
+ * every linkage but the last (which works in place on it), and O(n · maxK) labels.
  *
  * <p><b>Shipped to other machines</b>, the work carries the data table but not the full n² matrix (unless
  * there is no table, as for an input of distances). A copy without the matrix computes each replicate's
@@ -38,15 +41,20 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
     private final List<BranchSupport> supports;
     private final ReplicatePlanner planner;
     private final int maxK;
+    private final int minClusterSize;
+    private final int samples;
 
     /**
      * @param data      the data table, or {@code null} when only distances are known
      * @param distances the full matrix under {@code metric}, or {@code null} to compute distances from {@code data}
      * @param supports  per linkage, the branch-support counter of its reference tree, or {@code null} to skip
      *                  branch support
+     * @param minClusterSize the study's smallest cluster, scaled to each replicate by
+     *                  {@link StudySettings#minClusterSizeFor}
+     * @param samples   the number of samples of the study
      */
     ReplicateWork(DataMatrix data, CondensedDistances distances, Metric metric, List<Linkage> linkages,
-            List<BranchSupport> supports, ReplicatePlanner planner, int maxK) {
+            List<BranchSupport> supports, ReplicatePlanner planner, int maxK, int minClusterSize, int samples) {
         if (data == null && distances == null) {
             throw new IllegalArgumentException("replicate work needs data or distances");
         }
@@ -60,6 +68,8 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         this.supports = supports == null ? null : List.copyOf(supports);
         this.planner = planner;
         this.maxK = maxK;
+        this.minClusterSize = minClusterSize;
+        this.samples = samples;
     }
 
     @Override
@@ -67,24 +77,29 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         ReplicatePlan plan = planner.plan(index);
         int[] draws = plan.draws();
         int[] distinct = plan.distinct();
-        CondensedDistances d;
+        OwnedDistances d;
         if (plan.resamplesFeatures() || distances == null) {
             DataMatrix rows = data.selectSamples(distinct);
-            CondensedDistances onDistinct = plan.resamplesFeatures() ? metric.compute(rows, plan.features(), 1)
-                    : metric.compute(rows, 1);
-            d = draws.length == distinct.length ? onDistinct : onDistinct.gather(plan.drawToDistinct());
+            OwnedDistances onDistinct = plan.resamplesFeatures() ? metric.computeOwned(rows, plan.features(), 1)
+                    : metric.computeOwned(rows, 1);
+            d = draws.length == distinct.length ? onDistinct
+                    : onDistinct.freeze().gatherOwned(plan.drawToDistinct());
         } else {
-            d = distances.gather(draws);
+            d = distances.gatherOwned(draws);
         }
         int[] firstDrawOf = firstDrawOfDistinct(plan);
         int[][][] labels = new int[linkages.size()][][];
         BranchSupport.Replicate[] support = supports == null ? null : new BranchSupport.Replicate[linkages.size()];
-        for (int l = 0; l < linkages.size(); l++) {
-            MergeTree tree = linkages.get(l).cluster(d);
-            labels[l] = new int[maxK - 1][];
-            for (int k = 2; k <= maxK; k++) {
-                int[] onDraws = tree.cutLabelsAtK(k);
-                labels[l][k - 2] = firstDrawOf == null ? onDraws : onDistinct(onDraws, firstDrawOf);
+        int last = linkages.size() - 1;
+        for (int l = 0; l <= last; l++) {
+            // each linkage overwrites a matrix of its own; the last one takes the replicate's, so no copy is made
+            MergeTree tree = linkages.get(l).clusterInPlace(l == last ? d : d.copy());
+            int minSize = StudySettings.minClusterSizeFor(minClusterSize, samples, tree.leaves());
+            int[][] cuts = SizedCuts.of(tree, minSize, maxK).labelsUpTo(maxK);
+            labels[l] = new int[maxK][];
+            for (int k = 1; k <= maxK; k++) {
+                int[] onDraws = cuts[k - 1];
+                labels[l][k - 1] = firstDrawOf == null ? onDraws : onDistinct(onDraws, firstDrawOf);
             }
             if (support != null) {
                 support[l] = supports.get(l).score(draws, tree);
@@ -103,7 +118,8 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         if (distances != null || planner.resamplesFeatures()) {
             return this;
         }
-        return new ReplicateWork(data, metric.compute(data, threads), metric, linkages, supports, planner, maxK);
+        return new ReplicateWork(data, metric.compute(data, threads), metric, linkages, supports, planner, maxK,
+                minClusterSize, samples);
     }
 
     /** For each distinct sample, the position of its first draw; null when there are no repeats. */
@@ -131,12 +147,13 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         for (int a = 0; a < raw.length; a++) {
             raw[a] = onDraws[firstDrawOf[a]];
         }
-        return org.treeproof.partition.Partition.of(raw).labels();
+        return org.treeproof.partition.Clustering.of(raw).labels();
     }
 
     /** The data travel; the full matrix only when there is no data table to compute it from. */
     private Object writeReplace() {
-        return new SerialForm(data, data == null ? distances : null, metric, linkages, supports, planner, maxK);
+        return new SerialForm(data, data == null ? distances : null, metric, linkages, supports, planner, maxK,
+                minClusterSize, samples);
     }
 
     private void readObject(ObjectInputStream in) throws java.io.InvalidObjectException {
@@ -144,9 +161,11 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
     }
 
     private record SerialForm(DataMatrix data, CondensedDistances distances, Metric metric, List<Linkage> linkages,
-            List<BranchSupport> supports, ReplicatePlanner planner, int maxK) implements Serializable {
+            List<BranchSupport> supports, ReplicatePlanner planner, int maxK, int minClusterSize, int samples)
+            implements Serializable {
         private Object readResolve() {
-            return new ReplicateWork(data, distances, metric, linkages, supports, planner, maxK);
+            return new ReplicateWork(data, distances, metric, linkages, supports, planner, maxK, minClusterSize,
+                    samples);
         }
     }
 }

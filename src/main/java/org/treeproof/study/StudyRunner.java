@@ -21,7 +21,8 @@ import org.treeproof.score.JaccardStability;
 import org.treeproof.score.ReplicateSummary;
 import org.treeproof.score.SampleStability;
 import org.treeproof.score.Silhouette;
-import org.treeproof.tree.KCut;
+import org.treeproof.partition.Clustering;
+import org.treeproof.tree.SizedCut;
 
 /**
  * Runs a study: the reference tree of every linkage, B resampled replicates, null calibration and the
@@ -74,22 +75,60 @@ public final class StudyRunner {
         progress.stage("distances and reference trees", 1 + settings.linkages().size());
         CondensedDistances d = input.distances() != null ? input.distances() : metric.compute(data, kernelThreads);
         progress.step();
-        List<ReferenceSolution> refs = ReferenceSolution.all(settings.linkages(), d, maxK, here);
+        int minSize = settings.minClusterSize(n);
+        List<ReferenceSolution> refs = ReferenceSolution.all(settings.linkages(), d, maxK, minSize, here);
         for (int i = 0; i < refs.size(); i++) {
             progress.step();
         }
 
         StabilityTally tally = stability(data, d, refs, settings.replicates(), settings.seed(), true,
                 "replicates");
-        NullTable nulls = data != null && settings.nullSets() > 0 ? nullCalibration(data, refs.size()) : null;
+        NullTable nulls = data != null && settings.nullSets() > 0 ? nullCalibration(data, refs.size(), minSize) : null;
         GapResult[] gaps = data != null && settings.referenceSets() > 0
                 ? new GapRun(data, d, settings, refs, executor, progress, checkpoint).run() : null;
 
+        double[][] silhouettes = new double[refs.size()][maxK - 1];
+        Silhouette.Result[][] silResults = new Silhouette.Result[refs.size()][maxK - 1];
+        for (int l = 0; l < refs.size(); l++) {
+            for (int k = 2; k <= maxK; k++) {
+                SizedCut cut = refs.get(l).cut(k);
+                silResults[l][k - 2] = cut == null ? null : Silhouette.of(d, cut.clustering()).compute();
+                silhouettes[l][k - 2] = cut == null ? Double.NaN : silResults[l][k - 2].mean();
+            }
+        }
+        NullCalibration.Result calibration = nulls == null ? null : calibrate(tally, silhouettes, nulls);
         var linkages = new ArrayList<LinkageEvidence>();
         for (int l = 0; l < refs.size(); l++) {
-            linkages.add(linkageEvidence(l, refs.get(l), data, d, tally, nulls, gaps == null ? null : gaps[l]));
+            linkages.add(linkageEvidence(l, refs.get(l), data, d, tally, silResults[l],
+                    calibration == null ? null : calibration.cells()[l], gaps == null ? null : gaps[l]));
         }
-        return new Evidence(input.sampleIds(), data == null ? 0 : data.features(), settings, linkages);
+        return new Evidence(input.sampleIds(), data == null ? 0 : data.features(), settings, linkages, minSize,
+                calibration == null ? null : calibration.test());
+    }
+
+    private NullCalibration.Result calibrate(StabilityTally tally, double[][] silhouettes, NullTable nulls) {
+        int links = silhouettes.length;
+        int ks = settings.maxK() - 1;
+        double[][] test = new double[links][ks];
+        double[][] all = new double[links][ks];
+        for (int l = 0; l < links; l++) {
+            for (int k = 2; k <= settings.maxK(); k++) {
+                double[] ari = tally.ari(l, k);
+                all[l][k - 2] = mean(ari, ari.length);
+                test[l][k - 2] = mean(ari, Math.min(ari.length, settings.nullReplicates()));
+            }
+        }
+        return NullCalibration.of(test, all, silhouettes, nulls.meanAri(), nulls.silhouette(), nulls.pac(),
+                settings.nullReplicates());
+    }
+
+    /** Mean of the first {@code count} values; NaN when any is NaN (the cut does not exist). */
+    private static double mean(double[] v, int count) {
+        double s = 0;
+        for (int i = 0; i < count; i++) {
+            s += v[i];
+        }
+        return count == 0 ? Double.NaN : s / count;
     }
 
     private StabilityTally stability(DataMatrix data, CondensedDistances d, List<ReferenceSolution> refs,
@@ -105,7 +144,7 @@ public final class StudyRunner {
             }
         }
         var work = new ReplicateWork(data, d, settings.metric(), settings.linkages(), supports, planner,
-                settings.maxK());
+                settings.maxK(), refs.get(0).minSize(), n);
         var tally = new StabilityTally(refs, n, settings.maxK(), replicates, full);
         if (stage != null) {
             progress.stage(stage, replicates);
@@ -137,7 +176,7 @@ public final class StudyRunner {
     private record NullTable(double[][][] meanAri, double[][][] pac, double[][][] silhouette) {
     }
 
-    private NullTable nullCalibration(DataMatrix data, int linkages) {
+    private NullTable nullCalibration(DataMatrix data, int linkages, int minSize) {
         int sets = settings.nullSets();
         int maxK = settings.maxK();
         var generator = org.treeproof.resample.ReferenceData.nullModel(settings.metric(), data);
@@ -161,15 +200,17 @@ public final class StudyRunner {
             DataMatrix nullData = settings.metric().rotationInvariant() && !settings.resamplesFeatures()
                     ? generator.drawCoordinates(seed) : generator.draw(seed);
             CondensedDistances nd = settings.metric().compute(nullData, kernelThreads);
-            List<ReferenceSolution> nullRefs = ReferenceSolution.all(settings.linkages(), nd, maxK, here);
+            List<ReferenceSolution> nullRefs = ReferenceSolution.all(settings.linkages(), nd, maxK, minSize, here);
             StabilityTally t = stability(nullData, nd, nullRefs, settings.nullReplicates(),
                     Seeds.seedFor(settings.seed(), Seeds.Purpose.NULL_REPLICATE, j), false, null);
             for (int l = 0; l < linkages; l++) {
                 ConsensusMatrix cm = t.consensus(l);
                 for (int k = 2; k <= maxK; k++) {
-                    meanAri[l][k - 2][j] = ReplicateSummary.of(t.ari(l, k)).mean();
+                    SizedCut cut = nullRefs.get(l).cut(k);
+                    double[] a = t.ari(l, k);
+                    meanAri[l][k - 2][j] = cut == null ? Double.NaN : mean(a, a.length);
                     pac[l][k - 2][j] = cm.pac(k, pacLow(), pacHigh());
-                    sil[l][k - 2][j] = Silhouette.of(nd, nullRefs.get(l).cut(k).partition()).compute().mean();
+                    sil[l][k - 2][j] = cut == null ? Double.NaN : Silhouette.of(nd, cut.clustering()).compute().mean();
                 }
             }
             checkpoint.rowDone(Checkpoint.Stage.NULL_SETS, j, packNullRow(j, meanAri, pac, sil));
@@ -220,60 +261,59 @@ public final class StudyRunner {
     }
 
     private LinkageEvidence linkageEvidence(int l, ReferenceSolution ref, DataMatrix data, CondensedDistances d,
-            StabilityTally tally, NullTable nulls, GapResult gap) {
+            StabilityTally tally, Silhouette.Result[] sils, NullStability[] calibrated, GapResult gap) {
         ConsensusMatrix consensus = tally.consensus(l);
         var byK = new ArrayList<KEvidence>();
         for (int k = 2; k <= settings.maxK(); k++) {
-            KCut cut = ref.cut(k);
-            Partition p = cut.partition();
-            Silhouette.Result sil = Silhouette.of(d, p).compute();
-            double ch = data == null ? Double.NaN : CalinskiHarabasz.of(data, p).compute().value();
-            double db = data == null ? Double.NaN : DaviesBouldin.of(data, p).compute().value();
-            double dunn = DunnIndex.of(d, p).compute().value();
+            SizedCut cut = ref.cut(k);
+            if (cut == null) {
+                continue;
+            }
+            Clustering c = cut.clustering();
+            Silhouette.Result sil = sils[k - 2];
+            DataMatrix clusteredData = data == null ? null
+                    : c.outlierCount() == 0 ? data : data.selectSamples(c.clustered());
+            Partition clustered = c.clusteredPartition();
+            double ch = data == null ? Double.NaN : CalinskiHarabasz.of(clusteredData, clustered).compute().value();
+            double db = data == null ? Double.NaN : DaviesBouldin.of(clusteredData, clustered).compute().value();
+            double dunn = DunnIndex.of(d, c).value();
+            Partition withSingletons = c.withSingletons();
             double pac = consensus.pac(k, pacLow(), pacHigh());
-            ReplicateSummary ari = ReplicateSummary.of(tally.ari(l, k));
-            NullStability ns = nulls == null ? null : nullStability(nulls, l, k, ari.mean(), pac, sil.mean());
+            double[] replicateAri = tally.ari(l, k);
+            ReplicateSummary ari = ReplicateSummary.of(replicateAri);
+            NullStability ns = calibrated == null ? null : calibrated[k - 2];
             JaccardStability.Result jac = tally.jaccard(l, k);
-            int[] sizes = p.clusterSizes();
+            int[] sizes = c.clusterSizes();
+            int[] singletonLabels = withSingletons.labels();
+            int[] firstMember = new int[c.k()];
+            java.util.Arrays.fill(firstMember, -1);
+            for (int i = 0; i < c.size(); i++) {
+                int lab = c.label(i);
+                if (lab >= 0 && firstMember[lab] < 0) {
+                    firstMember[lab] = i;
+                }
+            }
             var clusters = new ArrayList<ClusterEvidence>();
-            for (int c = 0; c < k; c++) {
-                JaccardStability.Cluster jc = jac.cluster(c);
-                clusters.add(new ClusterEvidence(c + 1, sizes[c], jc.mean(), jc.dissolvedShare(), jc.recoveredShare(),
+            for (int cl = 0; cl < c.k(); cl++) {
+                JaccardStability.Cluster jc = jac.cluster(singletonLabels[firstMember[cl]]);
+                clusters.add(new ClusterEvidence(cl + 1, sizes[cl], jc.mean(), jc.dissolvedShare(), jc.recoveredShare(),
                         jc.status()));
             }
-            SampleStability.Result ss = tally.samples(l, k);
-            byK.add(new KEvidence(k, new CutHeight(cut.low(), cut.high(), cut.chosen()), cut.tieDependent(), p,
-                    sil.mean(), ch, db, dunn, gap == null ? Double.NaN : gap.gapAt(k),
+            double[] sampleStability = tally.samples(l, k).stability();
+            double[] sampleConsensus = consensus.itemConsensus(k, withSingletons);
+            for (int i = 0; i < c.size(); i++) {
+                if (c.isOutlier(i)) {
+                    sampleStability[i] = Double.NaN;
+                    sampleConsensus[i] = Double.NaN;
+                }
+            }
+            byK.add(new KEvidence(k, new CutHeight(cut.low(), cut.high(), cut.chosen()), cut.tieDependent(), c,
+                    cut.branches(), sil.mean(), ch, db, dunn, gap == null ? Double.NaN : gap.gapAt(k),
                     gap == null ? Double.NaN : gap.seAt(k), new Stability(ari, pac, ns), clusters, sil.values(),
-                    ss.stability(), consensus.itemConsensus(k, p)));
+                    sampleStability, sampleConsensus, replicateAri));
         }
         double cophenetic = ref.tree().copheneticCorrelation(d);
         return new LinkageEvidence(ref.linkage(), ref.tree(), cophenetic, gap, byK, tally.branchSupport(l), consensus);
-    }
-
-    private NullStability nullStability(NullTable nulls, int l, int k, double observedAri, double observedPac,
-            double observedSilhouette) {
-        double[] a = nulls.meanAri()[l][k - 2];
-        double[] c = nulls.pac()[l][k - 2];
-        double[] s = nulls.silhouette()[l][k - 2];
-        double observedCombined = NullStability.combined(observedAri, observedSilhouette);
-        int atLeast = 0;
-        int atMost = 0;
-        int silAtLeast = 0;
-        int combinedAtLeast = 0;
-        for (int j = 0; j < a.length; j++) {
-            atLeast += a[j] >= observedAri ? 1 : 0;
-            atMost += c[j] <= observedPac ? 1 : 0;
-            silAtLeast += !(s[j] < observedSilhouette) ? 1 : 0;
-            combinedAtLeast += !(NullStability.combined(a[j], s[j]) < observedCombined) ? 1 : 0;
-        }
-        double sets = a.length;
-        ReplicateSummary as = ReplicateSummary.of(a);
-        ReplicateSummary cs = ReplicateSummary.of(c);
-        ReplicateSummary ss = ReplicateSummary.of(finite(s));
-        return new NullStability(a.length, settings.nullReplicates(), as.mean(), as.low(), as.high(), cs.mean(),
-                cs.low(), cs.high(), ss.mean(), ss.low(), ss.high(), (1.0 + atLeast) / (1.0 + sets),
-                (1.0 + atMost) / (1.0 + sets), (1.0 + silAtLeast) / (1.0 + sets), (1.0 + combinedAtLeast) / (1.0 + sets));
     }
 
     private static double[] finite(double[] v) {

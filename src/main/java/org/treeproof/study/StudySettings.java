@@ -31,10 +31,12 @@ import org.treeproof.tree.Linkage;
  * @param pacLow          lower end of the PAC interval (exclusive)
  * @param pacHigh         upper end of the PAC interval (inclusive)
  * @param seed            the master seed every random draw derives from
+ * @param minClusterSize  the fewest samples a cluster holds; smaller branches are outliers. 0 chooses
+ *                        {@link #defaultMinClusterSize(int)} for the number of samples
  */
 public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int replicates, Resampling resampling,
         double sampleFraction, double featureFraction, int referenceSets, ReferenceData.Kind gapReference,
-        int nullSets, int nullReplicates, double pacLow, double pacHigh, long seed) {
+        int nullSets, int nullReplicates, double pacLow, double pacHigh, long seed, int minClusterSize) {
 
     /** The defaults a study uses when an option is not given (with the Euclidean metric). */
     public static final List<Linkage> DEFAULT_LINKAGES = List.of(Linkage.AVERAGE, Linkage.COMPLETE, Linkage.WARD);
@@ -61,6 +63,9 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
                 referenceSets, nullSets, nullReplicates, pacLow, pacHigh);
         if (referenceSets > 0) {
             gapReference.misfit(metric).ifPresent(problems::add);
+        }
+        if (minClusterSize < 0) {
+            problems.add("--min-cluster-size must be 0 (automatic) or a number of samples, got " + minClusterSize);
         }
         if (!problems.isEmpty()) {
             throw new InputException(String.join("; ", problems));
@@ -115,6 +120,14 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
 
     /** Checks the settings against the size of the input; every problem in one message. */
     public void checkAgainst(int samples, boolean hasData) {
+        checkAgainst(samples, hasData, true);
+    }
+
+    /**
+     * As {@link #checkAgainst(int, boolean)}; {@code maxKChosen} says whether the user gave --max-k, so that a
+     * default that does not fit is not blamed on them.
+     */
+    public void checkAgainst(int samples, boolean hasData, boolean maxKChosen) {
         var p = new ArrayList<String>();
         if (samples > org.treeproof.distance.CondensedDistances.MAX_ITEMS) {
             throw new InputException("the input has " + samples + " samples; a study holds at most "
@@ -122,11 +135,20 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
                     + "array); assess a subsample of the samples");
         }
         int smallest = resampling == Resampling.SUBSAMPLE ? (int) Math.round(sampleFraction * samples) : samples;
-        if (maxK > samples - 1) {
-            p.add("--max-k " + maxK + " needs more than " + maxK + " samples; the input has " + samples);
+        int largest = Math.min(samples, smallest) - 1;
+        if (largest < 2) {
+            p.add("the input has " + samples + " samples, too few to assess 2 clusters"
+                    + (smallest < samples && samples >= 3 ? " in replicates of " + smallest + " samples (--sample-fraction "
+                    + sampleFraction + "); raise --sample-fraction or add samples" : "; a study needs at least 3"));
+        } else if (maxK > largest && !maxKChosen) {
+            p.add("the input has " + samples + " samples" + (smallest < samples ? " (replicates of " + smallest + ")"
+                    : "") + ", too few for the default --max-k " + maxK + "; give --max-k " + largest + " or less");
+        } else if (maxK > samples - 1) {
+            p.add("--max-k " + maxK + " needs more than " + maxK + " samples; the input has " + samples
+                    + ": give --max-k " + largest + " or less");
         } else if (maxK > smallest - 1) {
             p.add("--max-k " + maxK + " is too large for replicates of " + smallest
-                    + " samples; lower --max-k or raise --sample-fraction");
+                    + " samples; lower --max-k to " + largest + " or raise --sample-fraction");
         }
         if (!hasData) {
             if (featureFraction < 1) {
@@ -136,6 +158,33 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         if (!p.isEmpty()) {
             throw new InputException(String.join("; ", p));
         }
+    }
+
+    /**
+     * The default smallest cluster: the larger of 5 samples and 1% of the samples (rounded up). Our choice, no
+     * published value: a branch of fewer than 5 samples cannot show a cluster's internal spread and is shed by
+     * single far points and heavy tails; on large studies 1% keeps a split of a few dozen samples from many
+     * thousands from counting as a subtype, while a group of 10 in 290 (3%) still counts.
+     */
+    public static int defaultMinClusterSize(int samples) {
+        return Math.max(5, (int) Math.ceil(samples / 100.0));
+    }
+
+    /** The effective smallest cluster for a study of {@code samples} samples. */
+    public int minClusterSize(int samples) {
+        return minClusterSize > 0 ? minClusterSize : defaultMinClusterSize(samples);
+    }
+
+    /**
+     * The smallest cluster inside a replicate tree over {@code leaves} samples (draws, counting repeats) of a
+     * study of {@code samples}: the study's minimum scaled to the replicate's size, at least 2 (so a lone sample
+     * is always an outlier) unless the study's minimum is 1 (no outliers at all).
+     */
+    public static int minClusterSizeFor(int studyMinimum, int samples, int leaves) {
+        if (studyMinimum <= 1) {
+            return 1;
+        }
+        return Math.max(2, (int) Math.round(studyMinimum * (double) leaves / samples));
     }
 
     /** Whether replicates draw features too (and so recompute distances). */
@@ -163,6 +212,7 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         private ReferenceData.Kind gapReference;
         private int nullSets = 19;
         private int nullReplicates = 10;
+        private int minClusterSize = 0;
         private double pacLow = 0.1;
         private double pacHigh = 0.9;
         private long seed = 1;
@@ -231,14 +281,21 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
             return this;
         }
 
+        public Builder minClusterSize(int v) {
+            minClusterSize = v;
+            return this;
+        }
+
         public Builder seed(long v) {
             seed = v;
             return this;
         }
 
         public StudySettings build() {
-            return new StudySettings(linkages == null ? defaultLinkagesFor(metric) : linkages, metric, maxK, replicates, resampling, sampleFraction, featureFraction,
-                    referenceSets, gapReference == null ? ReferenceData.Kind.defaultFor(metric) : gapReference, nullSets, nullReplicates, pacLow, pacHigh, seed);
+            return new StudySettings(linkages == null ? defaultLinkagesFor(metric) : linkages, metric, maxK, replicates,
+                    resampling, sampleFraction, featureFraction, referenceSets,
+                    gapReference == null ? ReferenceData.Kind.defaultFor(metric) : gapReference, nullSets, nullReplicates,
+                    pacLow, pacHigh, seed, minClusterSize);
         }
     }
 }

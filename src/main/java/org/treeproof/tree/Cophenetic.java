@@ -1,6 +1,7 @@
 package org.treeproof.tree;
 
 import org.treeproof.distance.CondensedDistances;
+import org.treeproof.distance.CondensedRows;
 
 /**
  * Cophenetic distances of a merge tree, one matrix row at a time: for leaf {@code i}, the cophenetic
@@ -73,22 +74,34 @@ final class Cophenetic {
      * are kept per row and added with Neumaier's compensation, which keeps the result within a few
      * ulps of a pairwise summation even for 2·10⁸ pairs.
      */
-    double correlation(CondensedDistances d) {
+    double correlation(CondensedRows d) {
+        return correlation(meanDistance(d), d);
+    }
+
+    /** The first pass: the mean of the distances over all pairs (NaN for fewer than two items). */
+    static double meanDistance(CondensedRows d) {
+        int n = d.size();
         long pairs = (long) n * (n - 1) / 2;
         if (pairs == 0) {
             return Double.NaN;
         }
         Sum sumD = new Sum();
-        int t = 0;
-        for (int i = 0; i < n - 1; i++) {
+        d.forEachRow((i, values, from) -> {
             double r = 0;
-            for (int end = t + (n - i - 1); t < end; t++) {
-                r += d.at(t);
+            for (int t = from, end = from + (n - i - 1); t < end; t++) {
+                r += values[t];
             }
             sumD.add(r);
-        }
-        double meanD = sumD.value() / pairs;
+        });
+        return sumD.value() / pairs;
+    }
 
+    /** The second pass, given the mean of the distances from {@link #meanDistance}. */
+    double correlation(double meanD, CondensedRows d) {
+        long pairs = (long) n * (n - 1) / 2;
+        if (pairs == 0) {
+            return Double.NaN;
+        }
         Sum sumC = new Sum();
         for (int s = 0; s < n - 1; s++) {
             sumC.add(pairCount(s) * height[s]);
@@ -103,19 +116,18 @@ final class Cophenetic {
         Sum sdd = new Sum();
         Sum sdc = new Sum();
         double[] row = new double[n];
-        t = 0;
-        for (int i = 0; i < n - 1; i++) {
+        d.forEachRow((i, values, from) -> {
             fillRow(i, row, meanC);
             double rdd = 0;
             double rdc = 0;
-            for (int j = i + 1; j < n; j++, t++) {
-                double x = d.at(t) - meanD;
+            for (int j = i + 1, t = from; j < n; j++, t++) {
+                double x = values[t] - meanD;
                 rdd += x * x;
                 rdc += x * row[j];
             }
             sdd.add(rdd);
             sdc.add(rdc);
-        }
+        });
         double vd = sdd.value();
         double vc = scc.value();
         if (!(vd > 0) || !(vc > 0)) {

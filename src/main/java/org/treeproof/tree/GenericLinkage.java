@@ -1,7 +1,5 @@
 package org.treeproof.tree;
 
-import org.treeproof.distance.CondensedDistances;
-
 /**
  * The generic agglomeration algorithm with a nearest-neighbour list, for the linkages that are not
  * reducible (centroid, median): every step merges the globally closest pair, found through a heap of
@@ -18,17 +16,17 @@ import org.treeproof.distance.CondensedDistances;
  */
 final class GenericLinkage {
     private final Linkage linkage;
-    private final CondensedDistances distances;
+    private final WorkingDistances w;
 
-    GenericLinkage(Linkage linkage, CondensedDistances distances) {
+    /** Clusters {@code w}, which it overwrites. */
+    GenericLinkage(Linkage linkage, WorkingDistances w) {
         this.linkage = linkage;
-        this.distances = distances;
+        this.w = w;
     }
 
     MergeTree run() {
-        int n = distances.size();
+        int n = w.n;
         int m = n - 1;
-        WorkingDistances w = new WorkingDistances(distances);
         int[] left = new int[m];
         int[] right = new int[m];
         double[] heights = new double[m];

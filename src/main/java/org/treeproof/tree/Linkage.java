@@ -4,6 +4,7 @@ import java.util.Locale;
 import java.util.Objects;
 import org.treeproof.data.InputException;
 import org.treeproof.distance.CondensedDistances;
+import org.treeproof.distance.OwnedDistances;
 
 /**
  * The linkage methods of agglomerative hierarchical clustering, each carrying its Lance-Williams
@@ -237,6 +238,18 @@ public enum Linkage {
         return algorithm.run(this, distances);
     }
 
+    /**
+     * Clusters the items of {@code distances} in place: the linkage takes the matrix over and overwrites it, so
+     * no working copy is made and {@code distances} is empty afterwards. The same tree as
+     * {@link #cluster(CondensedDistances)} on the same values, for a caller that needs the distances no longer.
+     *
+     * @throws IllegalStateException if the distances have already been given up
+     */
+    public MergeTree clusterInPlace(OwnedDistances distances) {
+        Objects.requireNonNull(distances, "distances");
+        return algorithm.runInPlace(this, distances);
+    }
+
     /** The agglomeration algorithm a linkage uses, as described by Müllner (2011). */
     private enum Algorithm {
         MINIMUM_SPANNING_TREE {
@@ -244,20 +257,39 @@ public enum Linkage {
             MergeTree run(Linkage linkage, CondensedDistances d) {
                 return new MinimumSpanningTree(d).run();
             }
+
+            @Override
+            MergeTree runInPlace(Linkage linkage, OwnedDistances d) {
+                return run(linkage, d.freeze()); // reads the matrix without changing it
+            }
         },
         NEAREST_NEIGHBOR_CHAIN {
             @Override
             MergeTree run(Linkage linkage, CondensedDistances d) {
-                return new NearestNeighborChain(linkage, d).run();
+                return new NearestNeighborChain(linkage, new WorkingDistances(d)).run();
+            }
+
+            @Override
+            MergeTree runInPlace(Linkage linkage, OwnedDistances d) {
+                int n = d.size();
+                return new NearestNeighborChain(linkage, new WorkingDistances(n, d.take())).run();
             }
         },
         GENERIC {
             @Override
             MergeTree run(Linkage linkage, CondensedDistances d) {
-                return new GenericLinkage(linkage, d).run();
+                return new GenericLinkage(linkage, new WorkingDistances(d)).run();
+            }
+
+            @Override
+            MergeTree runInPlace(Linkage linkage, OwnedDistances d) {
+                int n = d.size();
+                return new GenericLinkage(linkage, new WorkingDistances(n, d.take())).run();
             }
         };
 
         abstract MergeTree run(Linkage linkage, CondensedDistances d);
+
+        abstract MergeTree runInPlace(Linkage linkage, OwnedDistances d);
     }
 }

@@ -5,6 +5,7 @@ import java.io.Serializable;
 import java.util.Arrays;
 import java.util.Objects;
 import org.treeproof.distance.CondensedDistances;
+import org.treeproof.distance.CondensedRows;
 import org.treeproof.partition.Partition;
 
 /**
@@ -224,6 +225,16 @@ public final class MergeTree implements Serializable {
         return new KCut(k, new Partition(labels, k), low, high, KCut.chooseHeight(low, high), k < n && low == high);
     }
 
+    /** The lowest height of the cut at k ({@link KCut#low()}), without the labels. */
+    double cutLow(int k) {
+        return k == n ? 0.0 : prefixMax[n - k - 1];
+    }
+
+    /** The highest height of the cut at k ({@link KCut#high()}), without the labels. */
+    double cutHigh(int k) {
+        return k == 1 ? Double.POSITIVE_INFINITY : suffixMin[n - k];
+    }
+
     /**
      * The labels of {@link #cutAtK(int)} without the record: canonical (clusters numbered
      * {@code 0..k-1} in order of their first item), O(n).
@@ -320,6 +331,28 @@ public final class MergeTree implements Serializable {
             throw new IllegalArgumentException("distances over " + original.size() + " items, tree over " + n);
         }
         return new Cophenetic(this).correlation(original);
+    }
+
+    /**
+     * The same coefficient from distances read in two separate passes, for a caller that cannot hold the matrix
+     * while the tree is built (it gives the matrix to {@link Linkage#clusterInPlace}): {@code meanDistance} comes
+     * from {@link #meanDistance} on the distances before clustering, {@code original} gives them again afterwards
+     * (say from {@link org.treeproof.distance.Metric#rows}). The same bits as
+     * {@link #copheneticCorrelation(CondensedDistances)}.
+     *
+     * @throws IllegalArgumentException if {@code original} is not over the same number of items
+     */
+    public double copheneticCorrelation(double meanDistance, CondensedRows original) {
+        Objects.requireNonNull(original, "original");
+        if (original.size() != n) {
+            throw new IllegalArgumentException("distances over " + original.size() + " items, tree over " + n);
+        }
+        return new Cophenetic(this).correlation(meanDistance, original);
+    }
+
+    /** The mean of the distances over all pairs as the cophenetic correlation computes it (NaN below two items). */
+    public static double meanDistance(CondensedRows distances) {
+        return Cophenetic.meanDistance(Objects.requireNonNull(distances, "distances"));
     }
 
     int[] leftArray() {

@@ -1,7 +1,5 @@
 package org.treeproof.tree;
 
-import org.treeproof.distance.CondensedDistances;
-
 /**
  * The nearest-neighbour chain algorithm for the reducible linkages (complete, average, weighted,
  * Ward): O(n²) time on one working copy of the condensed matrix. Müllner (2011), arXiv:1109.2378;
@@ -18,17 +16,17 @@ import org.treeproof.distance.CondensedDistances;
  */
 final class NearestNeighborChain {
     private final Linkage linkage;
-    private final CondensedDistances distances;
+    private final WorkingDistances w;
 
-    NearestNeighborChain(Linkage linkage, CondensedDistances distances) {
+    /** Clusters {@code w}, which it overwrites. */
+    NearestNeighborChain(Linkage linkage, WorkingDistances w) {
         this.linkage = linkage;
-        this.distances = distances;
+        this.w = w;
     }
 
     MergeTree run() {
-        int n = distances.size();
+        int n = w.n;
         int m = n - 1;
-        WorkingDistances w = new WorkingDistances(distances);
         int[] a = new int[m];
         int[] b = new int[m];
         double[] h = new double[m];

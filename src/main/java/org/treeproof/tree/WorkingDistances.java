@@ -31,9 +31,15 @@ final class WorkingDistances {
     private final int[] bufSize;
     private final int[] bufPos;
 
+    /** Works on a copy of {@code source}. */
     WorkingDistances(CondensedDistances source) {
-        n = source.size();
-        d = source.toCondensedArray();
+        this(source.size(), source.toCondensedArray());
+    }
+
+    /** Works in place on {@code condensed}, a condensed matrix over {@code n} items that it now owns. */
+    WorkingDistances(int n, double[] condensed) {
+        this.n = n;
+        d = condensed;
         size = new int[n];
         Arrays.fill(size, 1);
         rowOffset = new int[n];

@@ -57,7 +57,8 @@ class ArchitectureTest {
 
     @Test
     void coreNeverReachesOuterLayers() {
-        noClasses().that().resideInAnyPackage("org.treeproof.score..", "org.treeproof.resample..")
+        noClasses().that().resideInAnyPackage("org.treeproof.score..", "org.treeproof.resample..",
+                        "org.treeproof.explain..")
                 .should().dependOnClassesThat().resideInAnyPackage(OUTER)
                 .check(classes);
     }
@@ -121,7 +122,7 @@ class ArchitectureTest {
     void coreHasNoConsoleOrFileIo() {
         noClasses().that().resideInAnyPackage("org.treeproof.data..", "org.treeproof.distance..",
                         "org.treeproof.tree..", "org.treeproof.partition..", "org.treeproof.score..",
-                        "org.treeproof.resample..", "org.treeproof.study..")
+                        "org.treeproof.resample..", "org.treeproof.study..", "org.treeproof.explain..")
                 .should().accessField(System.class, "out").orShould().accessField(System.class, "err")
                 .orShould().dependOnClassesThat().resideInAnyPackage("java.nio.file..", "java.net..")
                 .check(classes);

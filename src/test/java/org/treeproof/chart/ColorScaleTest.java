@@ -80,7 +80,8 @@ class ColorScaleTest {
         assertEquals(new Color(0xCC6677), ChartColors.cluster(0));
         assertEquals(new Color(0x332288), ChartColors.cluster(1));
         assertEquals(ChartColors.cluster(0), ChartColors.cluster(9));
-        assertThrows(IllegalArgumentException.class, () -> ChartColors.cluster(-1));
+        assertEquals(ChartColors.OUTLIER, ChartColors.cluster(-1));
+        assertThrows(IllegalArgumentException.class, () -> ChartColors.cluster(-2));
     }
 
     @Test

@@ -161,7 +161,7 @@ class StudyChartsTest {
         assertEquals(0, RenderChecks.count(tree, ChartColors.cluster(1)));
         assertTrue(byId.get("dendrogram").title().contains("no split"));
         // the consensus is shown at the most stable k and says that no k is supported
-        int k = StudyChartInputs.mostStableK(chosen(noise.evidence(), r));
+        int k = StudyChartInputs.strongestK(chosen(noise.evidence(), r), r);
         assertTrue(k >= 2);
         assertTrue(byId.get("consensus").title().contains("k = " + k + " (no k is supported"),
                 byId.get("consensus").title());
@@ -176,17 +176,18 @@ class StudyChartsTest {
         KEvidence ke = le.at(r.k());
         double[] nan = new double[e.samples()];
         Arrays.fill(nan, Double.NaN);
-        KEvidence broken = new KEvidence(ke.k(), ke.cutHeight(), ke.tieDependent(), ke.partition(), ke.silhouette(),
-                ke.calinskiHarabasz(), ke.daviesBouldin(), ke.dunn(), ke.gap(), ke.gapSE(), ke.stability(),
-                ke.clusters(), nan, ke.sampleStability(), ke.sampleConsensus());
+        KEvidence broken = new KEvidence(ke.k(), ke.cutHeight(), ke.tieDependent(), ke.clustering(), ke.branches(),
+                ke.silhouette(), ke.calinskiHarabasz(), ke.daviesBouldin(), ke.dunn(), ke.gap(), ke.gapSE(),
+                ke.stability(), ke.clusters(), nan, ke.sampleStability(), ke.sampleConsensus(), ke.replicateAri());
         var byK = new ArrayList<>(le.byK());
-        byK.set(r.k() - 2, broken);
+        byK.set(le.byK().indexOf(ke), broken);
         var linkages = new ArrayList<LinkageEvidence>();
         for (LinkageEvidence l : e.linkages()) {
             linkages.add(l != le ? l : new LinkageEvidence(l.linkage(), l.tree(), l.copheneticCorrelation(), l.gap(),
                     byK, l.branchSupport(), l.consensus()));
         }
-        Evidence degenerate = new Evidence(e.sampleIds(), e.features(), e.settings(), linkages);
+        Evidence degenerate = new Evidence(e.sampleIds(), e.features(), e.settings(), linkages, e.minClusterSize(),
+                e.structureTest());
 
         Map<String, Figure> byId = byId(StudyCharts.drawAll(degenerate, r, separated.data(), dir));
         Figure sil = byId.get("silhouette");
@@ -224,10 +225,10 @@ class StudyChartsTest {
             assertEquals(t.left(s), ct.left()[s]);
             assertEquals(t.right(s), ct.right()[s]);
         }
-        // the k the unsupported consensus falls back on is the recommender's own stability choice
-        Recommendation.CriterionChoice byStability = r.criteria().stream()
-                .filter(c -> c.criterion().startsWith("stability")).findFirst().orElseThrow();
-        assertEquals(byStability.k(), StudyChartInputs.mostStableK(le));
+        // the k the unsupported consensus falls back on is the rule's strongest solution of that linkage
+        int strongest = r.assessments().stream().filter(a -> a.linkage() == le.linkage()).sorted(r.rule().order())
+                .findFirst().orElseThrow().k();
+        assertEquals(strongest, StudyChartInputs.strongestK(le, r));
     }
 
     @Test

@@ -67,7 +67,7 @@ class AssessIT {
         try (Stream<Path> files = Files.list(dir.resolve("charts"))) {
             charts = files.filter(p -> p.toString().endsWith(".png")).count();
         }
-        assertEquals(8, charts);
+        assertEquals(9, charts); // the eight study charts and the features chart
         assertEquals(charts, html.select("img[src^=data:image/png;base64,]").size());
         assertTrue(html.select("script").isEmpty());
         assertTrue(html.text().contains(s.get("input").get("sha256").asText()));

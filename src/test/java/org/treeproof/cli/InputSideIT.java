@@ -7,7 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -15,14 +14,13 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.SplittableRandom;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.treeproof.distance.Metric;
 
 /**
  * End to end from the jar for the ways an input reaches a study: every metric with the default study options,
- * standard input and pipes, tables without ids, a spreadsheet's {@code sep=} line, a labels file with its own
+ * tables without ids, a spreadsheet's {@code sep=} line, a labels file with its own
  * delimiter, and the settings recorded for a distance table. Data are invented here by a seeded generator.
  */
 class InputSideIT {
@@ -108,45 +106,6 @@ class InputSideIT {
             assertEquals(m.binaryOnly() ? "feature-frequency" : "principal-box",
                     s.path("settings").path("gapReference").asText());
         }
-    }
-
-    /** Runs the jar with {@code stdin} written to its standard input through a pipe. */
-    private Jar.Result withStandardInput(byte[] stdin, String... args) throws Exception {
-        var cmd = new ArrayList<String>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-Xmx1g", "-jar", Jar.path().toAbsolutePath().toString()));
-        cmd.addAll(List.of(args));
-        Path out = tmp.resolve("stdout.txt");
-        Path err = tmp.resolve("stderr.txt");
-        Process p = new ProcessBuilder(cmd).directory(tmp.toFile()).redirectOutput(out.toFile())
-                .redirectError(err.toFile()).start();
-        try (OutputStream in = p.getOutputStream()) {
-            in.write(stdin);
-        }
-        assertTrue(p.waitFor(5, TimeUnit.MINUTES), "timed out");
-        return new Jar.Result(p.exitValue(), Files.readString(out), Files.readString(err));
-    }
-
-    @Test
-    void standardInputAndPipesAreRead() throws Exception {
-        byte[] bytes = Files.readAllBytes(table("continuous.csv", false));
-        String[] quick = {"--replicates", "10", "--null-sets", "0", "--reference-sets", "0", "--max-k", "4",
-            "--no-progress"};
-        var dash = new ArrayList<>(List.of("assess", "-", "--delimiter", ",", "--out", "dash"));
-        dash.addAll(List.of(quick));
-        Jar.Result r = withStandardInput(bytes, dash.toArray(String[]::new));
-        assertEquals(0, r.exit(), r.err());
-        assertEquals("standard input", summary("dash").path("input").path("path").asText());
-        // Before: "Illegal seek" for a pipe named by a path (as from process substitution).
-        var pipe = new ArrayList<>(List.of("assess", "/dev/stdin", "--delimiter", ",", "--out", "pipe"));
-        pipe.addAll(List.of(quick));
-        r = withStandardInput(bytes, pipe.toArray(String[]::new));
-        assertEquals(0, r.exit(), r.err());
-        assertEquals(summary("dash").path("input").path("sha256"), summary("pipe").path("input").path("sha256"));
-        // "-" without --delimiter: one line saying what to give
-        r = withStandardInput(bytes, "assess", "-", "--out", "none", "--no-progress");
-        assertEquals(2, r.exit());
-        assertEquals("treeproof: standard input: cannot tell the delimiter from the file name (.csv is read with"
-                + " commas; .tsv, .tab and .txt with tabs, also with .gz); give --delimiter", r.err().strip());
     }
 
     @Test

@@ -30,8 +30,10 @@ class ReportModelTest {
         assertEquals(Verdict.SUPPORTED, m.decision().verdict());
         assertEquals(3, m.decision().k());
         assertEquals(s.recommendation().linkage(), m.decision().linkage());
-        assertEquals(s.recommendation().reasons(), m.decision().reasons());
-        assertEquals(Figure.IDS, ids(m));
+        assertEquals(new ReasonWords(s.recommendation().rule()).words(s.recommendation().reasons()),
+                m.decision().reasons());
+        // every study figure; the explanation's two (features, sensitivity) come only with an explanation
+        assertEquals(Figure.IDS.subList(0, Figure.IDS.indexOf("features")), ids(m));
         for (Figure f : m.figures()) {
             assertEquals(f.id() + ".png", f.fileName());
             assertEquals("charts/" + f.id() + ".png", f.path());
@@ -78,7 +80,7 @@ class ReportModelTest {
         assertTrue(notes.contains("heat map is left out"), notes);
         assertTrue(notes.contains("only one linkage"), notes);
         for (EvidenceRow r : m.evidence().get(0).rows()) {
-            assertTrue(Double.isNaN(r.calinskiHarabasz()) && Double.isNaN(r.gap()) && Double.isNaN(r.pValueAri()));
+            assertTrue(Double.isNaN(r.calinskiHarabasz()) && Double.isNaN(r.gap()) && Double.isNaN(r.pValueAdjusted()));
             assertFalse(r.calibrated());
         }
     }
@@ -88,14 +90,13 @@ class ReportModelTest {
         for (Studies.Study s : List.of(Studies.separated(), Studies.noise(), Studies.tentative())) {
             Evidence e = s.evidence();
             Recommendation rec = s.recommendation();
-            Recommender judge = Recommender.of(e, rec.rule());
             ReportModel m = s.model();
             int recommended = 0;
             for (LinkageEvidence le : e.linkages()) {
                 EvidenceTable t = m.table(le.linkage());
                 assertEquals(le.copheneticCorrelation(), t.copheneticCorrelation());
                 assertEquals(le.gapChoice(), t.gapChoice());
-                assertEquals(e.settings().maxK() - 1, t.rows().size());
+                assertEquals(le.byK().size(), t.rows().size());
                 for (KEvidence k : le.byK()) {
                     EvidenceRow r = t.at(k.k());
                     NullStability n = k.stability().nullModel();
@@ -104,9 +105,11 @@ class ReportModelTest {
                     assertEquals(k.stability().ari().low(), r.ariLow());
                     assertEquals(k.stability().ari().high(), r.ariHigh());
                     assertEquals(k.stability().ari().count(), r.replicates());
-                    assertEquals(n.ariMean(), r.nullAriMean());
-                    assertEquals(n.pValueAri(), r.pValueAri());
-                    assertEquals(n.pacMean(), r.nullPac());
+                    assertEquals(n == null ? Double.NaN : n.ariMean(), r.nullAriMean());
+                    assertEquals(n == null ? Double.NaN : n.pValueAdjusted(), r.pValueAdjusted());
+                    assertEquals(n == null ? Double.NaN : n.excess(), r.excess());
+                    assertEquals(k.outliers(), r.outliers());
+                    assertEquals(n == null ? Double.NaN : n.pacMean(), r.nullPac());
                     assertEquals(k.stability().pac(), r.pac());
                     assertEquals(k.worstJaccard(), r.worstJaccard());
                     assertEquals(k.silhouette(), r.silhouette());
@@ -115,7 +118,7 @@ class ReportModelTest {
                     assertEquals(k.dunn(), r.dunn());
                     assertEquals(k.gap(), r.gap());
                     assertEquals(k.gapSE(), r.gapSE());
-                    assertEquals(judge.verdictOf(k), r.verdict());
+                    assertEquals(rec.assessment(le.linkage(), k.k()).verdict(), r.verdict());
                     boolean isRec = rec.k() > 1 && le.linkage() == rec.linkage() && k.k() == rec.k();
                     assertEquals(isRec, r.recommended());
                     recommended += r.recommended() ? 1 : 0;
@@ -146,7 +149,7 @@ class ReportModelTest {
         assertFalse(m.flaggedSamples().isEmpty(), "the samples between two groups are flagged");
         assertEquals(m.clusters().stream().filter(c -> c.status() != JaccardStability.Status.STABLE).toList(),
                 m.flaggedClusters());
-        assertEquals(chosen.partition(), ReportModel.recommendedPartition(s.evidence(), rec));
+        assertEquals(chosen.clustering().withSingletons(), ReportModel.recommendedPartition(s.evidence(), rec));
     }
 
     @Test
@@ -170,12 +173,20 @@ class ReportModelTest {
         Studies.Study s = Studies.separated();
         Recommendation r = s.recommendation();
         var reasons = new java.util.ArrayList<>(r.reasons());
-        reasons.add("Not every cluster is stable: cluster 2 (15 samples) is not assessed with mean Jaccard NaN.");
-        var odd = new Recommendation(r.linkage(), r.k(), r.cutHeight(), r.verdict(), r.levels(), reasons, r.criteria(),
-                r.flaggedClusters(), r.flaggedSamples(), r.linkages(), r.agreement(), r.rule());
-        List<String> shown = ReportModel.of(s.evidence(), odd, s.run()).decision().reasons();
-        assertEquals("Not every cluster is stable: cluster 2 (15 samples) is not assessed with mean Jaccard –.",
-                shown.get(shown.size() - 1));
+        var a = r.assessment(r.linkage(), r.k());
+        var f = a.facts();
+        var odd = new org.treeproof.study.Assessment(new org.treeproof.study.Assessment.Facts(f.linkage(), f.k(),
+                f.outliers(), f.meanAri(), Double.NaN, f.allStable(), f.noneDissolved(), f.silhouette(), f.calibrated(),
+                f.excess(), f.pAdjusted(),
+                f.cophenetic()), a.verdict(), a.met(), a.failed());
+        reasons.add(new org.treeproof.study.Reason.BestFailed(odd));
+        var changed = new Recommendation(r.linkage(), r.k(), r.cutHeight(), r.verdict(), r.levels(), reasons,
+                r.criteria(), r.flaggedClusters(), r.flaggedSamples(), r.linkages(), r.agreement(), r.rule(),
+                r.assessments(), r.structureTest(), r.clustering(), r.minClusterSize(), r.votes());
+        List<String> shown = ReportModel.of(s.evidence(), changed, s.run()).decision().reasons();
+        String last = shown.get(shown.size() - 1);
+        assertTrue(last.contains("smallest cluster Jaccard –"), last);
+        assertFalse(last.contains("NaN"), last);
     }
 
     @Test

@@ -8,6 +8,7 @@ import org.treeproof.io.SummaryJson;
 import org.treeproof.resample.ReplicateExecutor;
 import org.treeproof.study.DecisionRule;
 import org.treeproof.study.Evidence;
+import org.treeproof.study.Recommendation;
 import org.treeproof.study.Recommender;
 import org.treeproof.study.StudyInput;
 import org.treeproof.study.StudyProgress;
@@ -53,6 +54,7 @@ final class SmallStudy {
         Evidence e = new StudyRunner(StudyInput.of(data()), settings(), executor, 2, StudyProgress.SILENT).run();
         var provenance = new SummaryJson.Provenance("treeproof", "test", "groups.csv", "0".repeat(64),
                 List.of("Read the table."), List.of(), null);
-        return new SummaryJson(e, Recommender.of(e, DecisionRule.DEFAULT).recommend(), provenance).toBytes();
+        Recommendation r = Recommender.of(e, DecisionRule.DEFAULT).recommend();
+        return new SummaryJson(e, r, provenance, new org.treeproof.report.ReasonWords(r.rule())::word).toBytes();
     }
 }

@@ -55,7 +55,9 @@ class RecommenderTest {
         assertEquals(List.of(3), r.levels());
         assertTrue(r.flaggedClusters().isEmpty());
         assertTrue(r.cutHeight().low() < r.cutHeight().chosen() && r.cutHeight().chosen() < r.cutHeight().high());
-        assertTrue(r.reasons().get(0).startsWith("Supported: 3 clusters"));
+        assertTrue(r.reasons().get(0) instanceof Reason.Structure s && s.found());
+        assertTrue(r.reasons().stream().anyMatch(x -> x instanceof Reason.Chosen c && c.assessment().k() == 3));
+        assertEquals(0, r.outlierCount());
     }
 
     @Test
@@ -64,7 +66,7 @@ class RecommenderTest {
         assertEquals(Verdict.UNSUPPORTED, r.verdict());
         assertEquals(1, r.k());
         assertTrue(r.levels().isEmpty());
-        assertTrue(r.reasons().get(0).contains("no convincing cluster structure"));
+        assertTrue(r.reasons().get(0) instanceof Reason.Structure s && !s.found(), r.reasons().toString());
     }
 
     @Test
@@ -82,9 +84,9 @@ class RecommenderTest {
     @Test
     void everyCriterionStatesItsChoice() {
         Recommendation r = decide(StudyRunnerTest.threeGroups(15, 2), 5);
-        var names = r.criteria().stream().map(Recommendation.CriterionChoice::criterion).toList();
-        assertEquals(List.of("stability (ARI)", "PAC", "cluster-wise Jaccard", "silhouette", "gap statistic",
-                "Calinski-Harabasz", "Davies-Bouldin", "Dunn"), names);
+        var names = r.criteria().stream().map(Recommendation.CriterionChoice::name).toList();
+        assertEquals(List.of("excess over the null", "stability (mean ARI)", "PAC", "smallest cluster Jaccard",
+                "silhouette", "Calinski-Harabasz", "Davies-Bouldin", "Dunn", "gap statistic"), names);
         assertEquals(2, r.linkages().size());
         assertEquals(1.0, r.agreement()[0][0]);
     }

@@ -79,9 +79,9 @@ class ShippedWorkTest {
                 21, Seeds.Purpose.REPLICATE);
         var supports = new ArrayList<BranchSupport>();
         for (int l = 0; l < linkages.size(); l++) {
-            supports.add(BranchSupport.of(ReferenceSolution.of(linkages.get(l), d, 6).tree(), 100 + l));
+            supports.add(BranchSupport.of(ReferenceSolution.of(linkages.get(l), d, 6, 5).tree(), 100 + l));
         }
-        return new ReplicateWork(data, d, Metric.EUCLIDEAN, linkages, supports, planner, 6);
+        return new ReplicateWork(data, d, Metric.EUCLIDEAN, linkages, supports, planner, 6, 5, d.size());
     }
 
     private static void assertSameOutcome(ReplicateOutcome want, ReplicateOutcome got, String what) {
@@ -137,7 +137,8 @@ class ShippedWorkTest {
         Evidence e = new StudyRunner(input, settings, executor, 2, StudyProgress.SILENT).run();
         var provenance = new SummaryJson.Provenance("treeproof", "test", "groups.csv", "0".repeat(64),
                 List.of("Read the table."), List.of(), null);
-        return new SummaryJson(e, Recommender.of(e, DecisionRule.DEFAULT).recommend(), provenance).toBytes();
+        Recommendation r = Recommender.of(e, DecisionRule.DEFAULT).recommend();
+        return new SummaryJson(e, r, provenance, new org.treeproof.report.ReasonWords(r.rule())::word).toBytes();
     }
 
     @Test

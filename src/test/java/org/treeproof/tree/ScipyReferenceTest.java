@@ -14,6 +14,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.treeproof.distance.CondensedDistances;
+import org.treeproof.distance.OwnedDistances;
 
 /**
  * Every linkage against scipy 1.10.1 (scipy.cluster.hierarchy linkage, cophenet, fcluster, leaves_list),
@@ -98,6 +99,25 @@ class ScipyReferenceTest {
                 assertEquals(expected.get(t).doubleValue(), c[t], "cophenetic distance at " + t);
             }
         }
+    }
+
+    /**
+     * The linkage working in place on a matrix its owner gives up, and the cophenetic correlation read in two
+     * separate passes (as the tree command does): the same merges, heights and coefficient, bit for bit.
+     */
+    @ParameterizedTest(name = "{1} on {0}")
+    @MethodSource("cases")
+    void inPlaceClusteringAndTwoPassCopheneticCorrelationKeepEveryBit(String name, Linkage linkage) {
+        CondensedDistances d = distances(name);
+        MergeTree onCopy = linkage.cluster(d);
+        OwnedDistances owned = OwnedDistances.copyOf(d);
+        double mean = MergeTree.meanDistance(owned);
+        MergeTree inPlace = linkage.clusterInPlace(owned);
+        assertTrue(owned.taken(), "the matrix was given up");
+        assertEquals(onCopy, inPlace);
+        TreeFixtures.assertSameMerges(reference(name, linkage).get("merges"), inPlace, linkage.id());
+        assertEquals(Double.doubleToRawLongBits(onCopy.copheneticCorrelation(d)),
+                Double.doubleToRawLongBits(inPlace.copheneticCorrelation(mean, d)), "cophenetic correlation bits");
     }
 
     @ParameterizedTest(name = "{1} on {0}")

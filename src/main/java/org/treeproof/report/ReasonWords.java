@@ -1,0 +1,212 @@
+package org.treeproof.report;
+
+import static org.treeproof.report.ModelFactory.f;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.treeproof.study.Assessment;
+import org.treeproof.study.ClusterEvidence;
+import org.treeproof.study.Condition;
+import org.treeproof.study.DecisionRule;
+import org.treeproof.study.KEvidence;
+import org.treeproof.study.NullStability;
+import org.treeproof.study.Reason;
+import org.treeproof.study.Recommendation;
+import org.treeproof.study.StructureTest;
+import org.treeproof.study.Verdict;
+import org.treeproof.tree.Linkage;
+
+/**
+ * Words the decision's typed reasons: the one place their sentences are written. Reads what the rule decided
+ * (verdicts, conditions met and failed); never re-derives any of it.
+ */
+public final class ReasonWords implements Reason.Visitor<String> {
+    private final DecisionRule rule;
+
+    public ReasonWords(DecisionRule rule) {
+        this.rule = rule;
+    }
+
+    /** The sentence for one reason. */
+    public String word(Reason r) {
+        return r.accept(this);
+    }
+
+    /** The sentence for each reason, in order. */
+    public List<String> words(List<Reason> reasons) {
+        return reasons.stream().map(this::word).toList();
+    }
+
+    /** The plain words for one condition of the rule. */
+    public String condition(Condition c) {
+        return switch (c) {
+            case BEATS_NULL -> "beats the null data (allowing for the choice among linkages and k)";
+            case NO_CLUSTER_DISSOLVES -> f("no cluster dissolves (every mean Jaccard above %s)",
+                    Numbers.plain(rule.dissolvedJaccard()));
+            case EVERY_CLUSTER_STABLE -> f("every cluster is stable (mean Jaccard at least %s)",
+                    Numbers.plain(rule.stableJaccard()));
+            case REPRODUCED -> f("replicates reproduce it (mean ARI at least %s)", Numbers.plain(rule.stableJaccard()));
+            case SEPARATED_WITHOUT_NULL -> f("its clusters are separated (average silhouette above %s)",
+                    Numbers.plain(rule.reasonableSilhouette()));
+        };
+    }
+
+    @Override
+    public String structure(Reason.Structure r) {
+        StructureTest t = r.test();
+        String ps = f("Monte Carlo p = %s over %d null data sets; %s from a normal fit to their maxima",
+                Numbers.p(t.pValue()), t.nullSets(), fitted(t.pValueFitted()));
+        if (r.found()) {
+            return f("The data hold cluster structure beyond noise: the largest excess over the null among every "
+                    + "linkage and k is %s (%s).", Numbers.fixed(t.statistic(), 2), ps);
+        }
+        return f("The data hold no cluster structure beyond what data without clusters give: the largest excess over "
+                + "the null among every linkage and k is %s, which null data sets reach too (%s).",
+                Numbers.fixed(t.statistic(), 2), ps);
+    }
+
+    private static String fitted(double p) {
+        if (Double.isNaN(p)) {
+            return "p not available";
+        }
+        return p < 0.001 ? "p < 0.001" : "p = " + Numbers.p(p);
+    }
+
+    @Override
+    public String noNullData(Reason.NoNullData r) {
+        return r.distancesOnly()
+                ? "Only distances were given, so no null data could be drawn: no solution can be called better than "
+                        + "tentative."
+                : "Null calibration was not run (--null-sets 0): no solution can be called better than tentative.";
+    }
+
+    @Override
+    public String chosen(Reason.Chosen r) {
+        Assessment a = r.assessment();
+        KEvidence e = r.evidence();
+        var parts = new ArrayList<String>();
+        parts.add(f("%s: %d clusters with %s linkage", a.verdict() == Verdict.SUPPORTED ? "Supported" : "Tentative",
+                a.k(), Names.linkage(a.linkage())));
+        NullStability ns = e.stability().nullModel();
+        String stab = f("mean ARI %s over %d replicates", Numbers.fixed(e.stability().ari().mean(), 2),
+                e.stability().ari().count());
+        if (ns != null) {
+            stab += f(" (null %s) and average silhouette %s (null %s): an excess of %s over the null, adjusted p = %s",
+                    Numbers.fixed(ns.ariMean(), 2), Numbers.fixed(e.silhouette(), 3),
+                    Numbers.fixed(ns.silhouetteMean(), 3), Numbers.fixed(ns.excess(), 1),
+                    Numbers.p(ns.pValueAdjusted()));
+        } else {
+            stab += f(", average silhouette %s", Numbers.fixed(e.silhouette(), 2));
+        }
+        parts.add(stab);
+        parts.add(f("smallest cluster Jaccard %s", Numbers.fixed(e.worstJaccard(), 2)));
+        String s = String.join("; ", parts) + ".";
+        if (!a.failed().isEmpty()) {
+            s += " It falls short of full support because not " + Prose.and(a.failed().stream()
+                    .map(this::condition).toList()) + ".";
+        }
+        var weak = new ArrayList<String>();
+        for (ClusterEvidence c : e.clusters()) {
+            if (!(c.jaccard() >= rule.stableJaccard())) {
+                weak.add(f("cluster %d (%d samples) is %s (mean Jaccard %s)", c.id(), c.size(), c.status().label(),
+                        Numbers.fixed(c.jaccard(), 2)));
+            }
+        }
+        if (!weak.isEmpty()) {
+            s += " " + ModelFactory.capital(String.join("; ", weak)) + ".";
+        }
+        return s;
+    }
+
+    @Override
+    public String bestFailed(Reason.BestFailed r) {
+        Assessment a = r.assessment();
+        var f = a.facts();
+        String figures = f.calibrated()
+                ? f("excess over the null %s, adjusted p = %s, smallest cluster Jaccard %s", Numbers.fixed(f.excess(), 1),
+                        Numbers.p(f.pAdjusted()), Numbers.fixed(f.worstJaccard(), 2))
+                : f("mean ARI %s, smallest cluster Jaccard %s, silhouette %s", Numbers.fixed(f.meanAri(), 2),
+                        Numbers.fixed(f.worstJaccard(), 2), Numbers.fixed(f.silhouette(), 2));
+        String failed = a.failed().isEmpty() ? "" : "; it fails: " + Prose.and(a.failed().stream()
+                .map(this::condition).toList());
+        return f("With %s linkage the strongest solution is k = %d (%s)%s.", Names.linkage(a.linkage()), a.k(),
+                figures, failed);
+    }
+
+    @Override
+    public String outliers(Reason.Outliers r) {
+        return f("%d sample%s on branches of fewer than %d samples %s set aside as outliers, not clusters; they are "
+                + "listed in clusters.csv and left out of k and of every fit measure.", r.count(),
+                r.count() == 1 ? "" : "s", r.minClusterSize(), r.count() == 1 ? "is" : "are");
+    }
+
+    @Override
+    public String gap(Reason.Gap r) {
+        if (r.agrees()) {
+            return f("The gap statistic agrees: its rule picks k = %d.", r.gapK());
+        }
+        return f("The gap statistic disagrees: its rule picks k = %d%s.", r.gapK(),
+                r.ruleMet() ? "" : " (the rule was not met up to the largest k)");
+    }
+
+    @Override
+    public String votes(Reason.Votes r) {
+        var parts = new ArrayList<String>();
+        double recommended = 0;
+        for (Recommendation.KShare s : r.shares()) {
+            parts.add(f("k = %d in %s", s.k(), Numbers.percent(s.share())));
+            if (s.k() == r.recommendedK()) {
+                recommended = s.share();
+            }
+        }
+        return f("Ranked replicate by replicate (each replicate's own stability against the null), %s linkage "
+                + "favours %s of replicates%s.", Names.linkage(r.linkage()), String.join(", ", parts),
+                recommended >= 0.5 ? "" : f("; k = %d wins in fewer than half", r.recommendedK()));
+    }
+
+    @Override
+    public String levels(Reason.Levels r) {
+        return f("Nested structure: k = %s are each supported; being cuts of one tree, the larger numbers split the "
+                + "clusters of the smaller.", Prose.and(r.levels().stream().map(String::valueOf).toList()));
+    }
+
+    @Override
+    public String tieDependent(Reason.TieDependent r) {
+        return f("Merge heights tie at this cut, so which %d clusters result depends on the order of tied merges.",
+                r.k());
+    }
+
+    @Override
+    public String inversions(Reason.Inversions r) {
+        return f("The %s tree has inversions (a merge lower than an earlier one); the %d clusters are a state of the "
+                + "agglomeration, and a cut by height need not give them.", Names.linkage(r.linkage()), r.k());
+    }
+
+    @Override
+    public String otherLinkages(Reason.OtherLinkages r) {
+        var parts = new ArrayList<String>();
+        for (Recommendation.LinkageSummary s : r.others()) {
+            parts.add(s.verdict() == Verdict.UNSUPPORTED ? f("%s finds no convincing k", Names.linkage(s.linkage()))
+                    : f("%s is %s at k = %d", Names.linkage(s.linkage()), s.verdict().id(), s.k()));
+        }
+        return f("Among the linkages, %s is best supported; %s.", Names.linkage(r.recommended()),
+                String.join("; ", parts));
+    }
+
+    @Override
+    public String criteria(Reason.Criteria r) {
+        var parts = new ArrayList<String>();
+        for (Recommendation.CriterionChoice c : r.disagreeing()) {
+            if (c.criterion() != null) {
+                parts.add(f("%s picks k = %d", c.name(), c.k()));
+            }
+        }
+        return parts.isEmpty() ? f("Every criterion taken alone agrees with k = %d.", r.recommendedK())
+                : "Taken alone, " + String.join("; ", parts) + ".";
+    }
+
+    /** A linkage's name for prose. */
+    static String name(Linkage l) {
+        return Names.linkage(l);
+    }
+}

@@ -1,0 +1,35 @@
+package org.treeproof.study;
+
+/**
+ * A condition of the decision rule ({@link DecisionRule}), met or failed by each (linkage, k) solution. The
+ * report words each one; the rule alone decides which apply.
+ */
+public enum Condition {
+    /**
+     * Beats the null: its excess over the null data ({@link NullStability}) is reached by at most
+     * {@code alpha} of the null sets' largest excess over every linkage and k (max-statistic adjusted p-value).
+     */
+    BEATS_NULL("beats-null"),
+    /** No cluster dissolves: every cluster's mean Jaccard is above Hennig's dissolved band. */
+    NO_CLUSTER_DISSOLVES("no-cluster-dissolves"),
+    /** Every cluster is stable: every cluster's mean Jaccard is in Hennig's stable band. */
+    EVERY_CLUSTER_STABLE("every-cluster-stable"),
+    /** Without null data only: the replicates reproduce the solution, mean ARI at least the stable band. */
+    REPRODUCED("reproduced"),
+    /**
+     * Without null data only: the clusters are separated, average silhouette above Kaufman and Rousseeuw's
+     * "reasonable structure" reading; the one place a silhouette band is used, for want of a null.
+     */
+    SEPARATED_WITHOUT_NULL("separated-without-null");
+
+    private final String id;
+
+    Condition(String id) {
+        this.id = id;
+    }
+
+    /** The identifier used in outputs. */
+    public String id() {
+        return id;
+    }
+}

@@ -1,0 +1,157 @@
+package org.treeproof.study;
+
+import java.util.Arrays;
+import org.apache.commons.math3.distribution.NormalDistribution;
+import org.treeproof.score.ReplicateSummary;
+
+/**
+ * Calibrates every (linkage, k) solution against null data and runs the structure test. Pure: arrays in,
+ * records out.
+ *
+ * <p><b>The null data.</b> A unimodal elliptical distribution with the observed data's principal axes, robust
+ * scales along them and the data's own radial distribution ({@link
+ * org.treeproof.resample.ReferenceData#ellipticalNull}): Gaussian-like for Gaussian data, as in the significance
+ * test for clustering of Liu, Hayes, Nobel and Marron (2008, doi:10.1198/016214508000000454), but as
+ * heavy-tailed as the data, so heavy tails alone do not beat it.
+ *
+ * <p><b>Null sets without a cut at k.</b> A null set whose tree has no cut into k clusters of the minimum size
+ * counts at that k as mean ARI 0 and silhouette 0 (no reproducible and no separated solution); our convention.
+ *
+ * <p><b>Standardising.</b> SDs below {@link #SD_FLOOR} are raised to it, so that null sets that agree to the
+ * third decimal do not turn a difference in the fourth into a large excess; the floor is our choice (the
+ * measures are reported to two or three decimals).
+ */
+final class NullCalibration {
+    /** The smallest SD a measure is standardised by. Our choice; see the class comment. */
+    static final double SD_FLOOR = 1e-3;
+
+    private NullCalibration() {
+    }
+
+    /**
+     * @param obsAriTest  {@code [l][k-2]} observed mean ARI over the first {@code replicatesPerSet} replicates
+     *                    (NaN where the cut does not exist)
+     * @param obsAri      {@code [l][k-2]} observed mean ARI over all replicates
+     * @param obsSil      {@code [l][k-2]} observed average silhouette
+     * @param nullAri     {@code [l][k-2][set]} null sets' mean ARI (NaN where the null set has no such cut)
+     * @param nullSil     {@code [l][k-2][set]} null sets' silhouette
+     * @param nullPac     {@code [l][k-2][set]} null sets' PAC
+     */
+    record Result(NullStability[][] cells, StructureTest test) {
+    }
+
+    static Result of(double[][] obsAriTest, double[][] obsAri, double[][] obsSil, double[][][] nullAri,
+            double[][][] nullSil, double[][][] nullPac, int replicatesPerSet) {
+        int links = obsAri.length;
+        int ks = obsAri[0].length;
+        int sets = nullAri[0][0].length;
+        double[][] ariMean = new double[links][ks];
+        double[][] ariSd = new double[links][ks];
+        double[][] silMean = new double[links][ks];
+        double[][] silSd = new double[links][ks];
+        double[] nullMax = new double[sets];
+        Arrays.fill(nullMax, Double.NEGATIVE_INFINITY);
+        double observedMax = Double.NEGATIVE_INFINITY;
+        double[][] testExcess = new double[links][ks];
+        for (int l = 0; l < links; l++) {
+            for (int k = 0; k < ks; k++) {
+                double[] a = filled(nullAri[l][k]);
+                double[] s = filled(nullSil[l][k]);
+                ariMean[l][k] = mean(a);
+                ariSd[l][k] = Math.max(SD_FLOOR, sd(a, ariMean[l][k]));
+                silMean[l][k] = mean(s);
+                silSd[l][k] = Math.max(SD_FLOOR, sd(s, silMean[l][k]));
+                for (int j = 0; j < sets; j++) {
+                    double e = (a[j] - ariMean[l][k]) / ariSd[l][k] + (s[j] - silMean[l][k]) / silSd[l][k];
+                    nullMax[j] = Math.max(nullMax[j], e);
+                }
+                testExcess[l][k] = excess(obsAriTest[l][k], obsSil[l][k], ariMean[l][k], ariSd[l][k], silMean[l][k],
+                        silSd[l][k]);
+                if (!Double.isNaN(testExcess[l][k])) {
+                    observedMax = Math.max(observedMax, testExcess[l][k]);
+                }
+            }
+        }
+        NullStability[][] cells = new NullStability[links][ks];
+        for (int l = 0; l < links; l++) {
+            for (int k = 0; k < ks; k++) {
+                if (Double.isNaN(obsAri[l][k])) {
+                    continue;
+                }
+                double[] a = filled(nullAri[l][k]);
+                double[] s = filled(nullSil[l][k]);
+                ReplicateSummary as = ReplicateSummary.of(a);
+                ReplicateSummary ss = ReplicateSummary.of(s);
+                double full = excess(obsAri[l][k], obsSil[l][k], ariMean[l][k], ariSd[l][k], silMean[l][k],
+                        silSd[l][k]);
+                cells[l][k] = new NullStability(sets, replicatesPerSet, ariMean[l][k], ariSd[l][k], as.low(),
+                        as.high(), mean(finite(nullPac[l][k])), silMean[l][k], silSd[l][k], ss.low(), ss.high(), full,
+                        testExcess[l][k], monteCarlo(testExcess[l][k], nullMax));
+            }
+        }
+        double fitted = Double.NaN;
+        double m = mean(nullMax);
+        double sd = sd(nullMax, m);
+        if (sd > 0 && Double.isFinite(observedMax)) {
+            fitted = new NormalDistribution(null, m, sd).cumulativeProbability(observedMax);
+            fitted = 1 - fitted;
+        }
+        var test = new StructureTest(observedMax, monteCarlo(observedMax, nullMax), fitted, sets, replicatesPerSet,
+                nullMax);
+        return new Result(cells, test);
+    }
+
+    /** The excess of one observation over the null at a cell; NaN when the observation is NaN. */
+    static double excess(double ari, double sil, double ariMean, double ariSd, double silMean, double silSd) {
+        return (ari - ariMean) / ariSd + (sil - silMean) / silSd;
+    }
+
+    /** Hope's Monte Carlo p-value of {@code observed} among {@code nulls} (NaN observed: 1). */
+    static double monteCarlo(double observed, double[] nulls) {
+        if (Double.isNaN(observed)) {
+            return 1.0;
+        }
+        int atLeast = 0;
+        for (double v : nulls) {
+            atLeast += !(v < observed) ? 1 : 0;
+        }
+        return (1.0 + atLeast) / (1.0 + nulls.length);
+    }
+
+    private static double[] filled(double[] v) {
+        double[] out = v.clone();
+        for (int i = 0; i < out.length; i++) {
+            if (Double.isNaN(out[i])) {
+                out[i] = 0;
+            }
+        }
+        return out;
+    }
+
+    private static double[] finite(double[] v) {
+        return Arrays.stream(v).filter(Double::isFinite).toArray();
+    }
+
+    private static double mean(double[] v) {
+        if (v.length == 0) {
+            return Double.NaN;
+        }
+        double s = 0;
+        for (double x : v) {
+            s += x;
+        }
+        return s / v.length;
+    }
+
+    /** Sample SD (n - 1). */
+    private static double sd(double[] v, double mean) {
+        if (v.length < 2) {
+            return 0;
+        }
+        double s = 0;
+        for (double x : v) {
+            s += (x - mean) * (x - mean);
+        }
+        return Math.sqrt(s / (v.length - 1));
+    }
+}

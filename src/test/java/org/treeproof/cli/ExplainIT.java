@@ -1,0 +1,224 @@
+package org.treeproof.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import java.util.SplittableRandom;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The explanation end to end from the jar, on seeded invented tables: planted markers rank first, a batch-only
+ * data set has its batch flagged and nothing else, and the alternative analyses agree on planted clusters and
+ * not all of them on noise.
+ */
+class ExplainIT {
+    private static final ObjectMapper JSON = new ObjectMapper();
+    private static final String[] QUICK = {"--replicates", "40", "--null-replicates", "5", "--reference-sets", "0",
+        "--no-progress", "--threads", "2"};
+
+    @TempDir
+    Path tmp;
+
+    /** Samples in rows; {@code shift[i][j]} added to standard normal noise. */
+    private Path table(String name, int n, int m, long seed, java.util.function.BiFunction<Integer, Integer, Double> shift)
+            throws IOException {
+        var r = new SplittableRandom(seed);
+        var sb = new StringBuilder("sample");
+        for (int j = 0; j < m; j++) {
+            sb.append(",marker-").append(j);
+        }
+        sb.append('\n');
+        for (int i = 0; i < n; i++) {
+            sb.append(String.format("s%03d", i));
+            for (int j = 0; j < m; j++) {
+                sb.append(',').append(String.format(java.util.Locale.ROOT, "%.5f", r.nextGaussian() + shift.apply(i, j)));
+            }
+            sb.append('\n');
+        }
+        Path p = tmp.resolve(name);
+        Files.writeString(p, sb.toString());
+        return p;
+    }
+
+    /** id, batch (given), sex and age (random), site with some values missing; tab-separated (named .tsv). */
+    private Path covariates(String name, int n, long seed, java.util.function.IntFunction<String> batch)
+            throws IOException {
+        var r = new SplittableRandom(seed);
+        var sb = new StringBuilder("id\tbatch\tsex\tage\tsite\n");
+        for (int i = 0; i < n; i++) {
+            sb.append(String.format("s%03d\t%s\t%s\t%.1f\t%s%n", i, batch.apply(i), r.nextBoolean() ? "f" : "m",
+                    20 + 50 * r.nextDouble(), r.nextInt(6) == 0 ? "NA" : "site-" + (1 + r.nextInt(3))));
+        }
+        Path p = tmp.resolve(name);
+        Files.writeString(p, sb.toString());
+        return p;
+    }
+
+    private Jar.Result run(String... args) throws Exception {
+        var all = new ArrayList<>(List.of(args));
+        all.addAll(List.of(QUICK));
+        return Jar.run(tmp, all.toArray(String[]::new));
+    }
+
+    private static List<CSVRecord> csv(Path file) throws IOException {
+        try (var p = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+                .parse(Files.newBufferedReader(file))) {
+            return p.getRecords();
+        }
+    }
+
+    @Test
+    void plantedMarkersRankFirstAndOtherAnalysesAgree() throws Exception {
+        // 3 groups of 30; group g raises markers 3g..3g+2 by 4 standard deviations; 40 features
+        Path data = table("planted.csv", 90, 40, 1, (i, j) -> j / 3 == i / 30 ? 4.0 : 0.0);
+        Path cov = covariates("planted-covariates.tsv", 90, 2, i -> "run-" + (1 + i % 2));
+        Jar.Result r = run("assess", data.toString(), "--out", "planted", "--covariates", cov.toString(),
+                "--sensitivity");
+        assertEquals(0, r.exit(), r.err());
+        Path dir = tmp.resolve("planted");
+        JsonNode s = JSON.readTree(dir.resolve("summary.json").toFile());
+        assertEquals(3, s.get("recommendation").get("k").asInt());
+
+        List<CSVRecord> features = csv(dir.resolve("features.csv"));
+        assertEquals(List.of("cluster", "feature", "rank", "effect", "auc", "meanInCluster", "meanElsewhere", "pValue",
+                "qValue"), List.of(Files.readAllLines(dir.resolve("features.csv")).get(0).split(",")));
+        assertEquals(3 * 40, features.size());
+        for (int c = 1; c <= 3; c++) {
+            String cl = Integer.toString(c);
+            Set<String> top = new HashSet<>();
+            features.stream().filter(x -> x.get("cluster").equals(cl) && Integer.parseInt(x.get("rank")) <= 3)
+                    .forEach(x -> top.add(x.get("feature")));
+            // the cluster's planted markers are its top three, whichever group number it got
+            int g = Integer.parseInt(top.iterator().next().substring("marker-".length())) / 3;
+            assertEquals(Set.of("marker-" + 3 * g, "marker-" + (3 * g + 1), "marker-" + (3 * g + 2)), top, "cluster " + c);
+            features.stream().filter(x -> x.get("cluster").equals(cl) && top.contains(x.get("feature")))
+                    .forEach(x -> assertTrue(Double.parseDouble(x.get("qValue")) < 1e-6, x.toString()));
+        }
+
+        List<CSVRecord> covs = csv(dir.resolve("covariates.csv"));
+        assertEquals(List.of("batch", "sex", "age", "site"), covs.stream().map(x -> x.get("covariate")).toList());
+        assertEquals("numeric", covs.get(2).get("kind"));
+        assertTrue(covs.stream().noneMatch(x -> x.get("flagged").equals("true")), covs.toString());
+
+        List<CSVRecord> sens = csv(dir.resolve("sensitivity.csv"));
+        // Ward (chosen here) takes Euclidean distances only: the other two scalings run, log2 cannot (negative values)
+        assertEquals(List.of("scale: none", "scale: center", "log2: on"), sens.stream().map(x -> x.get("alternative"))
+                .toList());
+        for (CSVRecord x : sens.subList(0, 2)) {
+            assertTrue(Double.parseDouble(x.get("ari")) > 0.9, x.toString());
+            assertEquals("3", x.get("clustersSurviving"), x.toString());
+        }
+        assertTrue(sens.get(2).get("note").startsWith("not run: "), sens.get(2).toString());
+
+        Document html = Jsoup.parse(dir.resolve("report.html").toFile(), "UTF-8");
+        for (String id : List.of("features", "covariates", "sensitivity")) {
+            assertFalse(html.select("#" + id).isEmpty(), "section " + id);
+            assertFalse(html.select("nav a[href=#" + id + "]").isEmpty(), "nav " + id);
+        }
+        assertFalse(html.select("#figure-features img").isEmpty());
+        assertFalse(html.select("#figure-sensitivity img").isEmpty());
+        assertTrue(html.select("#features").text().contains("double dipping"));
+        String methods = Files.readString(dir.resolve("methods.md"), StandardCharsets.UTF_8);
+        for (int c = 1; c <= 3; c++) {
+            assertTrue(java.util.regex.Pattern.compile("Cluster " + c + " \\(\\d+ samples\\) is set apart most by marker-")
+                    .matcher(methods).find(), methods);
+        }
+        assertTrue(methods.contains("Benjamini & Hochberg, 1995"));
+    }
+
+    @Test
+    void batchOnlyDataHasItsBatchFlaggedAndNothingElse() throws Exception {
+        // one population measured in two batches: batch 2 reads 3 units higher on every feature
+        Path data = table("batches.csv", 80, 30, 3, (i, j) -> i % 2 == 1 ? 3.0 : 0.0);
+        Path cov = covariates("batches-covariates.tsv", 80, 4, i -> "batch-" + (1 + i % 2));
+        Jar.Result r = run("assess", data.toString(), "--out", "batches", "--covariates", cov.toString());
+        assertEquals(0, r.exit(), r.err());
+        Path dir = tmp.resolve("batches");
+        List<CSVRecord> covs = csv(dir.resolve("covariates.csv"));
+        assertEquals("true", covs.get(0).get("flagged"), covs.toString());
+        assertEquals("chi-square", covs.get(0).get("test"));
+        for (CSVRecord c : covs.subList(1, covs.size())) {
+            assertEquals("false", c.get("flagged"), c.toString());
+        }
+        JsonNode s = JSON.readTree(dir.resolve("summary.json").toFile());
+        assertEquals("batch", s.get("explain").get("flaggedCovariates").get(0).asText());
+        boolean inReasons = false;
+        for (JsonNode reason : s.get("recommendation").get("reasons")) {
+            inReasons |= reason.asText().contains("largely follow the covariate 'batch'");
+        }
+        assertTrue(inReasons, s.get("recommendation").get("reasons").toString());
+        Document html = Jsoup.parse(dir.resolve("report.html").toFile(), "UTF-8");
+        assertTrue(html.select("#decision li").first().text().contains("largely follow the covariate 'batch'"),
+                html.select("#decision").text());
+        assertFalse(Files.exists(dir.resolve("sensitivity.csv")));
+    }
+
+    @Test
+    void someOtherAnalysesDisagreeOnNoise() throws Exception {
+        Path data = table("noise.csv", 100, 20, 5, (i, j) -> 0.0);
+        // without null calibration the best noise cut can be tentative, so that there is a solution to stress
+        Jar.Result r = run("assess", data.toString(), "--out", "noise", "--linkages", "average", "--null-sets", "0",
+                "--sensitivity");
+        assertEquals(0, r.exit(), r.err());
+        Path dir = tmp.resolve("noise");
+        JsonNode s = JSON.readTree(dir.resolve("summary.json").toFile());
+        assertEquals("tentative", s.get("recommendation").get("verdict").asText());
+        List<CSVRecord> sens = csv(dir.resolve("sensitivity.csv"));
+        // the noise "clusters" split off extreme samples: the Euclidean family finds the same samples again, the
+        // correlation and rank dissimilarities do not
+        double min = sens.stream().filter(x -> !x.get("ari").isEmpty()).mapToDouble(x -> Double.parseDouble(x.get("ari")))
+                .min().orElseThrow();
+        assertTrue(min < 0.2, "smallest ARI " + min + " " + sens);
+        for (CSVRecord x : sens) {
+            if (List.of("cosine", "pearson", "spearman").contains(x.get("metric"))) {
+                assertTrue(Double.parseDouble(x.get("ari")) < 0.2, x.toString());
+                assertEquals("0", x.get("clustersSurviving"), x.toString());
+            }
+        }
+    }
+
+    @Test
+    void badCovariateInputIsRefusedInOneLine() throws Exception {
+        Path data = table("small.csv", 30, 5, 6, (i, j) -> 0.0);
+        Path cov = covariates("cov.tsv", 29, 7, i -> "b" + i % 2);
+        Jar.Result missing = run("assess", data.toString(), "--out", "o1", "--covariates", cov.toString());
+        assertEquals(2, missing.exit());
+        assertTrue(missing.err().contains("1 sample(s) of the study have no row, the first is 's029'"), missing.err());
+        Path full = covariates("cov2.tsv", 30, 7, i -> "b" + i % 2);
+        Jar.Result kind = run("assess", data.toString(), "--out", "o2", "--covariates", full.toString(),
+                "--covariate-kind", "height=numeric");
+        assertEquals(2, kind.exit());
+        assertTrue(kind.err().contains("has no covariate 'height'"), kind.err());
+        Jar.Result notNumber = run("assess", data.toString(), "--out", "o3", "--covariates", full.toString(),
+                "--covariate-kind", "sex=numeric");
+        assertEquals(2, notNumber.exit());
+        assertTrue(notNumber.err().contains(":2:3: 'f' is not a number") || notNumber.err().contains(":2:3: 'm' is not a number"),
+                notNumber.err());
+        Path odd = tmp.resolve("cov.dat");
+        Files.copy(full, odd);
+        Jar.Result name = run("assess", data.toString(), "--out", "o4", "--covariates", odd.toString());
+        assertEquals(2, name.exit());
+        assertTrue(name.err().contains("cannot tell the delimiter from the file name"), name.err());
+        for (String o : List.of("o1", "o2", "o3", "o4")) {
+            assertFalse(Files.exists(tmp.resolve(o)), o);
+        }
+        assertEquals(1, Arrays.stream(missing.err().split("\n")).filter(l -> !l.isBlank()).count(), missing.err());
+    }
+}

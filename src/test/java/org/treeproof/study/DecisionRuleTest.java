@@ -1,0 +1,93 @@
+package org.treeproof.study;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.treeproof.tree.Linkage;
+
+/**
+ * The decision rule on hand-built facts: each condition at its boundary, and the ordering. The thresholds are
+ * written out here as their sources give them (alpha 0.05 by convention; Hennig 2007's bands are the Jaccard
+ * statuses, so the facts carry the statuses), not read from the rule's constants.
+ */
+class DecisionRuleTest {
+    private static final DecisionRule RULE = DecisionRule.DEFAULT;
+
+    private static Assessment.Facts calibrated(int k, double excess, double p, boolean allStable, boolean whole) {
+        return new Assessment.Facts(Linkage.AVERAGE, k, 0, 0.9, allStable ? 0.9 : whole ? 0.6 : 0.3, allStable,
+                whole, 0.1, true, excess, p, 0.8);
+    }
+
+    private static Assessment.Facts uncalibrated(double ari, boolean allStable, double silhouette) {
+        return new Assessment.Facts(Linkage.AVERAGE, 2, 0, ari, allStable ? 0.9 : 0.6, allStable, true, silhouette,
+                false, Double.NaN, Double.NaN, 0.8);
+    }
+
+    @Test
+    void beatingTheNullWithEveryClusterStableIsSupported() {
+        Assessment a = RULE.assess(calibrated(3, 8.0, 0.05, true, true));
+        assertEquals(Verdict.SUPPORTED, a.verdict());
+        assertEquals(List.of(Condition.BEATS_NULL, Condition.NO_CLUSTER_DISSOLVES, Condition.EVERY_CLUSTER_STABLE),
+                a.met());
+        assertTrue(a.failed().isEmpty());
+    }
+
+    @Test
+    void theAdjustedPValueIsComparedInclusivelyWithAlpha() {
+        assertEquals(Verdict.SUPPORTED, RULE.assess(calibrated(2, 5, 0.05, true, true)).verdict());
+        Assessment above = RULE.assess(calibrated(2, 5, 0.1, true, true));
+        assertEquals(Verdict.UNSUPPORTED, above.verdict());
+        assertEquals(List.of(Condition.BEATS_NULL), above.failed());
+    }
+
+    @Test
+    void aDoubtfulClusterMakesItTentativeAndADissolvedOneUnsupported() {
+        Assessment doubtful = RULE.assess(calibrated(3, 8, 0.05, false, true));
+        assertEquals(Verdict.TENTATIVE, doubtful.verdict());
+        assertEquals(List.of(Condition.EVERY_CLUSTER_STABLE), doubtful.failed());
+        Assessment dissolved = RULE.assess(calibrated(3, 8, 0.05, false, false));
+        assertEquals(Verdict.UNSUPPORTED, dissolved.verdict());
+        assertEquals(List.of(Condition.NO_CLUSTER_DISSOLVES, Condition.EVERY_CLUSTER_STABLE), dissolved.failed());
+    }
+
+    @Test
+    void noSilhouetteBandGatesACalibratedVerdict() {
+        // a silhouette of 0.02, as in wide data, does not stop a solution that beats the null with stable clusters
+        var f = new Assessment.Facts(Linkage.WARD, 3, 0, 1.0, 1.0, true, true, 0.02, true, 30, 0.05, 0.5);
+        assertEquals(Verdict.SUPPORTED, RULE.assess(f).verdict());
+    }
+
+    @Test
+    void withoutNullDataTheBestIsTentativeAndNeedsStabilityAndSeparation() {
+        assertEquals(Verdict.TENTATIVE, RULE.assess(uncalibrated(0.75, true, 0.51)).verdict());
+        assertEquals(Verdict.UNSUPPORTED, RULE.assess(uncalibrated(0.74, true, 0.9)).verdict());
+        assertEquals(Verdict.UNSUPPORTED, RULE.assess(uncalibrated(0.9, false, 0.9)).verdict());
+        // Kaufman and Rousseeuw: above 0.50 is a reasonable structure; 0.50 itself is not above it
+        Assessment at = RULE.assess(uncalibrated(0.9, true, 0.5));
+        assertEquals(Verdict.UNSUPPORTED, at.verdict());
+        assertEquals(List.of(Condition.SEPARATED_WITHOUT_NULL), at.failed());
+    }
+
+    @Test
+    void theOrderPrefersTheVerdictThenTheExcessThenTheSmallestJaccard() {
+        var list = new ArrayList<Assessment>();
+        list.add(RULE.assess(calibrated(2, 20, 0.05, false, true)));   // tentative, large excess
+        list.add(RULE.assess(calibrated(3, 9, 0.05, true, true)));     // supported
+        list.add(RULE.assess(calibrated(4, 12, 0.05, true, true)));    // supported, larger excess
+        list.add(RULE.assess(calibrated(5, 40, 0.5, true, true)));     // unsupported
+        list.sort(RULE.order());
+        assertEquals(List.of(4, 3, 2, 5), list.stream().map(Assessment::k).toList());
+    }
+
+    @Test
+    void tiesKeepTheEarlierSolution() {
+        var list = new ArrayList<Assessment>();
+        list.add(RULE.assess(calibrated(2, 9, 0.05, true, true)));
+        list.add(RULE.assess(calibrated(3, 9, 0.05, true, true)));
+        list.sort(RULE.order());
+        assertEquals(2, list.get(0).k());
+    }
+}
