@@ -124,18 +124,19 @@ final class AssessCommand implements Callable<Integer> {
         int nThreads = Threads.resolve(threads, "--threads");
         Engine chosen = engine == null ? Engine.LOCAL : Engine.parse(engine);
         chosen.requireAvailable();
-        StudySettings settings = study.settings();
+        StudySettings settings = study.settings(inputOptions.distances());
         List<Path> reads = labels == null ? List.of(input) : List.of(input, labels);
         InputHints.requireReadable(input, "INPUT");
         if (labels != null) {
             InputHints.requireReadable(labels, "--labels");
         }
         OutputGuard.check(out, "--out", force, reads);
-        inputOptions.requireUntransformedFor(settings.metric());
+        inputOptions.fitTo(settings.metric());
         LoadedInput loaded = inputOptions.load(input);
         StudyInput studyInput = loaded.isDistanceTable()
                 ? StudyInput.ofDistances(loaded.sampleIds(), loaded.distances().orElseThrow())
                 : StudyInput.of(loaded.matrix().orElseThrow());
+        SampleVariety.require(input, studyInput, settings);
         settings.checkAgainst(studyInput.samples(), studyInput.hasData(), study.maxKGiven());
         org.treeproof.study.Magnitudes.requireWithinLimit(studyInput);
         String[] classes = labels == null ? null

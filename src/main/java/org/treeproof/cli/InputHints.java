@@ -1,23 +1,16 @@
 package org.treeproof.cli;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
-import java.util.zip.GZIPInputStream;
 import org.treeproof.data.InputException;
 import org.treeproof.io.DataTable;
 import org.treeproof.io.DataTableReader;
 
 /**
  * Clearer words for input mistakes whose plain message misleads: standard input or a pipe given as a file, a missing
- * labels file, a spreadsheet's {@code sep=} line above the header, and a data table given with {@code --distances}.
+ * labels file, and a data table given with {@code --distances}.
  */
 final class InputHints {
-    private static final Pattern SEP_LINE = Pattern.compile("^\uFEFF?(sep=.)\r?\n");
 
     private InputHints() {
     }
@@ -43,12 +36,7 @@ final class InputHints {
 
     /** {@code e} with a hint added when the input's shape explains it better, or {@code e} itself. */
     static InputException explain(Path input, InputException e, InputOptions options) {
-        String sep = sepLine(input);
-        if (sep != null) {
-            return new InputException(input + ":1: the first line '" + sep + "' is a spreadsheet's delimiter hint, "
-                    + "not part of the table; delete that line (treeproof takes the delimiter from the file name or "
-                    + "--delimiter)", e);
-        }
+        // a sep= first line is honoured by the table reader (TableText), so it never explains a failure
         if (options.distances()) {
             try {
                 DataTable t = new DataTableReader(options.delimiter().orElse(null), false).read(input);
@@ -61,18 +49,5 @@ final class InputHints {
             }
         }
         return e;
-    }
-
-    /** The {@code sep=X} first line of the file, or null. */
-    private static String sepLine(Path input) {
-        try (InputStream raw = Files.newInputStream(input);
-                InputStream in = input.toString().toLowerCase(java.util.Locale.ROOT).endsWith(".gz")
-                        ? new GZIPInputStream(raw) : raw) {
-            String head = new String(in.readNBytes(16), StandardCharsets.UTF_8);
-            Matcher m = SEP_LINE.matcher(head);
-            return m.find() ? m.group(1) : null;
-        } catch (IOException | RuntimeException unreadable) {
-            return null;
-        }
     }
 }

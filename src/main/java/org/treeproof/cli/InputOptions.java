@@ -46,17 +46,33 @@ public final class InputOptions {
 
     @Option(names = "--scale", paramLabel = "HOW", converter = ScaleConverter.class,
             description = "Per-feature scaling after log2: none, center or zscore (population SD; constant features"
-                    + " are dropped and reported). Default: zscore.")
+                    + " are dropped and reported). Default: zscore; none for the 0/1 metrics jaccard and hamming.")
     private Scale scale;
 
     @Option(names = "--top-variable", paramLabel = "N", converter = TopVariableConverter.class,
             description = "Keep the N features of largest variance (ties by input order), 0 for all. Default: 0.")
     private Integer topVariable;
 
+    @Option(names = "--no-ids",
+            description = "The table has no id column: every column is a feature, and samples are named by their"
+                    + " row, 1 to n.")
+    private boolean noIds;
+
     @Option(names = "--distances",
             description = "INPUT is a square, symmetric table of distances with ids in its header row and first"
                     + " column, not a data table.")
     private boolean distances;
+
+    /** Set by {@link #fitTo}: a 0/1 metric, whose default scaling is none. */
+    private boolean binaryMetric;
+
+    /** How messages name the input when INPUT is {@code -}. */
+    static final String STANDARD_INPUT = "standard input";
+
+    /** Whether {@code input} is {@code -}, which stands for standard input. */
+    static boolean isStandardInput(Path input) {
+        return input.toString().equals("-");
+    }
 
     /** Whether INPUT is a distance table. */
     public boolean distances() {
@@ -73,10 +89,14 @@ public final class InputOptions {
         return Optional.ofNullable(delimiter);
     }
 
-    /** The effective preparation of a data table, defaults filled in. */
+    /**
+     * The effective preparation of a data table, defaults filled in: {@link Preparation#DEFAULT_SCALE}, or no
+     * scaling for a 0/1 metric (see {@link #fitTo}).
+     */
     public Preparation preparation() {
+        Scale defaultScale = binaryMetric ? Scale.NONE : Preparation.DEFAULT_SCALE;
         return new Preparation(missing == null ? MissingPolicy.ERROR : missing, log2,
-                scale == null ? Preparation.DEFAULT_SCALE : scale, topVariable == null ? 0 : topVariable);
+                scale == null ? defaultScale : scale, topVariable == null ? 0 : topVariable);
     }
 
     /**
@@ -101,14 +121,17 @@ public final class InputOptions {
             addIf(notForDistances, log2, "--log2");
             addIf(notForDistances, scale != null, "--scale");
             addIf(notForDistances, topVariable != null, "--top-variable");
+            addIf(notForDistances, noIds, "--no-ids");
             if (!notForDistances.isEmpty()) {
                 throw new InputException(String.join(", ", notForDistances) + (notForDistances.size() == 1 ? " does"
                         : " do") + " not apply to a distance table (--distances)");
             }
-            return LoadedInput.of(new DistanceTableReader(delimiter).read(input));
+            DistanceTableReader reader = new DistanceTableReader(delimiter);
+            return LoadedInput.of(isStandardInput(input) ? reader.read(STANDARD_INPUT, System.in) : reader.read(input));
         }
         Preparation preparation = preparation();
-        DataTable table = new DataTableReader(delimiter, samplesInColumns).read(input);
+        DataTableReader reader = new DataTableReader(delimiter, samplesInColumns, noIds);
+        DataTable table = isStandardInput(input) ? reader.read(STANDARD_INPUT, System.in) : reader.read(input);
         return LoadedInput.of(table, preparation.apply(table.matrix(), table.locator()));
     }
 
@@ -118,17 +141,21 @@ public final class InputOptions {
     }
 
     /**
-     * Refuses a preparation that would turn 0/1 data into other values before a 0/1 measure sees them
-     * (log2 and any scaling do).
+     * Fits the preparation to {@code metric}: a 0/1 measure takes the data as they are, so its default scaling is
+     * {@code none}, and an explicit log2 or scaling, which would turn 0/1 values into others, is refused.
+     *
+     * @throws InputException naming the option that transforms the values
      */
-    public void requireUntransformedFor(org.treeproof.distance.Metric metric) {
-        if (!metric.binaryOnly() || distances) {
+    public void fitTo(org.treeproof.distance.Metric metric) {
+        binaryMetric = metric.binaryOnly() && !distances;
+        if (!binaryMetric) {
             return;
         }
         Preparation p = preparation();
         if (p.log2() || p.scale() != Scale.NONE) {
-            throw new InputException("--metric " + metric.id() + " takes 0/1 data as they are; add --scale none"
-                    + (p.log2() ? " and drop --log2" : "") + " (the default z-scoring changes 0/1 values)");
+            throw new InputException("--metric " + metric.id() + " takes 0/1 data as they are; "
+                    + (p.scale() != Scale.NONE ? "drop --scale " + p.scale().userName() + (p.log2() ? " and " : "")
+                    : "") + (p.log2() ? "drop --log2" : "") + " (they change 0/1 values)");
         }
     }
 

@@ -18,7 +18,7 @@ import picocli.CommandLine.Option;
 final class StudyOptions {
 
     @Option(names = "--linkages", paramLabel = "L,L", split = ",", description = "Linkages to compare (default: "
-            + "average,complete,ward). Any of single, complete, average (upgma), weighted (wpgma), ward, centroid, median.")
+            + "average,complete,ward; average,complete with a metric other than euclidean). Any of single, complete, average (upgma), weighted (wpgma), ward, centroid, median.")
     List<String> linkages;
 
     @Option(names = "--metric", paramLabel = "NAME", description = "Dissimilarity (default: euclidean): euclidean, "
@@ -147,10 +147,25 @@ final class StudyOptions {
                 branchReplicates == null ? BranchPValueSettings.DEFAULT_REPLICATES : branchReplicates));
     }
 
-    /** The settings, every problem reported at once. */
+    /** The settings for a data table, every problem reported at once. */
     StudySettings settings() {
+        return settings(false);
+    }
+
+    /**
+     * The settings, every problem reported at once. For a distance table ({@code distanceTable}) the options that
+     * act on data are refused as contradictory, and the effective settings hold no gap reference sets and no null
+     * sets, which need a data table to draw from.
+     */
+    StudySettings settings(boolean distanceTable) {
+        if (distanceTable) {
+            refuseDataOnlyOptions();
+        }
         var problems = new ArrayList<String>();
         StudySettings.Builder b = StudySettings.builder();
+        if (distanceTable) {
+            b.referenceSets(0).nullSets(0);
+        }
         if (linkages != null) {
             var parsed = new ArrayList<Linkage>();
             for (String s : linkages) {
@@ -195,10 +210,10 @@ final class StudyOptions {
         if (featureFraction != null) {
             b.featureFraction(featureFraction);
         }
-        if (referenceSets != null) {
+        if (referenceSets != null && !distanceTable) {
             b.referenceSets(referenceSets);
         }
-        if (nullSets != null) {
+        if (nullSets != null && !distanceTable) {
             b.nullSets(nullSets);
         }
         if (nullReplicates != null) {
@@ -225,6 +240,46 @@ final class StudyOptions {
                 problems.add(e.getMessage());
             }
             throw new InputException(String.join("; ", problems));
+        }
+    }
+
+    /**
+     * Refuses the options that only mean something for a data table: a distance table's distances are used as
+     * given, and null and reference data sets are drawn from the data. {@code --metric euclidean} (the default) is
+     * accepted, as a statement of what the distances are.
+     *
+     * @throws InputException naming each such option and {@code --distances}
+     */
+    private void refuseDataOnlyOptions() {
+        var given = new ArrayList<String>();
+        if (metric != null) {
+            Metric m;
+            try {
+                m = Metric.parse(metric);
+            } catch (InputException e) {
+                m = null;
+            }
+            if (m != Metric.EUCLIDEAN) {
+                given.add("--metric " + metric.strip());
+            }
+        }
+        addIf(given, referenceSets != null, "--reference-sets");
+        addIf(given, gapReference != null, "--gap-reference");
+        addIf(given, nullSets != null, "--null-sets");
+        addIf(given, nullReplicates != null, "--null-replicates");
+        addIf(given, featureFraction != null, "--feature-fraction");
+        if (given.isEmpty()) {
+            return;
+        }
+        throw new InputException(String.join(", ", given) + " contradict" + (given.size() == 1 ? "s" : "")
+                + " --distances: a distance table is clustered as given (no metric is applied, no null or reference"
+                + " data can be drawn, no features resampled); drop " + (given.size() == 1 ? "it" : "them")
+                + " or give the data table without --distances");
+    }
+
+    private static void addIf(List<String> list, boolean condition, String option) {
+        if (condition) {
+            list.add(option);
         }
     }
 }

@@ -60,7 +60,7 @@ final class TreeCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         Linkage link = Linkage.parse(linkage);
         if (!inputOptions.distances()) {
-            inputOptions.requireUntransformedFor(Metric.parse(metric));
+            inputOptions.fitTo(Metric.parse(metric));
         }
         InputHints.requireReadable(input, "INPUT");
         var loaded = inputOptions.load(input);

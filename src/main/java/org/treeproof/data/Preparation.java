@@ -104,6 +104,17 @@ public record Preparation(MissingPolicy missing, boolean log2, Scale scale, int 
         WorkingTable t = run.table;
         int p = t.features();
         double[] var = t.variances(t.means());
+        for (int j = 0; j < p; j++) {
+            if (Double.isInfinite(var[j])) {
+                int widest = 0;
+                for (int i = 1; i < t.samples(); i++) {
+                    widest = Math.abs(t.get(i, j)) > Math.abs(t.get(widest, j)) ? i : widest;
+                }
+                throw new InputException(run.locate(widest, j) + ": " + t.get(widest, j) + " " + run.names(widest, j)
+                        + " makes its feature's variance too large for a double, so --top-variable cannot rank it;"
+                        + " rescale the feature (e.g. --log2) first");
+            }
+        }
         Integer[] order = new Integer[p];
         for (int j = 0; j < p; j++) {
             order[j] = j;

@@ -55,6 +55,19 @@ final class PreparationRun {
         topVariable = t;
     }
 
+    /**
+     * Refuses a table in which {@code step} made a value too large for a double, naming the first such cell.
+     *
+     * @throws InputException naming file, line and column of the cell
+     */
+    void refuseNonFinite(String step) {
+        int[] at = table.first(x -> !Double.isFinite(x), where.featureMajor());
+        if (at != null) {
+            throw new InputException(locate(at[0], at[1]) + ": " + step + " makes this value " + names(at[0], at[1])
+                    + " too large for a double; rescale the feature (e.g. --log2) first");
+        }
+    }
+
     /** The location of cell {@code (i, j)} of the working table and its names, e.g. {@code data.csv:7:3}. */
     String locate(int i, int j) {
         return where.locate(table.sample(i), table.feature(j));

@@ -23,6 +23,7 @@ public enum Scale {
             double[] one = new double[mean.length];
             Arrays.fill(one, 1.0);
             run.table.shiftAndDivide(mean, one);
+            run.refuseNonFinite("centring");
         }
     },
     /**
@@ -38,10 +39,15 @@ public enum Scale {
                 left += c ? 0 : 1;
             }
             if (left == 0) {
-                throw new InputException(run.where.source() + ": every feature is constant across the samples, so "
-                        + "--scale zscore leaves nothing to cluster");
+                throw new InputException(run.where.source() + ": all " + run.table.samples() + " samples are "
+                        + "identical: every feature is constant across the samples, so --scale zscore leaves nothing"
+                        + " to cluster");
             }
             run.dropFeatures(constant, PreparationReport.Reason.CONSTANT, new int[constant.length]);
+            // z-scores do not change when a feature is scaled, so each is first divided by a power of two near its
+            // largest magnitude (exactly): then neither the squares of 1e308 overflow nor those of 1e-310 underflow,
+            // and ordinary values give the same bits as without it.
+            run.table.scaleByPowerOfTwo(run.table.powerOfTwoExponents(), -1);
             double[] mean = run.table.means();
             double[] sd = run.table.variances(mean);
             for (int j = 0; j < sd.length; j++) {

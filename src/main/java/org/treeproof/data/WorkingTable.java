@@ -110,10 +110,57 @@ final class WorkingTable {
     }
 
     /**
-     * Per-feature means, exact for constant features. The second pass adds the mean residual, which removes
-     * most of the rounding error of the plain sum (the "corrected two-pass" mean).
+     * Per feature, the exponent {@code e} of the power of two {@code 2^e} with {@code max |x| / 2^e} in [1, 2)
+     * ({@code 0} for an all-zero feature). Scaling a feature by it ({@link #scaleByPowerOfTwo}) is exact, and sums
+     * and squares of the scaled values neither overflow (for values near {@link Double#MAX_VALUE}) nor underflow
+     * (for subnormal values such as 1e-310); since rounding does not depend on a power-of-two scale, results for
+     * ordinary values are the same bits as without it.
+     */
+    int[] powerOfTwoExponents() {
+        int n = samples(), p = features();
+        double[] largest = new double[p];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < p; j++) {
+                largest[j] = Math.max(largest[j], Math.abs(v[i * p + j]));
+            }
+        }
+        int[] exponent = new int[p];
+        for (int j = 0; j < p; j++) {
+            double m = largest[j];
+            exponent[j] = m == 0 ? 0 : Math.getExponent(m) >= Double.MIN_EXPONENT ? Math.getExponent(m)
+                    : Math.getExponent(m * 0x1p54) - 54;
+        }
+        return exponent;
+    }
+
+    /** Multiplies feature {@code j} by {@code 2^(sign * exponent[j])}, in place. */
+    void scaleByPowerOfTwo(int[] exponent, int sign) {
+        int n = samples(), p = features();
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < p; j++) {
+                v[i * p + j] = Math.scalb(v[i * p + j], sign * exponent[j]);
+            }
+        }
+    }
+
+    /**
+     * Per-feature means, exact for constant features and computed on power-of-two scaled values (see
+     * {@link #powerOfTwoExponents}), so a feature holding values near {@link Double#MAX_VALUE} still has a finite
+     * mean. The second pass adds the mean residual, which removes most of the rounding error of the plain sum
+     * (the "corrected two-pass" mean).
      */
     double[] means() {
+        int[] exponent = powerOfTwoExponents();
+        scaleByPowerOfTwo(exponent, -1);
+        double[] mean = scaledMeans();
+        scaleByPowerOfTwo(exponent, 1);
+        for (int j = 0; j < mean.length; j++) {
+            mean[j] = Math.scalb(mean[j], exponent[j]);
+        }
+        return mean;
+    }
+
+    private double[] scaledMeans() {
         int n = samples(), p = features();
         double[] sum = new double[p];
         double[] min = new double[p];
@@ -144,7 +191,10 @@ final class WorkingTable {
         return mean;
     }
 
-    /** Per-feature population variances (divisor n), by the two-pass formula around {@code means}. */
+    /**
+     * Per-feature population variances (divisor n), by the two-pass formula around {@code means}. A variance too
+     * large for a double (values beyond about 1e154) is infinite; {@link Scale#ZSCORE} avoids forming it.
+     */
     double[] variances(double[] means) {
         int n = samples(), p = features();
         double[] ss = new double[p];

@@ -118,6 +118,16 @@ final class Cells {
      * @throws InputException for any other name
      */
     static char delimiterFor(String name) {
+        Character d = delimiterOf(name);
+        if (d != null) {
+            return d;
+        }
+        throw new InputException(name + ": cannot tell the delimiter from the file name (.csv is read with commas;"
+                + " .tsv, .tab and .txt with tabs, also with .gz); give --delimiter");
+    }
+
+    /** The delimiter the file name implies (see {@link #delimiterFor}), or {@code null} when it implies none. */
+    static Character delimiterOf(String name) {
         String n = name.toLowerCase(Locale.ROOT);
         if (n.endsWith(".gz")) {
             n = n.substring(0, n.length() - 3);
@@ -128,8 +138,7 @@ final class Cells {
         if (n.endsWith(".tsv") || n.endsWith(".tab") || n.endsWith(".txt")) {
             return '\t';
         }
-        throw new InputException(name + ": cannot tell the delimiter from the file name (.csv is read with commas;"
-                + " .tsv, .tab and .txt with tabs, also with .gz); give --delimiter");
+        return null;
     }
 
     /** How a delimiter is named in messages. */

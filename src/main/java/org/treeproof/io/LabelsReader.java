@@ -16,11 +16,31 @@ public final class LabelsReader {
     }
 
     /**
-     * The class of each study sample, in study order.
+     * The class of each study sample, in study order. The file's delimiter comes from its own name ({@code .csv}
+     * commas; {@code .tsv}, {@code .tab}, {@code .txt} tabs), not from the data table's; {@code fallback} is used
+     * only when the name implies none. Every message starts with {@code --labels FILE}.
      *
-     * @throws InputException naming file, line and column for a malformed row, a repeated id, or a missing sample
+     * @param fallback the delimiter for a file whose name implies none, or {@code null} to refuse such a name
+     * @throws InputException naming the option, file, line and column for a missing or unreadable file, a
+     *                        malformed row, a repeated id, or a missing sample
      */
-    public static String[] read(Path file, Character delimiter, List<String> sampleIds) {
+    public static String[] read(Path file, Character fallback, List<String> sampleIds) {
+        try {
+            return classes(file, fallback, sampleIds);
+        } catch (InputException e) {
+            throw new InputException("--labels " + e.getMessage());
+        }
+    }
+
+    private static String[] classes(Path file, Character fallback, List<String> sampleIds) {
+        Character delimiter = Cells.delimiterOf(file.toString());
+        if (delimiter == null) {
+            if (fallback == null) {
+                throw new InputException(file + ": cannot tell the labels file's delimiter from its name; name it"
+                        + " .csv (commas) or .tsv (tabs)");
+            }
+            delimiter = fallback;
+        }
         Map<String, String> classes = TableText.parse(file, delimiter, text -> {
             var out = new HashMap<String, String>();
             var firstLine = new HashMap<String, Integer>();

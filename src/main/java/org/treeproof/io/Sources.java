@@ -1,5 +1,7 @@
 package org.treeproof.io;
 
+import java.io.FileInputStream;
+import java.io.FileNotFoundException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.AccessDeniedException;
@@ -23,7 +25,12 @@ final class Sources {
             throw new InputException(file + ": is a directory, not a table file");
         }
         try {
-            return Files.newInputStream(file);
+            // A pipe (as from process substitution) is read as a stream: the channel of Files.newInputStream asks
+            // for its position, which a pipe does not have.
+            return Files.isRegularFile(file) ? Files.newInputStream(file) : new FileInputStream(file.toFile());
+        } catch (FileNotFoundException e) {
+            throw Files.exists(file) ? new InputException(file + ": cannot be opened: " + e.getMessage())
+                    : new InputException(file + ": no such file");
         } catch (NoSuchFileException e) {
             throw new InputException(file + ": no such file");
         } catch (AccessDeniedException e) {

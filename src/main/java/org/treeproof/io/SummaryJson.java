@@ -148,10 +148,15 @@ public final class SummaryJson {
         g.writeStringField("resampling", s.resampling().id());
         g.writeNumberField("sampleFraction", s.sampleFraction());
         g.writeNumberField("featureFraction", s.featureFraction());
+        // Only settings that took effect: the gap reference kind and null replicates only when those parts ran.
         g.writeNumberField("referenceSets", s.referenceSets());
-        g.writeStringField("gapReference", s.gapReference().userName());
+        if (s.referenceSets() > 0) {
+            g.writeStringField("gapReference", s.gapReference().userName());
+        }
         g.writeNumberField("nullSets", s.nullSets());
-        g.writeNumberField("nullReplicates", s.nullReplicates());
+        if (s.nullSets() > 0) {
+            g.writeNumberField("nullReplicates", s.nullReplicates());
+        }
         g.writeObjectFieldStart("pacInterval");
         g.writeNumberField("low", s.pacLow());
         g.writeNumberField("high", s.pacHigh());

@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
 import java.io.PushbackInputStream;
+import java.io.PushbackReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
@@ -34,11 +35,15 @@ import org.treeproof.data.InputSource;
  * are ignored. The parser is lenient about an unclosed quote and text after a closing quote so that the
  * readers, which refuse any cell with a line break and any malformed number, can name the exact cell instead of
  * an approximate position. Rows whose cells are all blank (empty lines, or {@code ,,,} as spreadsheets export
- * empty rows) are skipped.
+ * empty rows) are skipped. A first line {@code sep=X}, which spreadsheets write to declare the delimiter, is
+ * honoured: {@code X} is the delimiter, whatever the file name or {@code --delimiter} says, and the table starts
+ * on line 2.
  */
 final class TableText implements Closeable {
     private final String source;
     private final char delimiter;
+    /** 1 when a {@code sep=} first line was read before the parser started, else 0. */
+    private final int lineOffset;
     private final HashingInputStream hashed;
     private final CSVParser parser;
     private final Iterator<CSVRecord> records;
@@ -55,25 +60,76 @@ final class TableText implements Closeable {
         }
     }
 
-    private TableText(String source, char delimiter, InputStream raw) {
+    /**
+     * @param delimiter the delimiter, or {@code null} to take it from a {@code sep=} first line or else from the
+     *                  source's name
+     */
+    private TableText(String source, Character delimiter, InputStream raw) {
         this.source = source;
-        this.delimiter = delimiter;
         this.hashed = new HashingInputStream(raw);
-        CSVFormat format = CSVFormat.RFC4180.builder().setDelimiter(delimiter).setQuote('"')
-                .setIgnoreEmptyLines(false).setIgnoreSurroundingSpaces(true).setTrailingData(true)
-                .setLenientEof(true).get();
         try {
-            parser = format.parse(openText());
+            PushbackReader text = new PushbackReader(openText(), SEP_LINE_MAX);
+            Character declared = declaredDelimiter(text);
+            this.delimiter = declared != null ? declared
+                    : delimiter != null ? delimiter : Cells.delimiterFor(source);
+            this.lineOffset = declared == null ? 0 : 1;
+            this.lastLineEnd = lineOffset;
+            CSVFormat format = CSVFormat.RFC4180.builder().setDelimiter(this.delimiter).setQuote('"')
+                    .setIgnoreEmptyLines(false).setIgnoreSurroundingSpaces(true).setTrailingData(true)
+                    .setLenientEof(true).get();
+            parser = format.parse(text);
         } catch (IOException e) {
             Sources.closeQuietly(raw);
             throw new InputException(message(e));
+        } catch (InputException e) {
+            Sources.closeQuietly(raw);
+            throw e;
         }
         records = parser.iterator();
     }
 
+    /** The longest first line that is read as a delimiter declaration: {@code sep=X} and a line break. */
+    private static final int SEP_LINE_MAX = 7;
+
+    /**
+     * Reads a first line {@code sep=X} (as spreadsheets write to declare the delimiter, e.g. {@code sep=;}) and
+     * returns {@code X}, leaving the text after that line; anything else is left unread and gives {@code null}.
+     *
+     * @throws InputException when the declared delimiter cannot delimit CSV fields
+     */
+    private Character declaredDelimiter(PushbackReader text) throws IOException {
+        char[] head = new char[SEP_LINE_MAX];
+        int got = 0;
+        while (got < head.length) {
+            int r = text.read(head, got, head.length - got);
+            if (r < 0) {
+                break;
+            }
+            got += r;
+        }
+        String start = new String(head, 0, got);
+        boolean declared = got >= 5 && start.regionMatches(true, 0, "sep=", 0, 4)
+                && (got == 5 || head[5] == '\n' || head[5] == '\r');
+        if (!declared) {
+            text.unread(head, 0, got);
+            return null;
+        }
+        int end = 5;
+        if (got > 5) {
+            end = head[5] == '\r' && got > 6 && head[6] == '\n' ? 7 : 6;
+        }
+        text.unread(head, end, got - end);
+        char d = head[4];
+        if (d == '"' || d == '\n' || d == '\r' || (d < 0x20 && d != '\t')) {
+            throw new InputException(source + ":1:5: the first line declares " + Cells.shown(String.valueOf(d))
+                    + " as the delimiter (sep=), which cannot delimit fields");
+        }
+        return d;
+    }
+
     /** Opens {@code raw} for reading; the caller closes the result, which closes {@code raw}. */
-    static TableText open(String source, InputStream raw, char delimiter) {
-        return new TableText(source, Cells.checkDelimiter(delimiter), raw);
+    static TableText open(String source, InputStream raw, Character delimiter) {
+        return new TableText(source, delimiter == null ? null : Cells.checkDelimiter(delimiter), raw);
     }
 
     /**
@@ -94,7 +150,7 @@ final class TableText implements Closeable {
     static <T> T parse(String source, InputStream in, Character delimiter, Function<TableText, T> parse) {
         Objects.requireNonNull(source, "source");
         Objects.requireNonNull(in, "in");
-        try (TableText text = open(source, in, delimiter != null ? delimiter : Cells.delimiterFor(source))) {
+        try (TableText text = open(source, in, delimiter)) {
             return parse.apply(text);
         }
     }
@@ -167,7 +223,7 @@ final class TableText implements Closeable {
                 // Empty lines are not skipped by the parser, so rows are contiguous: each starts on the line after
                 // the previous one ended, however many lines a quoted field spans.
                 long start = lastLineEnd + 1;
-                lastLineEnd = parser.getCurrentLineNumber();
+                lastLineEnd = parser.getCurrentLineNumber() + lineOffset;
                 if (!blank(r)) {
                     if (start > Integer.MAX_VALUE) {
                         throw new InputException(source + ": more than " + Integer.MAX_VALUE + " lines");
@@ -236,7 +292,8 @@ final class TableText implements Closeable {
                 return t.getMessage();
             }
         }
-        return source + ":" + Math.max(1, parser == null ? 1 : parser.getCurrentLineNumber()) + ": could not be read: "
+        return source + ":" + Math.max(1, parser == null ? 1 : parser.getCurrentLineNumber() + lineOffset)
+                + ": could not be read: "
                 + e.getMessage();
     }
 

@@ -53,7 +53,7 @@ final class Figures {
 
         if (le.gap() != null) {
             out.add(figure("gap", "Gap statistic", f("Gap(k) with ± s_k for k = 1 to %d (%s linkage, %d reference sets "
-                    + "drawn over the %s); the rule (Tibshirani et al. 2001) picks k = %d%s.", le.gap().maxK(), link,
+                    + "%s); the rule (Tibshirani et al. 2001) picks k = %d%s.", le.gap().maxK(), link,
                     le.gap().referenceSets(), Names.gapReferenceProse(evidence.settings().gapReference()),
                     le.gapChoice(), le.gap().ruleMet() ? "" : ", the largest k examined, because it was never met")));
         } else {

@@ -120,11 +120,13 @@ public final class MethodsParagraph {
             out.add(branches);
         }
         if (model.nullCalibrated()) {
-            out.add(f("To tell structure from noise, the same procedure (%d replicates each) was applied to %d null "
-                    + "data sets drawn from a unimodal elliptical distribution with the data's principal axes, robust "
+            String nullData = s.metric().binaryOnly() ? Names.nullModelProse(s.metric())
+                    : f("drawn from a unimodal elliptical distribution with the data's principal axes, robust "
                     + "scales along them (normalised median absolute deviations, floored at the data's background "
                     + "noise level; %s) and the data's own distribution of distances from the centre, so that "
-                    + "heavy tails and far samples are kept and clusters are not. For each linkage and k, the excess "
+                    + "heavy tails and far samples are kept and clusters are not", cite(c, Reference.LIU));
+            out.add(f("To tell structure from noise, the same procedure (%d replicates each) was applied to %d null "
+                    + "data sets %s. For each linkage and k, the excess "
                     + "over the null was the mean ARI and the average silhouette, each standardised by the null sets' "
                     + "mean and standard deviation at that linkage and k, added together. Its p-value was adjusted "
                     + "for the choice among every linkage and k by the maximum statistic (%s): the Monte Carlo share "
@@ -133,8 +135,8 @@ public final class MethodsParagraph {
                     + "on the same number. The largest observed excess against the null sets' largest is the test of "
                     + "any cluster structure; beside its Monte Carlo p-value a p-value from a normal distribution "
                     + "fitted to the null sets' largest excess is reported.", s.nullReplicates(), s.nullSets(),
-                    cite(c, Reference.LIU), cite(c, Reference.WESTFALL_YOUNG), s.nullSets(),
-                    cite(c, Reference.HOPE), s.nullReplicates()));
+                    nullData, cite(c, Reference.WESTFALL_YOUNG), s.nullSets(), cite(c, Reference.HOPE),
+                    s.nullReplicates()));
         } else {
             out.add("Stability was not calibrated against null data.");
         }
@@ -145,7 +147,7 @@ public final class MethodsParagraph {
         }
         fit += f(" and the Dunn index (%s)", cite(c, Reference.DUNN));
         if (model.gapComputed()) {
-            fit += f("; the gap statistic (%s) was computed with %d reference data sets drawn uniformly over the %s, "
+            fit += f("; the gap statistic (%s) was computed with %d reference data sets %s, "
                     + "taking the smallest k with Gap(k) ≥ Gap(k+1) − s(k+1)", cite(c, Reference.TIBSHIRANI),
                     s.referenceSets(), Names.gapReferenceProse(s.gapReference()));
         }

@@ -210,12 +210,19 @@ final class ModelFactory {
                 ? Numbers.plain(s.sampleFraction()) : "not used (the bootstrap draws n samples with replacement)"));
         out.add(new ReportModel.Setting("Feature fraction", Numbers.plain(s.featureFraction())
                 + (s.resamplesFeatures() ? "" : " (all features in every replicate)")));
-        out.add(new ReportModel.Setting("Gap statistic reference sets", s.referenceSets()
-                + (s.referenceSets() == 0 ? " (not computed)" : data ? "" : " (not computed: distances only)")));
-        out.add(new ReportModel.Setting("Gap statistic reference data", s.gapReference().userName()));
-        out.add(new ReportModel.Setting("Null data sets", s.nullSets()
-                + (s.nullSets() == 0 ? " (no null calibration)" : data ? "" : " (not run: distances only)")));
-        out.add(new ReportModel.Setting("Replicates per null data set", Integer.toString(s.nullReplicates())));
+        // Only settings that took effect: no reference or null data are drawn from a distance table.
+        boolean gap = data && s.referenceSets() > 0;
+        boolean nulls = data && s.nullSets() > 0;
+        out.add(new ReportModel.Setting("Gap statistic reference sets", gap ? Integer.toString(s.referenceSets())
+                : data ? "0 (not computed)" : "none (not computed: distances only)"));
+        if (gap) {
+            out.add(new ReportModel.Setting("Gap statistic reference data", s.gapReference().userName()));
+        }
+        out.add(new ReportModel.Setting("Null data sets", nulls ? Integer.toString(s.nullSets())
+                : data ? "0 (no null calibration)" : "none (not run: distances only)"));
+        if (nulls) {
+            out.add(new ReportModel.Setting("Replicates per null data set", Integer.toString(s.nullReplicates())));
+        }
         out.add(new ReportModel.Setting("PAC interval", "(" + Numbers.plain(s.pacLow()) + ", "
                 + Numbers.plain(s.pacHigh()) + "]"));
         out.addAll(BranchPValueReport.settings(s));

@@ -20,9 +20,14 @@ final class Names {
             "Spearman rank correlation dissimilarities (1 − ρ)", Metric.JACCARD, "Jaccard distances on 0/1 features",
             Metric.HAMMING, "Hamming distances (the share of 0/1 features that differ)"));
 
+    /** How 0/1 reference and null data are drawn ({@link ReferenceData#featureFrequency}). */
+    private static final String BINARY_DRAW = "drawn as 0/1 values with each feature's observed frequency of ones,"
+            + " independently per feature";
+
     private static final Map<ReferenceData.Kind, String> GAP_REFERENCE_PROSE = new EnumMap<>(Map.of(
-            ReferenceData.Kind.PRINCIPAL_BOX, "box aligned with the data's principal axes",
-            ReferenceData.Kind.FEATURE_RANGE, "range of each feature"));
+            ReferenceData.Kind.PRINCIPAL_BOX, "drawn uniformly over the box aligned with the data's principal axes",
+            ReferenceData.Kind.FEATURE_RANGE, "drawn uniformly over the range of each feature",
+            ReferenceData.Kind.FEATURE_FREQUENCY, BINARY_DRAW));
 
     private Names() {
     }
@@ -42,8 +47,17 @@ final class Names {
         return METRIC_PROSE.getOrDefault(m, m.id() + " dissimilarities");
     }
 
-    /** Where the gap statistic's reference data are drawn uniformly, as a noun phrase. */
+    /** How the gap statistic's reference data are drawn, as a participle phrase ("drawn uniformly over ..."). */
     static String gapReferenceProse(ReferenceData.Kind kind) {
-        return GAP_REFERENCE_PROSE.getOrDefault(kind, kind.userName());
+        return GAP_REFERENCE_PROSE.getOrDefault(kind, "drawn as " + kind.userName());
+    }
+
+    /**
+     * How the null data of stability calibration are drawn for {@code metric}, as a participle phrase: the choice
+     * of {@link ReferenceData#nullModel}.
+     */
+    static String nullModelProse(Metric metric) {
+        return metric.binaryOnly() ? BINARY_DRAW + " (the same feature frequencies, no clusters)"
+                : "drawn from a unimodal elliptical distribution with the data's principal axes (no clusters)";
     }
 }

@@ -7,12 +7,13 @@ import java.util.Objects;
 import java.util.SplittableRandom;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.data.InputException;
+import org.treeproof.distance.Metric;
 
 /**
  * A seeded generator of structureless reference data sets shaped like an observed matrix: same sample ids,
  * feature names and size, values drawn afresh by {@link #draw(long)}.
  *
- * <p>Three reference distributions:
+ * <p>Four reference distributions:
  * <ul>
  *   <li>{@link #featureRange(DataMatrix)}: each feature uniform over its observed range, independently;
  *       method (a) of R. Tibshirani, G. Walther and T. Hastie, "Estimating the number of clusters in a data
@@ -25,12 +26,22 @@ import org.treeproof.data.InputException;
  *   <li>{@link #gaussian(DataMatrix)}: a Gaussian null that keeps the data's covariance and nothing else,
  *       {@code Z · diag(sd) · Vᵀ + means} with {@code Z} standard normal and {@code sd_c² } the variance
  *       along axis {@code c}; its expected sample covariance is the data's.</li>
+ *   <li>{@link #featureFrequency(DataMatrix)}: for 0/1 data, each feature drawn as 1 with its observed
+ *       frequency of ones and 0 otherwise, independently per feature and sample (independent Bernoulli
+ *       features with the observed margins). It is the structureless reference for the 0/1 measures
+ *       ({@link Metric#binaryOnly()}), which cannot take the continuous values of the other three: the same
+ *       "keep each feature's distribution, drop the dependence" idea as method (a), in the form used for
+ *       binary data by the independence null of permutation and Monte Carlo tests (common practice; no
+ *       single source).</li>
  * </ul>
+ *
+ * <p>{@link #nullModel(Metric, DataMatrix)} and {@link Kind#defaultFor(Metric)} choose the distribution that fits
+ * a metric: structureless data must be data the metric can measure.
  *
  * <p><b>Reproducibility.</b> A draw is a pure function of the prepared generator and the seed. All
  * randomness comes from one {@code new SplittableRandom(seed)} read with {@code nextDouble()} in a fixed
- * order: row by row, and within a row feature by feature (method (a)) or axis by axis (methods (b) and
- * (c)). Normal variates come from the polar method of G. Marsaglia and T. A. Bray, "A convenient method
+ * order: row by row, and within a row feature by feature (method (a) and the 0/1 draw, one uniform per
+ * cell, a 1 when it falls below the feature's frequency) or axis by axis (methods (b) and (c)). Normal variates come from the polar method of G. Marsaglia and T. A. Bray, "A convenient method
  * for generating normal variables", SIAM Review 6 (1964) 260-264, doi:10.1137/1006063 (DOI from memory),
  * using both values of each accepted pair in turn (a pair may span two rows), with {@link StrictMath#log}
  * so that no platform intrinsic can change a bit; Java 17 arithmetic is strict everywhere, so output is
@@ -63,6 +74,13 @@ public final class ReferenceData implements Serializable {
             public ReferenceData prepare(DataMatrix observed) {
                 return principalBox(observed);
             }
+        },
+        /** 0/1 values with each feature's observed frequency of ones: the reference for 0/1 metrics. */
+        FEATURE_FREQUENCY("feature-frequency", "binary") {
+            @Override
+            public ReferenceData prepare(DataMatrix observed) {
+                return featureFrequency(observed);
+            }
         };
 
         private final String userName;
@@ -81,6 +99,29 @@ public final class ReferenceData implements Serializable {
         /** A generator of this kind for {@code observed}. */
         public abstract ReferenceData prepare(DataMatrix observed);
 
+        /** The reference a study with {@code metric} draws unless told otherwise: one whose data it can measure. */
+        public static Kind defaultFor(Metric metric) {
+            return metric.binaryOnly() ? FEATURE_FREQUENCY : PRINCIPAL_BOX;
+        }
+
+        /**
+         * Why this reference cannot serve {@code metric}, or empty when it can: the 0/1 metrics take only 0/1 data,
+         * so they need {@link #FEATURE_FREQUENCY}, which in turn draws 0/1 data that only they are meant for.
+         */
+        public java.util.Optional<String> misfit(Metric metric) {
+            if (metric.binaryOnly() && this != FEATURE_FREQUENCY) {
+                return java.util.Optional.of("--gap-reference " + userName + " draws continuous values, which --metric "
+                        + metric.id() + " cannot measure; use " + FEATURE_FREQUENCY.userName + " (the default for "
+                        + metric.id() + ")");
+            }
+            if (!metric.binaryOnly() && this == FEATURE_FREQUENCY) {
+                return java.util.Optional.of("--gap-reference " + userName + " draws 0/1 data, for the 0/1 metrics"
+                        + " (jaccard, hamming) only; --metric " + metric.id() + " takes " + PRINCIPAL_BOX.userName
+                        + " or " + FEATURE_RANGE.userName);
+            }
+            return java.util.Optional.empty();
+        }
+
         /**
          * The kind named by {@code text} (user name or alias, any case, surrounding blanks ignored).
          *
@@ -94,7 +135,7 @@ public final class ReferenceData implements Serializable {
                 }
             }
             throw new InputException("unknown gap reference '" + text.strip() + "': expected "
-                    + FEATURE_RANGE.userName + " or " + PRINCIPAL_BOX.userName);
+                    + PRINCIPAL_BOX.userName + ", " + FEATURE_RANGE.userName + " or " + FEATURE_FREQUENCY.userName);
         }
 
         @Override
@@ -113,6 +154,14 @@ public final class ReferenceData implements Serializable {
                     double hi = ref.upper[c];
                     // nextDouble() < 1, but lo + (hi - lo) * u can still round up past hi.
                     z[c] = Math.min(hi, lo + (hi - lo) * rng.nextDouble());
+                }
+            }
+        },
+        BERNOULLI {
+            @Override
+            void coordinates(ReferenceData ref, SplittableRandom rng, Normal normal, double[] z) {
+                for (int c = 0; c < z.length; c++) {
+                    z[c] = rng.nextDouble() < ref.upper[c] ? 1.0 : 0.0;
                 }
             }
         },
@@ -147,7 +196,10 @@ public final class ReferenceData implements Serializable {
     private final List<String> sampleIds;
     private final List<String> featureNames;
     private final Shape shape;
-    /** Bounds of the uniform coordinates (features, or axes when {@link #axes} is set); null for Gaussian. */
+    /**
+     * Bounds of the uniform coordinates (features, or axes when {@link #axes} is set); for the 0/1 draw
+     * {@code upper} holds each feature's frequency of ones and {@code lower} zeros; null for Gaussian.
+     */
     private final double[] lower;
     private final double[] upper;
     /** Standard deviation per axis; Gaussian only. */
@@ -190,6 +242,45 @@ public final class ReferenceData implements Serializable {
         double[] hi = new double[p];
         columnRanges(x, n, p, lo, hi);
         return new ReferenceData(observed, Shape.UNIFORM, lo, hi, null, null, null);
+    }
+
+    /**
+     * 0/1 data with each feature's observed frequency of ones, independently per feature and sample: the
+     * structureless reference for the 0/1 metrics.
+     *
+     * @throws InputException if a value is missing or not 0 or 1, naming the first such cell
+     */
+    public static ReferenceData featureFrequency(DataMatrix observed) {
+        int n = observed.samples();
+        int p = observed.features();
+        double[] x = observed.rowMajorCopy();
+        PrincipalAxes.requireComplete(observed, x, "0/1 reference data");
+        double[] ones = new double[p];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < p; j++) {
+                double v = x[i * p + j];
+                if (v != 0 && v != 1) {
+                    throw new InputException("sample '" + observed.sampleIds().get(i) + "' has value " + v
+                            + " in feature '" + observed.featureNames().get(j) + "'; 0/1 reference data are drawn"
+                            + " from 0/1 data only");
+                }
+                ones[j] += v;
+            }
+        }
+        for (int j = 0; j < p; j++) {
+            ones[j] /= n;
+        }
+        return new ReferenceData(observed, Shape.BERNOULLI, new double[p], ones, null, null, null);
+    }
+
+    /**
+     * The null model of stability calibration for {@code metric}: structureless data the metric can measure,
+     * {@link #featureFrequency} for the 0/1 metrics and {@link #ellipticalNull} for every other.
+     *
+     * @throws InputException as those factories
+     */
+    public static ReferenceData nullModel(Metric metric, DataMatrix observed) {
+        return metric.binaryOnly() ? featureFrequency(observed) : ellipticalNull(observed);
     }
 
     /** Uniform over the principal-axis box of {@code observed} (method (b)), computing its axes. */

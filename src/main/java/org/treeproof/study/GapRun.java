@@ -94,7 +94,7 @@ final class GapRun {
 
         @Override
         public double[][] apply(int index) {
-            long seed = Seeds.seedFor(masterSeed, Seeds.Purpose.GAP_REFERENCE, index);
+            long seed = referenceSeed(masterSeed, index);
             // Euclidean distances and sums of squares are the same in the reference's own coordinates (an exact
             // rotation), which skips the back-transform to the features.
             DataMatrix ref = metric.rotationInvariant() ? generator.drawCoordinates(seed) : generator.draw(seed);
@@ -107,6 +107,11 @@ final class GapRun {
             }
             return out;
         }
+    }
+
+    /** The seed of reference set {@code index}: the one place that says how reference sets are seeded. */
+    static long referenceSeed(long masterSeed, int index) {
+        return Seeds.seedFor(masterSeed, Seeds.Purpose.GAP_REFERENCE, index);
     }
 
     private static double[] logW(Metric metric, DataMatrix x, CondensedDistances d, MergeTree tree, int maxK) {

@@ -185,7 +185,7 @@ public final class StudyRunner {
     private NullTable nullCalibration(DataMatrix data, int linkages, int minSize) {
         int sets = settings.nullSets();
         int maxK = settings.maxK();
-        var generator = org.treeproof.resample.ReferenceData.ellipticalNull(data);
+        var generator = org.treeproof.resample.ReferenceData.nullModel(settings.metric(), data);
         double[][][] meanAri = new double[linkages][maxK - 1][sets];
         double[][][] pac = new double[linkages][maxK - 1][sets];
         double[][][] sil = new double[linkages][maxK - 1][sets];

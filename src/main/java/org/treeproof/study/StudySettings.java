@@ -24,7 +24,8 @@ import org.treeproof.tree.Linkage;
  * @param sampleFraction  share of samples a subsample holds, in (0, 1]
  * @param featureFraction share of features each replicate holds, in (0, 1]; 1 keeps all (no recomputation)
  * @param referenceSets   reference data sets for the gap statistic (0 skips it)
- * @param gapReference    how the gap statistic's reference data are drawn
+ * @param gapReference    how the gap statistic's reference data are drawn; it must fit the metric
+ *                        ({@link ReferenceData.Kind#misfit}) when the gap statistic runs
  * @param nullSets        null data sets for calibrating stability (0 skips it)
  * @param nullReplicates  replicates drawn from each null data set
  * @param pacLow          lower end of the PAC interval (exclusive)
@@ -39,8 +40,16 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         int nullSets, int nullReplicates, double pacLow, double pacHigh, long seed, int minClusterSize,
         BranchPValueSettings branchPValues) {
 
-    /** The defaults a study uses when an option is not given. */
+    /** The defaults a study uses when an option is not given (with the Euclidean metric). */
     public static final List<Linkage> DEFAULT_LINKAGES = List.of(Linkage.AVERAGE, Linkage.COMPLETE, Linkage.WARD);
+
+    /**
+     * The linkages a study with {@code metric} compares unless told otherwise: {@link #DEFAULT_LINKAGES} without
+     * those defined only on Euclidean distances when the metric is another.
+     */
+    public static List<Linkage> defaultLinkagesFor(Metric metric) {
+        return DEFAULT_LINKAGES.stream().filter(l -> metric.euclidean() || !l.requiresEuclidean()).toList();
+    }
 
     /** The most replicates a study takes (the consensus counters' limit). */
     public static final int MAX_REPLICATES = org.treeproof.score.ConsensusAccumulator.MAX_REPLICATES;
@@ -54,6 +63,9 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         Objects.requireNonNull(gapReference, "gapReference");
         List<String> problems = problems(linkages, metric, maxK, replicates, sampleFraction, featureFraction,
                 referenceSets, nullSets, nullReplicates, pacLow, pacHigh);
+        if (referenceSets > 0) {
+            gapReference.misfit(metric).ifPresent(problems::add);
+        }
         if (minClusterSize < 0) {
             problems.add("--min-cluster-size must be 0 (automatic) or a number of samples, got " + minClusterSize);
         }
@@ -195,7 +207,8 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
 
     /** Collects options one by one; {@link #build()} validates them all at once. */
     public static final class Builder {
-        private List<Linkage> linkages = DEFAULT_LINKAGES;
+        /** Null until set: the default depends on the metric ({@link #defaultLinkagesFor}). */
+        private List<Linkage> linkages;
         private Metric metric = Metric.EUCLIDEAN;
         private int maxK = 10;
         private int replicates = 200;
@@ -203,7 +216,8 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         private double sampleFraction = 0.8;
         private double featureFraction = 1.0;
         private int referenceSets = 50;
-        private ReferenceData.Kind gapReference = ReferenceData.Kind.PRINCIPAL_BOX;
+        /** Null until set: the default depends on the metric ({@link ReferenceData.Kind#defaultFor}). */
+        private ReferenceData.Kind gapReference;
         private int nullSets = 19;
         private int nullReplicates = 10;
         private int minClusterSize = 0;
@@ -293,9 +307,10 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
         }
 
         public StudySettings build() {
-            return new StudySettings(linkages, metric, maxK, replicates, resampling, sampleFraction, featureFraction,
-                    referenceSets, gapReference, nullSets, nullReplicates, pacLow, pacHigh, seed,
-                    minClusterSize, branchPValues);
+            return new StudySettings(linkages == null ? defaultLinkagesFor(metric) : linkages, metric, maxK, replicates,
+                    resampling, sampleFraction, featureFraction, referenceSets,
+                    gapReference == null ? ReferenceData.Kind.defaultFor(metric) : gapReference, nullSets, nullReplicates,
+                    pacLow, pacHigh, seed, minClusterSize, branchPValues);
         }
     }
 }

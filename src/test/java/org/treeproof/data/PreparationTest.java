@@ -248,4 +248,69 @@ class PreparationTest {
         assertThrows(InputException.class, () -> MissingPolicy.fromUserName("impute"));
         assertThrows(InputException.class, () -> Scale.fromUserName("minmax"));
     }
+
+    @Test
+    void zscoreOfAFeatureHoldingOneHugeValueIsComputedNotZeroed() {
+        // a = {1, 1e308, 2, 3, 4}: mean m = 2e307 + 2; deviations -2e307 (four times, to 1 part in 1e307) and 8e307;
+        // population SD sqrt((4 * 4e614 + 64e614) / 5) = 4e307; so z = -0.5, 2, -0.5, -0.5, -0.5 (worked by hand).
+        // Before, (x - m)^2 overflowed to infinity, the SD was infinite and every z-score became 0.
+        Prepared p = prep(MissingPolicy.ERROR, false, Scale.ZSCORE, 0).apply(table(1, 1, 1e308, 2, 3, 4));
+        assertArrayEquals(new double[] {-0.5, 2, -0.5, -0.5, -0.5}, p.matrix().rowMajorCopy(), 1e-12);
+        assertTrue(p.report().steps().contains(Scale.ZSCORE.sentence()));
+    }
+
+    @Test
+    void zscoreOfSubnormalValuesEqualsThatOfTheSameValuesAtOrdinaryScale() {
+        // z-scores do not change when a feature is multiplied by a constant, so {1, 2, 3, 1, 5} x 1e-310 has the
+        // z-scores of {1, 2, 3, 1, 5}: mean 2.4, population variance 11.2 / 5 = 2.24. Before, the squares underflowed
+        // to 0, the SD was 0 and the values became infinite.
+        Prepared p = prep(MissingPolicy.ERROR, false, Scale.ZSCORE, 0)
+                .apply(table(1, 1e-310, 2e-310, 3e-310, 1e-310, 5e-310));
+        double sd = Math.sqrt(2.24);
+        double[] expected = {-1.4 / sd, -0.4 / sd, 0.6 / sd, -1.4 / sd, 2.6 / sd};
+        // 1e-310 holds about 44 significant bits, so agreement to 1e-9 is what the input allows.
+        assertArrayEquals(expected, p.matrix().rowMajorCopy(), 1e-9);
+    }
+
+    @Test
+    void centringTheLargestDoublesIsExactOrRefusedAtTheCell() {
+        // {1e308, 1e308, -1e308}: the plain sum overflows; the mean is 1e308 / 3 and the centred values fit.
+        Prepared p = prep(MissingPolicy.ERROR, false, Scale.CENTER, 0).apply(table(1, 1e308, 1e308, -1e308));
+        double m = 1e308 / 3;
+        assertArrayEquals(new double[] {1e308 - m, 1e308 - m, -1e308 - m}, p.matrix().rowMajorCopy(), 1e295);
+        // {1.7e308, -1.7e308, -1.7e308}: mean -0.567e308, and 1.7e308 - mean exceeds the largest double.
+        InputException e = assertThrows(InputException.class, () -> prep(MissingPolicy.ERROR, false, Scale.CENTER, 0)
+                .apply(table(1, 1.7e308, -1.7e308, -1.7e308)));
+        assertTrue(e.getMessage().contains("centring makes this value (sample 's1', feature 'a') too large"),
+                e.getMessage());
+    }
+
+    @Test
+    void scalingOrdinaryValuesGivesTheSameBitsAsThePlainFormula() {
+        // Dividing by a power of two is exact, so the stable z-scores equal (x - mean) / sd computed directly.
+        SplittableRandom rng = new SplittableRandom(3);
+        double[] x = new double[40];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = rng.nextDouble() * 1000 - 300;
+        }
+        double[] z = prep(MissingPolicy.ERROR, false, Scale.ZSCORE, 0).apply(table(1, x)).matrix().rowMajorCopy();
+        double sum = 0;
+        for (double v : x) {
+            sum += v;
+        }
+        double mean = sum / x.length;
+        double residual = 0;
+        for (double v : x) {
+            residual += v - mean;
+        }
+        mean += residual / x.length;
+        double ss = 0;
+        for (double v : x) {
+            ss += (v - mean) * (v - mean);
+        }
+        double sd = Math.sqrt(ss / x.length);
+        for (int i = 0; i < x.length; i++) {
+            assertEquals((x[i] - mean) / sd, z[i], 0.0);
+        }
+    }
 }

@@ -175,4 +175,40 @@ class DataTableReaderTest {
         gz.writeBytes(ReaderFuzzTest.gzip(text));
         assertEquals(m.sampleIds(), read("u.csv.gz", gz.toByteArray()).matrix().sampleIds());
     }
+
+    private static byte[] utf8(String s) {
+        return s.getBytes(StandardCharsets.UTF_8);
+    }
+
+    @Test
+    void noIdsReadsEveryColumnAsAFeatureAndNumbersTheSamples() {
+        DataTable t = new DataTableReader(null, false, true).read("iris.csv",
+                new ByteArrayInputStream(utf8("sepal_length,sepal_width\n5.1,3.5\n4.9,3.0\n4.6,3.1\n4.6,3.4\n")));
+        DataMatrix m = t.matrix();
+        assertEquals(java.util.List.of("1", "2", "3", "4"), m.sampleIds());
+        assertEquals(java.util.List.of("sepal_length", "sepal_width"), m.featureNames());
+        assertArrayEquals(new double[] {5.1, 3.5, 4.9, 3.0, 4.6, 3.1, 4.6, 3.4}, m.rowMajorCopy(), 0.0);
+        assertEquals("iris.csv:4:2", t.locator().locate("3", "sepal_width"));
+    }
+
+    @Test
+    void wholeNumbersAreAcceptedAsFeatureNamesAndIds() {
+        // Wavelengths as feature names and row numbers as ids are names, not a missing header or id column.
+        DataMatrix m = read("w.csv", utf8("id,400,410\n1,0.5,0.7\n2,0.2,0.1\n")).matrix();
+        assertEquals(java.util.List.of("400", "410"), m.featureNames());
+        assertEquals(java.util.List.of("1", "2"), m.sampleIds());
+    }
+
+    @Test
+    void aSepFirstLineSetsTheDelimiterAndLinesStillCountFromTheTopOfTheFile() {
+        // A spreadsheet's "sep=;" before a ';' table in a .csv file: read with ';', and line 3 is the second row.
+        DataMatrix m = read("excel.csv", utf8("sep=;\r\nid;a;b\r\nS1;1;2\r\nS2;3;4\r\n")).matrix();
+        assertEquals(java.util.List.of("a", "b"), m.featureNames());
+        assertArrayEquals(new double[] {1, 2, 3, 4}, m.rowMajorCopy(), 0.0);
+        InputException e = assertThrows(InputException.class,
+                () -> read("excel.csv", utf8("sep=;\nid;a;b\nS1;1;2\nS2;x;4\n")));
+        assertTrue(e.getMessage().startsWith("excel.csv:4:2: 'x' is not a number"), e.getMessage());
+        // without a name that tells the delimiter, the sep= line is enough
+        assertEquals(2, read("standard input", utf8("sep=,\nid,a\nS1,1\nS2,2\n")).matrix().samples());
+    }
 }

@@ -1,5 +1,6 @@
 package org.treeproof.resample;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
@@ -18,6 +19,7 @@ import java.util.function.Function;
 import org.junit.jupiter.api.Test;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.data.InputException;
+import org.treeproof.distance.Metric;
 
 class ReferenceDataTest {
 
@@ -277,5 +279,70 @@ class ReferenceDataTest {
             InputException e = assertThrows(InputException.class, () -> make.apply(x));
             assertTrue(e.getMessage().contains("'s0'") && e.getMessage().contains("'f1'"), e.getMessage());
         }
+    }
+
+    /** 0/1 data: feature j is 1 in the first (j + 1) * n / 5 samples. */
+    private static DataMatrix binary(int n) {
+        double[] v = new double[n * 4];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < 4; j++) {
+                v[i * 4 + j] = i < (j + 1) * n / 5 ? 1 : 0;
+            }
+        }
+        return matrix(n, 4, v);
+    }
+
+    @Test
+    void featureFrequencyDrawsZerosAndOnesWithEachFeaturesFrequency() {
+        // Independent Bernoulli features with the observed frequencies 0.2, 0.4, 0.6, 0.8: a draw of n samples has
+        // a share of ones with mean f_j and standard error sqrt(f_j (1 - f_j) / n); 5 SE allowed.
+        DataMatrix x = binary(2000);
+        ReferenceData ref = ReferenceData.featureFrequency(x);
+        for (long seed = 0; seed < 3; seed++) {
+            DataMatrix z = ref.draw(seed);
+            assertEquals(x.sampleIds(), z.sampleIds());
+            assertEquals(x.featureNames(), z.featureNames());
+            for (int j = 0; j < 4; j++) {
+                double f = (j + 1) / 5.0;
+                double ones = 0;
+                for (int i = 0; i < z.samples(); i++) {
+                    double v = z.get(i, j);
+                    assertTrue(v == 0 || v == 1, "not 0/1: " + v);
+                    ones += v;
+                }
+                assertEquals(f, ones / z.samples(), 5 * Math.sqrt(f * (1 - f) / z.samples()));
+            }
+        }
+        assertArrayEquals(ref.draw(4).rowMajorCopy(), ReferenceData.featureFrequency(x).draw(4).rowMajorCopy());
+        assertArrayEquals(ref.draw(4).rowMajorCopy(), ref.drawCoordinates(4).rowMajorCopy());
+    }
+
+    @Test
+    void featureFrequencyRefusesValuesOtherThanZeroAndOne() {
+        InputException e = assertThrows(InputException.class,
+                () -> ReferenceData.featureFrequency(matrix(2, 2, new double[] {0, 1, 0.5, 1})));
+        assertTrue(e.getMessage().contains("sample 's1' has value 0.5 in feature 'f0'"), e.getMessage());
+    }
+
+    @Test
+    void theNullModelAndTheDefaultGapReferenceFitTheMetric() {
+        // The 0/1 metrics can measure only 0/1 data: their null and reference data are 0/1, every other metric's
+        // continuous (a draw of the Gaussian null is 0/1 with probability 0).
+        DataMatrix x = binary(50);
+        for (Metric m : Metric.values()) {
+            DataMatrix nul = ReferenceData.nullModel(m, x).draw(7);
+            boolean zeroOne = Arrays.stream(nul.rowMajorCopy()).allMatch(v -> v == 0 || v == 1);
+            assertEquals(m.binaryOnly(), zeroOne, m.id());
+            ReferenceData.Kind kind = ReferenceData.Kind.defaultFor(m);
+            assertTrue(kind.misfit(m).isEmpty(), m.id());
+            DataMatrix ref = kind.prepare(x).draw(7);
+            assertEquals(m.binaryOnly(), Arrays.stream(ref.rowMajorCopy()).allMatch(v -> v == 0 || v == 1), m.id());
+            // and each draw can be measured by the metric
+            m.compute(nul, 1);
+            m.compute(ref, 1);
+        }
+        assertTrue(ReferenceData.Kind.PRINCIPAL_BOX.misfit(Metric.JACCARD).isPresent());
+        assertTrue(ReferenceData.Kind.FEATURE_FREQUENCY.misfit(Metric.EUCLIDEAN).isPresent());
+        assertEquals(ReferenceData.Kind.FEATURE_FREQUENCY, ReferenceData.Kind.parse("binary"));
     }
 }

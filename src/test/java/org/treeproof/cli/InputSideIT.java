@@ -1,0 +1,171 @@
+package org.treeproof.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.treeproof.distance.Metric;
+
+/**
+ * End to end from the jar for the ways an input reaches a study: every metric with the default study options,
+ * tables without ids, a spreadsheet's {@code sep=} line, a labels file with its own
+ * delimiter, and the settings recorded for a distance table. Data are invented here by a seeded generator.
+ */
+class InputSideIT {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    @TempDir
+    Path tmp;
+
+    /** 30 samples in three groups of ten over 6 features: continuous values, or 0/1 values flipped with p = 0.1. */
+    private Path table(String name, boolean binary) throws IOException {
+        SplittableRandom rng = new SplittableRandom(20261202L);
+        var sb = new StringBuilder("id");
+        for (int j = 0; j < 12; j++) {
+            sb.append(",f").append(j);
+        }
+        sb.append('\n');
+        for (int i = 0; i < 30; i++) {
+            int group = i / 10;
+            sb.append("s").append(i);
+            for (int j = 0; j < 12; j++) {
+                boolean on = j / 4 == group;
+                if (binary) {
+                    sb.append(',').append(on != (rng.nextDouble() < 0.1) ? 1 : 0);
+                } else {
+                    sb.append(',').append(String.format(Locale.ROOT, "%.4f", (on ? 4 : 0) + rng.nextGaussian()));
+                }
+            }
+            sb.append('\n');
+        }
+        return Files.writeString(tmp.resolve(name), sb.toString());
+    }
+
+    private JsonNode summary(String out) throws IOException {
+        return JSON.readTree(tmp.resolve(out).resolve("summary.json").toFile());
+    }
+
+    private Jar.Result assess(String... args) throws Exception {
+        var all = new ArrayList<>(List.of("assess"));
+        all.addAll(List.of(args));
+        all.add("--no-progress");
+        return Jar.run(tmp, all.toArray(String[]::new));
+    }
+
+    @Test
+    void jaccardAndHammingRunWithPureDefaults() throws Exception {
+        // Before: refused for the default z-scoring and Ward linkage, and with those given by hand, failed after
+        // every replicate because null and gap reference data were continuous.
+        Path data = table("binary.csv", true);
+        for (String metric : List.of("jaccard", "hamming")) {
+            Jar.Result r = assess(data.toString(), "--metric", metric, "--out", metric);
+            assertEquals(0, r.exit(), r.err());
+            JsonNode s = summary(metric).path("settings");
+            assertEquals("feature-frequency", s.path("gapReference").asText());
+            assertEquals("none", s.path("scale").asText());
+            assertEquals(50, s.path("referenceSets").asInt());
+            assertEquals(19, s.path("nullSets").asInt());
+            assertEquals("[\"average\",\"complete\"]", s.path("linkages").toString());
+            String methods = Files.readString(tmp.resolve(metric).resolve("methods.md"));
+            assertTrue(methods.contains("drawn as 0/1 values with each feature's observed frequency of ones"), methods);
+            assertEquals(3, summary(metric).path("recommendation").path("k").asInt(), r.out());
+        }
+    }
+
+    @Test
+    void everyMetricRunsWithTheDefaultStudyOptionsOnSmallerCounts() throws Exception {
+        Path continuous = table("continuous.csv", false);
+        Path binary = table("binary.csv", true);
+        for (Metric m : Metric.values()) {
+            String out = "m-" + m.id();
+            Jar.Result r = assess((m.binaryOnly() ? binary : continuous).toString(), "--metric", m.id(), "--out", out,
+                    "--replicates", "20", "--null-sets", "4", "--null-replicates", "4", "--reference-sets", "5");
+            assertEquals(0, r.exit(), m.id() + ": " + r.err());
+            JsonNode s = summary(out);
+            assertEquals(m.id(), s.path("settings").path("metric").asText());
+            assertEquals(5, s.path("settings").path("referenceSets").asInt());
+            // every part ran: the gap statistic and null calibration for every linkage and k, with finite values
+            for (JsonNode linkage : s.path("linkages")) {
+                for (JsonNode k : linkage.path("byK")) {
+                    assertTrue(k.path("gap").isNumber(), m.id() + " " + k);
+                    assertTrue(k.path("stability").path("null").path("pValueCombined").isNumber(), m.id() + " " + k);
+                }
+            }
+            assertEquals(m.binaryOnly() ? "feature-frequency" : "principal-box",
+                    s.path("settings").path("gapReference").asText());
+        }
+    }
+
+    @Test
+    void aTableWithoutIdsIsStudiedWithRowNumbersAndASepLineIsHonoured() throws Exception {
+        List<String> lines = Files.readAllLines(table("continuous.csv", false));
+        var noIds = new StringBuilder();
+        var excel = new StringBuilder("sep=;\r\n");
+        for (String line : lines) {
+            noIds.append(line.substring(line.indexOf(',') + 1)).append('\n');
+            excel.append(line.replace(',', ';')).append("\r\n");
+        }
+        Files.writeString(tmp.resolve("no-ids.csv"), noIds);
+        Files.writeString(tmp.resolve("excel.csv"), excel);
+        String[] quick = {"--replicates", "10", "--null-sets", "0", "--reference-sets", "0", "--max-k", "4"};
+        var args = new ArrayList<>(List.of("no-ids.csv", "--no-ids", "--out", "no-ids"));
+        args.addAll(List.of(quick));
+        Jar.Result r = assess(args.toArray(String[]::new));
+        assertEquals(0, r.exit(), r.err());
+        List<String> clusters = Files.readAllLines(tmp.resolve("no-ids").resolve("clusters.csv"));
+        assertTrue(clusters.get(1).startsWith("1,"), clusters.get(1));
+        assertTrue(clusters.get(30).startsWith("30,"), clusters.get(30));
+        args = new ArrayList<>(List.of("excel.csv", "--out", "excel"));
+        args.addAll(List.of(quick));
+        r = assess(args.toArray(String[]::new));
+        assertEquals(0, r.exit(), r.err());
+        assertEquals(12, summary("excel").path("input").path("features").asInt());
+    }
+
+    @Test
+    void theLabelsFileIsReadWithItsOwnDelimiter() throws Exception {
+        // A ';' data table in a .txt file (--delimiter ';') and a comma-separated labels file: before, the labels
+        // were read with ';' and refused as having one field per row.
+        List<String> lines = Files.readAllLines(table("continuous.csv", false));
+        var semicolons = new StringBuilder();
+        var labels = new StringBuilder("id,group\n");
+        for (int i = 0; i < lines.size(); i++) {
+            semicolons.append(lines.get(i).replace(',', ';')).append('\n');
+            if (i > 0) {
+                labels.append("s").append(i - 1).append(",g").append((i - 1) / 10).append('\n');
+            }
+        }
+        Files.writeString(tmp.resolve("data.txt"), semicolons);
+        Files.writeString(tmp.resolve("groups.csv"), labels);
+        Jar.Result r = assess("data.txt", "--delimiter", ";", "--labels", "groups.csv", "--out", "labelled",
+                "--replicates", "10", "--null-sets", "0", "--reference-sets", "0", "--max-k", "4");
+        assertEquals(0, r.exit(), r.err());
+        assertTrue(Files.readString(tmp.resolve("labelled").resolve("report.html")).contains("groups.csv"));
+    }
+
+    @Test
+    void aDistanceTableRecordsOnlyTheSettingsThatTookEffect() throws Exception {
+        Path dist = Path.of("src/test/resources/input/distances/iris-head-euclidean.csv").toAbsolutePath();
+        Jar.Result r = assess(dist.toString(), "--distances", "--out", "dist", "--replicates", "10", "--max-k", "3");
+        assertEquals(0, r.exit(), r.err());
+        JsonNode s = summary("dist").path("settings");
+        assertEquals(0, s.path("referenceSets").asInt());
+        assertEquals(0, s.path("nullSets").asInt());
+        assertFalse(s.has("gapReference"), s.toString());
+        assertFalse(s.has("nullReplicates"), s.toString());
+        String report = Files.readString(tmp.resolve("dist").resolve("report.html"), StandardCharsets.UTF_8);
+        assertTrue(report.contains("not computed: distances only"), "report settings say why");
+    }
+}
