@@ -100,7 +100,7 @@ class InputSideIT {
             for (JsonNode linkage : s.path("linkages")) {
                 for (JsonNode k : linkage.path("byK")) {
                     assertTrue(k.path("gap").isNumber(), m.id() + " " + k);
-                    assertTrue(k.path("stability").path("null").path("pValueCombined").isNumber(), m.id() + " " + k);
+                    assertTrue(k.path("stability").path("null").path("excess").isNumber(), m.id() + " " + k);
                 }
             }
             assertEquals(m.binaryOnly() ? "feature-frequency" : "principal-box",
