@@ -163,7 +163,7 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
 
     /** Whether stability was calibrated against null data. */
     public boolean nullCalibrated() {
-        return evidence.get(0).rows().get(0).calibrated();
+        return decision.structureTest() != null;
     }
 
     /** Whether the gap statistic was computed. */
