@@ -47,7 +47,7 @@ final class Figures {
         boolean calibrated = evidence.structureTest() != null;
         out.add(figure("stability", "Stability by number of clusters", f("Mean adjusted Rand index of %d resampled "
                 + "solutions with the full-data solution, for k = 2 to %d and each linkage, with the range of the middle 95%% "
-                + "range (middle 95%% of replicates)%s. 1 means every replicate reproduced the full-data clusters.",
+                + "of replicates%s. 1 means every replicate reproduced the full-data clusters.",
                 evidence.settings().replicates(), maxK, calibrated
                         ? "; the band is the 95% range of the same mean on null data without clusters" : "")));
 
