@@ -59,7 +59,7 @@ final class StudyOptions {
     Integer nullReplicates;
 
     @Option(names = "--min-cluster-size", paramLabel = "M", description = "Fewest samples a cluster holds; samples "
-            + "on smaller branches are reported as outliers, not clusters (default: the larger of 5 and 1% of the "
+            + "on smaller branches are reported as outliers, not clusters (default: the larger of 5 and 1%% of the "
             + "samples; 1 turns outliers off).")
     Integer minClusterSize;
 

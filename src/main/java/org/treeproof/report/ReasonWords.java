@@ -199,7 +199,11 @@ public final class ReasonWords implements Reason.Visitor<String> {
         var parts = new ArrayList<String>();
         for (Recommendation.CriterionChoice c : r.disagreeing()) {
             if (c.criterion() != null) {
-                parts.add(f("%s picks k = %d", c.name(), c.k()));
+                String verdict = r.linkage().stream().filter(a -> a.k() == c.k()).findFirst()
+                        .map(a -> a.verdict() == Verdict.SUPPORTED ? "" : f(", %s there%s", a.verdict().id(),
+                                a.failed().isEmpty() ? "" : ": not " + condition(a.failed().get(0))))
+                        .orElse("");
+                parts.add(f("%s picks k = %d%s", c.name(), c.k(), verdict));
             }
         }
         return parts.isEmpty() ? f("Every criterion taken alone agrees with k = %d.", r.recommendedK())

@@ -206,10 +206,15 @@ public sealed interface Reason {
         }
     }
 
-    /** Criteria whose own choice of k differs from the recommended k. */
-    record Criteria(List<Recommendation.CriterionChoice> disagreeing, int recommendedK) implements Reason {
+    /**
+     * Criteria whose own choice of k differs from the recommended k, with the rule's assessment of the recommended
+     * linkage at each k (to say why a criterion's k lost).
+     */
+    record Criteria(List<Recommendation.CriterionChoice> disagreeing, int recommendedK, List<Assessment> linkage)
+            implements Reason {
         public Criteria {
             disagreeing = List.copyOf(disagreeing);
+            linkage = List.copyOf(linkage);
         }
 
         @Override

@@ -111,7 +111,8 @@ public final class Recommender {
         }
         var disagreeing = criteria.stream().filter(c -> c.k() != e.k()).toList();
         if (!disagreeing.isEmpty()) {
-            reasons.add(new Reason.Criteria(disagreeing, e.k()));
+            reasons.add(new Reason.Criteria(disagreeing, e.k(),
+                    assessments.stream().filter(a -> a.linkage() == le.linkage()).toList()));
         }
         if (levels.size() > 1) {
             reasons.add(new Reason.Levels(levels));
