@@ -40,12 +40,13 @@ public final class ReasonWords implements Reason.Visitor<String> {
     /** The plain words for one condition of the rule. */
     public String condition(Condition c) {
         return switch (c) {
-            case BEATS_NULL -> "beats the null data (allowing for the choice among linkages and k)";
+            case BEATS_NULL -> "the solution beats the null data (allowing for the choice among linkages and k)";
             case NO_CLUSTER_DISSOLVES -> f("no cluster dissolves (every mean Jaccard above %s)",
                     Numbers.plain(rule.dissolvedJaccard()));
             case EVERY_CLUSTER_STABLE -> f("every cluster is stable (mean Jaccard at least %s)",
                     Numbers.plain(rule.stableJaccard()));
-            case REPRODUCED -> f("replicates reproduce it (mean ARI at least %s)", Numbers.plain(rule.stableJaccard()));
+            case REPRODUCED -> f("replicates reproduce the solution (mean ARI at least %s)",
+                    Numbers.plain(rule.stableJaccard()));
             case SEPARATED_WITHOUT_NULL -> f("its clusters are separated (average silhouette above %s)",
                     Numbers.plain(rule.reasonableSilhouette()));
         };
@@ -102,7 +103,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
         parts.add(f("smallest cluster Jaccard %s", Numbers.fixed(e.worstJaccard(), 2)));
         String s = String.join("; ", parts) + ".";
         if (!a.failed().isEmpty()) {
-            s += " It falls short of full support because not " + Prose.and(a.failed().stream()
+            s += " It falls short of full support: it fails the condition that " + Prose.and(a.failed().stream()
                     .map(this::condition).toList()) + ".";
         }
         var weak = new ArrayList<String>();
@@ -127,7 +128,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
                         Numbers.p(f.pAdjusted()), Numbers.fixed(f.worstJaccard(), 2))
                 : f("mean ARI %s, smallest cluster Jaccard %s, silhouette %s", Numbers.fixed(f.meanAri(), 2),
                         Numbers.fixed(f.worstJaccard(), 2), Numbers.fixed(f.silhouette(), 2));
-        String failed = a.failed().isEmpty() ? "" : "; conditions not met: " + Prose.and(a.failed().stream()
+        String failed = a.failed().isEmpty() ? "" : "; it fails the condition that " + Prose.and(a.failed().stream()
                 .map(this::condition).toList());
         return f("With %s linkage the strongest solution is k = %d (%s)%s.", Names.linkage(a.linkage()), a.k(),
                 figures, failed);
@@ -201,7 +202,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
             if (c.criterion() != null) {
                 String verdict = r.linkage().stream().filter(a -> a.k() == c.k()).findFirst()
                         .map(a -> a.verdict() == Verdict.SUPPORTED ? "" : f(", %s there%s", a.verdict().id(),
-                                a.failed().isEmpty() ? "" : ": not " + condition(a.failed().get(0))))
+                                a.failed().isEmpty() ? "" : ": it fails the condition that " + condition(a.failed().get(0))))
                         .orElse("");
                 parts.add(f("%s picks k = %d%s", c.name(), c.k(), verdict));
             }
