@@ -239,15 +239,18 @@ public final class Recommender {
      * Per k, the share of replicates in which that k has the largest excess over the null when the replicate's
      * own ARI replaces the mean ARI (the separation term is the solution's own): the rule's ordering read
      * replicate by replicate. The rule orders by verdict first, and a verdict belongs to all replicates together,
-     * so only the recommended linkage's solutions with the recommended verdict take part.
+     * so only the recommended linkage's solutions with the recommended verdict take part, passing states left out
+     * as they are from the recommendation.
      */
     private List<Recommendation.KShare> votes(LinkageEvidence le, Verdict verdict, List<Assessment> assessments) {
         if (le.byK().isEmpty() || le.byK().get(0).stability().nullModel() == null) {
             return List.of();
         }
+        var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
+        java.util.Set<Integer> passing = passingStates(le, own);
         var candidates = new java.util.HashSet<Integer>();
-        for (Assessment a : assessments) {
-            if (a.linkage() == le.linkage() && a.verdict() == verdict) {
+        for (Assessment a : own) {
+            if (a.verdict() == verdict && !passing.contains(a.k())) {
                 candidates.add(a.k());
             }
         }
