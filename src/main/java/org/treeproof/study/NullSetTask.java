@@ -66,6 +66,7 @@ record NullSetTask(ReferenceData generator, Metric metric, List<Linkage> linkage
         double[][][] sil = new double[links][maxK - 1][1];
         BigDecimal low = BigDecimal.valueOf(pacLow);
         BigDecimal high = BigDecimal.valueOf(pacHigh);
+        Silhouette.Result[] widths = silhouettes(nd, nullRefs, maxK);
         for (int l = 0; l < links; l++) {
             ConsensusMatrix cm = tally.consensus(l);
             for (int k = 2; k <= maxK; k++) {
@@ -73,10 +74,25 @@ record NullSetTask(ReferenceData generator, Metric metric, List<Linkage> linkage
                 double[] a = tally.ari(l, k);
                 meanAri[l][k - 2][0] = cut == null ? Double.NaN : mean(a);
                 pac[l][k - 2][0] = cm.pac(k, low, high);
-                sil[l][k - 2][0] = cut == null ? Double.NaN : Silhouette.of(nd, cut.clustering()).compute().mean();
+                sil[l][k - 2][0] = cut == null ? Double.NaN : widths[l * (maxK - 1) + k - 2].mean();
             }
         }
         return new double[][] {{j}, pack(0, meanAri, pac, sil)};
+    }
+
+    /**
+     * The silhouette of every linkage's cut at k = 2..maxK, at {@code [l·(maxK-1) + k-2]} (null where there is no
+     * cut), in one pass over the distances.
+     */
+    static Silhouette.Result[] silhouettes(CondensedDistances d, List<ReferenceSolution> refs, int maxK) {
+        var cuts = new org.treeproof.partition.Clustering[refs.size() * (maxK - 1)];
+        for (int l = 0; l < refs.size(); l++) {
+            for (int k = 2; k <= maxK; k++) {
+                SizedCut cut = refs.get(l).cut(k);
+                cuts[l * (maxK - 1) + k - 2] = cut == null ? null : cut.clustering();
+            }
+        }
+        return Silhouette.computeEach(d, cuts);
     }
 
     private static double mean(double[] v) {

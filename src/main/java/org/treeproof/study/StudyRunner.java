@@ -97,11 +97,11 @@ public final class StudyRunner {
 
         double[][] silhouettes = new double[refs.size()][maxK - 1];
         Silhouette.Result[][] silResults = new Silhouette.Result[refs.size()][maxK - 1];
+        Silhouette.Result[] widths = NullSetTask.silhouettes(d, refs, maxK);
         for (int l = 0; l < refs.size(); l++) {
             for (int k = 2; k <= maxK; k++) {
-                SizedCut cut = refs.get(l).cut(k);
-                silResults[l][k - 2] = cut == null ? null : Silhouette.of(d, cut.clustering()).compute();
-                silhouettes[l][k - 2] = cut == null ? Double.NaN : silResults[l][k - 2].mean();
+                silResults[l][k - 2] = widths[l * (maxK - 1) + k - 2];
+                silhouettes[l][k - 2] = silResults[l][k - 2] == null ? Double.NaN : silResults[l][k - 2].mean();
             }
         }
         NullCalibration.Result calibration = nulls == null ? null : calibrate(tally, silhouettes, nulls);
