@@ -7,6 +7,7 @@ import org.treeproof.distance.CondensedDistances;
 import org.treeproof.distance.Metric;
 import org.treeproof.resample.LocalExecutor;
 import org.treeproof.resample.ReferenceData;
+import org.treeproof.resample.ReplicateExecutor;
 import org.treeproof.resample.ReplicatePlanner;
 import org.treeproof.resample.ReplicateTask;
 import org.treeproof.resample.Resampling;
@@ -45,20 +46,33 @@ record NullSetTask(ReferenceData generator, Metric metric, List<Linkage> linkage
 
     @Override
     public double[][] apply(int j) {
+        return run(j, null, 1, new LocalExecutor(1));
+    }
+
+    /**
+     * Set {@code j} with its parts spread over threads instead: distances on {@code threads} threads, reference
+     * trees on {@code here}, replicates through {@code replicates} (null: one after another on this thread). For a
+     * set too large to run side by side with another; the same result as {@link #apply}.
+     */
+    double[][] run(int j, ReplicateExecutor replicates, int threads, LocalExecutor here) {
         long seed = Seeds.seedFor(masterSeed, Seeds.Purpose.NULL_DATA, j);
         // Without feature resampling only distances matter, and Euclidean ones are the same in the null's
         // principal coordinates (an exact rotation), which skips the back-transform to the features.
         DataMatrix nullData = metric.rotationInvariant() && !resamplesFeatures()
                 ? generator.drawCoordinates(seed) : generator.draw(seed);
-        CondensedDistances nd = metric.compute(nullData, 1);
-        List<ReferenceSolution> nullRefs = ReferenceSolution.all(linkages, nd, maxK, minSize, new LocalExecutor(1));
+        CondensedDistances nd = metric.compute(nullData, threads);
+        List<ReferenceSolution> nullRefs = ReferenceSolution.all(linkages, nd, maxK, minSize, here);
         int n = nd.size();
         var planner = new ReplicatePlanner(n, nullData.features(), resampling, sampleFraction, featureFraction,
                 Seeds.seedFor(masterSeed, Seeds.Purpose.NULL_REPLICATE, j), Seeds.Purpose.REPLICATE);
         var work = new ReplicateWork(nullData, nd, metric, linkages, null, planner, maxK, minSize, n);
-        var tally = new StabilityTally(nullRefs, n, maxK, replicates, false);
-        for (int r = 0; r < replicates; r++) {
-            tally.add(work.apply(r));
+        var tally = new StabilityTally(nullRefs, n, maxK, this.replicates, false);
+        if (replicates == null) {
+            for (int r = 0; r < this.replicates; r++) {
+                tally.add(work.apply(r));
+            }
+        } else {
+            replicates.run(0, this.replicates, work, tally::add);
         }
         int links = linkages.size();
         double[][][] meanAri = new double[links][maxK - 1][1];

@@ -202,14 +202,37 @@ public final class StudyRunner {
             kept++;
             progress.step();
         }
-        // each null set is one task, run side by side with the others; rows arrive in index order
-        executor.run(kept, sets, NullSetTask.of(generator, settings, minSize), result -> {
+        var task = NullSetTask.of(generator, settings, minSize);
+        java.util.function.Consumer<double[][]> done = result -> {
             int j = (int) result[0][0];
             NullSetTask.unpack(result[1], j, meanAri, pac, sil);
             checkpoint.rowDone(Checkpoint.Stage.NULL_SETS, j, result[1]);
             progress.step();
-        });
+        };
+        if (nullSetsSideBySide(data)) {
+            // each null set is one task, run side by side with the others; rows arrive in index order
+            executor.run(kept, sets, task, done);
+        } else {
+            for (int j = kept; j < sets; j++) {
+                done.accept(task.run(j, executor, kernelThreads, here));
+            }
+        }
         return new NullTable(meanAri, pac, sil);
+    }
+
+    /**
+     * Whether null sets run as tasks side by side (always on an executor that ships them elsewhere), or one at a
+     * time with their replicates in parallel, when as many sets as threads would not fit in this JVM's heap. Only
+     * the schedule differs: every set is a pure function of its index.
+     */
+    private boolean nullSetsSideBySide(DataMatrix data) {
+        if (!(executor instanceof LocalExecutor local) || local.threads() == 1) {
+            return true;
+        }
+        int n = data.samples();
+        int p = data.features();
+        return MemoryEstimate.of(n, p, settings, local.threads(), true).nullSetsFitSideBySide(local.threads(),
+                MemoryEstimate.nullSetBytes(n, p, settings), Runtime.getRuntime().maxMemory());
     }
 
     private static <T> java.util.function.Supplier<T> memoized(java.util.function.Supplier<T> compute) {
