@@ -22,13 +22,13 @@ export OMP_NUM_THREADS=1 OPENBLAS_NUM_THREADS=1 MKL_NUM_THREADS=1
 table="$out/study_n${N}_p${P}.csv"
 [ -f "$table" ] || "$PYTHON" "$PYSTUDY" generate "$table" --n "$N" --p "$P" > /dev/null
 
-# wall seconds and peak resident kB of one command: "seconds kB"
+# wall seconds, peak resident kB and CPU seconds (user + system) of one command: "seconds kB cpu"
 timed() {
   local s e
   s=$(date +%s.%N)
-  /usr/bin/time -f "%M" -o "$out/rss.txt" "$@" > "$out/last.log" 2>&1
+  /usr/bin/time -f "%M %U %S" -o "$out/rss.txt" "$@" > "$out/last.log" 2>&1
   e=$(date +%s.%N)
-  awk -v a="$s" -v b="$e" -v m="$(tail -1 "$out/rss.txt")" 'BEGIN { printf "%.1f %d\n", b - a, m }'
+  tail -1 "$out/rss.txt" | awk -v a="$s" -v b="$e" '{ printf "%.1f %d %.1f\n", b - a, $1, $2 + $3 }'
 }
 assess() { # jar table dir
   rm -rf "$3"
@@ -55,17 +55,18 @@ elif [ -n "$before" ]; then
 fi
 echo "# load after: $(cut -d' ' -f1-3 /proc/loadavg)"
 awk -F'\t' '
-  { split($2, a, " "); t[$1, ++c[$1]] = a[1] }
-  function median(k,   i, j, v, n, x) { n = c[k]; for (i = 1; i <= n; i++) v[i] = t[k, i];
+  { split($2, a, " "); n = ++c[$1]; t[$1, n] = a[1]; u[$1, n] = a[3] }
+  function median(arr, k,   i, j, v, n, x) { n = c[k]; for (i = 1; i <= n; i++) v[i] = arr[k, i];
     for (i = 1; i <= n; i++) for (j = i + 1; j <= n; j++) if (v[j] < v[i]) { x = v[i]; v[i] = v[j]; v[j] = x }
     return n % 2 ? v[(n + 1) / 2] : (v[n / 2] + v[n / 2 + 1]) / 2 }
   END {
-    s = median("script")
-    printf "| run | wall s (each round) | median s | / script |\n|---|---|---|---|\n"
+    s = median(t, "script"); su = median(u, "script")
+    printf "| run | wall s (each round) | median wall s | wall / script | median CPU s (user + sys) | CPU / script |\n"
+    printf "|---|---|---|---|---|---|\n"
     split("script before after", names, " ")
     for (q = 1; q <= 3; q++) { k = names[q]; if (!c[k]) continue; list = ""
       for (i = 1; i <= c[k]; i++) list = list (i > 1 ? ", " : "") t[k, i]
-      printf "| %s | %s | %.1f | %.2f |\n", k, list, median(k), median(k) / s }
+      printf "| %s | %s | %.1f | %.2f | %.1f | %.2f |\n", k, list, median(t, k), median(t, k) / s, median(u, k), median(u, k) / su }
   }' "$out/times.tsv"
 
 if [ "$big" = 1 ]; then
@@ -76,6 +77,6 @@ if [ "$big" = 1 ]; then
     j="$jar"; [ "$k" = before ] && j="$before"
     [ -n "$j" ] || continue
     t=$(assess "$j" "$bigtable" "$out/big-$k")
-    echo "| $k | $(echo "$t" | cut -d' ' -f1) s | peak RSS $(echo "$t" | awk '{ printf "%.2f GB", $2 / 1048576 }') | load after $(cut -d' ' -f1 /proc/loadavg) |"
+    echo "| $k | $(echo "$t" | cut -d' ' -f1) s wall | $(echo "$t" | cut -d' ' -f3) s CPU | peak RSS $(echo "$t" | awk '{ printf "%.2f GB", $2 / 1048576 }') | load after $(cut -d' ' -f1 /proc/loadavg) |"
   done
 fi
