@@ -121,22 +121,25 @@ public final class MethodsParagraph {
         }
         if (model.nullCalibrated()) {
             String nullData = s.metric().binaryOnly() ? Names.nullModelProse(s.metric())
-                    : f("drawn from a unimodal elliptical distribution with the data's principal axes, robust "
-                    + "scales along them (normalised median absolute deviations, floored at the data's background "
-                    + "noise level; %s) and the data's own distribution of distances from the centre, so that "
-                    + "heavy tails and far samples are kept and clusters are not", cite(c, Reference.LIU));
+                    : f("drawn from a unimodal elliptical distribution with the data's principal axes and robust "
+                    + "scales along them (normalised median absolute deviations), as in %s, and distances from the "
+                    + "centre drawn from a power exponential law (%s) fitted to the median and 95%% quantile of the "
+                    + "data's, so that heavy tails are kept and clusters are not", cite(c, Reference.LIU),
+                    cite(c, Reference.GOMEZ));
             out.add(f("To tell structure from noise, the same procedure (%d replicates each) was applied to %d null "
                     + "data sets %s. For each linkage and k, the excess "
                     + "over the null was the mean ARI and the average silhouette, each standardised by the null sets' "
-                    + "mean and standard deviation at that linkage and k, added together. Its p-value was adjusted "
-                    + "for the choice among every linkage and k by the maximum statistic (%s): the Monte Carlo share "
-                    + "(1 + sets reaching it) / (1 + %d) (%s) of null sets whose largest excess over all linkages and "
-                    + "k reached it, with the observed excess taken from its first %d replicates so that both rest "
-                    + "on the same number. The largest observed excess against the null sets' largest is the test of "
-                    + "any cluster structure; beside its Monte Carlo p-value a p-value from a normal distribution "
-                    + "fitted to the null sets' largest excess is reported.", s.nullReplicates(), s.nullSets(),
-                    nullData, cite(c, Reference.WESTFALL_YOUNG), s.nullSets(), cite(c, Reference.HOPE),
-                    s.nullReplicates()));
+                    + "mean and standard deviation at that linkage and k, added together; it ordered the solutions. "
+                    + "For testing, the same sum was formed with the observed solution (its first %d replicates, as "
+                    + "many as each null set had) and the null sets that had a cut at that linkage and k "
+                    + "standardised alike, by their pooled mean and standard deviation. A solution's p-value was "
+                    + "adjusted for the choice among every linkage and k by the maximum statistic (%s): the Monte "
+                    + "Carlo share (1 + sets reaching it) / (1 + %d) (%s) of null sets whose largest statistic over "
+                    + "all linkages and k reached the solution's. The largest observed statistic against the null "
+                    + "sets' largest is the test of any cluster structure; beside its Monte Carlo p-value a p-value "
+                    + "from a normal distribution fitted to the null sets' largest is reported.", s.nullReplicates(),
+                    s.nullSets(), nullData, s.nullReplicates(), cite(c, Reference.WESTFALL_YOUNG), s.nullSets(),
+                    cite(c, Reference.HOPE)));
         } else {
             out.add("Stability was not calibrated against null data.");
         }
@@ -166,18 +169,21 @@ public final class MethodsParagraph {
 
     private String rule(Set<Reference> c, DecisionRule r) {
         if (model.nullCalibrated()) {
-            return f("A solution was called supported when it beat the null data (adjusted p ≤ %s) and every cluster "
-                    + "was stable (mean Jaccard at least %s; %s); tentative when it beat the null data and no cluster "
-                    + "dissolved (every mean Jaccard above %s) but a cluster was only doubtful; and unsupported "
-                    + "otherwise. No silhouette threshold entered the verdict; the average silhouette was read only as a "
-                    + "description (%s). Among the solutions the better verdict was preferred, then the "
-                    + "larger excess over the null, the higher smallest cluster Jaccard and the higher cophenetic "
-                    + "correlation; when no solution was better than unsupported, the data were treated as one group "
-                    + "(k = 1).", Numbers.plain(r.alpha()), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
+            return f("A solution was called supported when it beat the null data (adjusted p ≤ %s), every cluster "
+                    + "was cohesive (its members' mean silhouette width above 0; %s) and every cluster was stable "
+                    + "(mean Jaccard at least %s; %s); tentative when it beat the null data, every cluster was "
+                    + "cohesive and no cluster dissolved (every mean Jaccard above %s) but a cluster was only "
+                    + "doubtful; and unsupported otherwise. No threshold on the average silhouette entered the "
+                    + "verdict; it was read only as a description (%s). Among the solutions the better verdict was "
+                    + "preferred, then the larger excess over the null, the higher smallest cluster Jaccard and the "
+                    + "higher cophenetic correlation, leaving out supported solutions that existed over less than half "
+                    + "the relative range of cut heights of the linkage's longest-lasting one; when no solution was "
+                    + "better than unsupported, the data were treated as one group (k = 1).", Numbers.plain(r.alpha()),
+                    cite(c, Reference.ROUSSEEUW), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
                     Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW));
         }
         return f("Without null data no solution could be called more than tentative, which needed every cluster "
-                + "stable (mean Jaccard at least %s; %s), a mean ARI of at least %s and an average silhouette above "
+                + "cohesive (its members' mean silhouette width above 0) and stable (mean Jaccard at least %s; %s), a mean ARI of at least %s and an average silhouette above "
                 + "%s, the reading of a reasonable structure of %s; among such solutions the higher mean ARI was "
                 + "preferred, then the higher smallest cluster Jaccard and the higher cophenetic correlation.",
                 Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG), Numbers.plain(r.stableJaccard()),

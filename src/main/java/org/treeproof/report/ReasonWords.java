@@ -43,6 +43,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
             case BEATS_NULL -> "the solution beats the null data (allowing for the choice among linkages and k)";
             case NO_CLUSTER_DISSOLVES -> f("no cluster dissolves (every mean Jaccard above %s)",
                     Numbers.plain(rule.dissolvedJaccard()));
+            case EVERY_CLUSTER_COHESIVE -> "every cluster is cohesive (its members' mean silhouette width above 0)";
             case EVERY_CLUSTER_STABLE -> f("every cluster is stable (mean Jaccard at least %s)",
                     Numbers.plain(rule.stableJaccard()));
             case REPRODUCED -> f("replicates reproduce the solution (mean ARI at least %s)",
@@ -58,11 +59,13 @@ public final class ReasonWords implements Reason.Visitor<String> {
         String ps = f("Monte Carlo p = %s over %d null data sets; %s from a normal fit to their maxima",
                 Numbers.p(t.pValue()), t.nullSets(), fitted(t.pValueFitted()));
         if (r.found()) {
-            return f("The data hold cluster structure beyond noise: the largest excess over the null among every "
-                    + "linkage and k is %s (%s).", Numbers.fixed(t.statistic(), 2), ps);
+            return f("The data hold cluster structure beyond noise: the largest test statistic (stability plus "
+                    + "separation, standardised alike for the data and the null sets) among every linkage and k is "
+                    + "%s (%s).", Numbers.fixed(t.statistic(), 2), ps);
         }
-        return f("The data hold no cluster structure beyond what data without clusters give: the largest excess over "
-                + "the null among every linkage and k is %s, which null data sets reach too (%s).",
+        return f("The data hold no cluster structure beyond what data without clusters give: the largest test "
+                + "statistic (stability plus separation, standardised alike for the data and the null sets) among "
+                + "every linkage and k is %s, which null data sets reach too (%s).",
                 Numbers.fixed(t.statistic(), 2), ps);
     }
 
@@ -161,8 +164,13 @@ public final class ReasonWords implements Reason.Visitor<String> {
                 recommended = s.share();
             }
         }
-        return f("Ranked replicate by replicate (each replicate's own stability against the null), %s linkage "
-                + "favours %s of replicates%s.", Names.linkage(r.linkage()), String.join(", ", parts),
+        if (r.shares().size() == 1) {
+            return f("k = %d is the only %s solution on %s linkage, so no other k competes replicate by replicate.",
+                    r.recommendedK(), r.verdict().id(), Names.linkage(r.linkage()));
+        }
+        return f("Ranked replicate by replicate (each replicate's own stability against the null), the %s "
+                + "solutions on %s linkage favour %s of replicates%s.", r.verdict().id(), Names.linkage(r.linkage()),
+                String.join(", ", parts),
                 recommended >= 0.5 ? "" : f("; k = %d wins in fewer than half", r.recommendedK()));
     }
 

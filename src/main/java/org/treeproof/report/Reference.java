@@ -70,6 +70,10 @@ public record Reference(String cite, String entry, String doi) {
             "Liu, Y., Hayes, D. N., Nobel, A. & Marron, J. S. (2008). Statistical significance of clustering for "
                     + "high-dimension, low-sample size data. Journal of the American Statistical Association, 103, "
                     + "1281–1293.", "10.1198/016214508000000454");
+    static final Reference GOMEZ = new Reference("Gómez et al., 1998",
+            "Gómez, E., Gómez-Villegas, M. A. & Marín, J. M. (1998). A multivariate generalization of the power "
+                    + "exponential family of distributions. Communications in Statistics - Theory and Methods, 27, "
+                    + "589–600.", "10.1080/03610929808832115");
     static final Reference WESTFALL_YOUNG = new Reference("Westfall & Young, 1993",
             "Westfall, P. H. & Young, S. S. (1993). Resampling-Based Multiple Testing: Examples and Methods for "
                     + "p-Value Adjustment. Wiley, New York. ISBN 978-0-471-55761-6.", "");

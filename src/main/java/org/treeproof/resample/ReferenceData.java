@@ -339,9 +339,6 @@ public final class ReferenceData implements Serializable {
 
     /** The normal consistency factor of the median absolute deviation, 1 / Φ⁻¹(3/4). */
     private static final double MAD_TO_SD = 1.482602218505602;
-    /** Entries read for the background noise level; larger tables are read at an even stride. */
-    private static final int NOISE_SAMPLE = 1 << 22;
-
     /** The elliptical null of {@code observed}, computing its axes. */
     public static ReferenceData ellipticalNull(DataMatrix observed) {
         return ellipticalNull(observed, PrincipalAxes.of(observed));
@@ -350,21 +347,25 @@ public final class ReferenceData implements Serializable {
     /**
      * A unimodal elliptical null shaped like {@code observed} in everything but clusters: the data's principal
      * axes; along each axis a robust scale, the normalised median absolute deviation (MAD × 1.4826; F. R. Hampel,
-     * J. Am. Stat. Assoc. 69 (1974) 383-393, doi:10.1080/01621459.1974.10482962) of the data's scores on it,
-     * never less than the background noise level (the normalised MAD of all entries of the column-centred data,
-     * as Y. Liu, D. N. Hayes, A. Nobel and J. S. Marron, J. Am. Stat. Assoc. 103 (2008) 1281-1293,
-     * doi:10.1198/016214508000000454, floor their Gaussian null's eigenvalues; an axis whose MAD is 0 keeps its
-     * SD); and the data's own radial distribution: each null sample lies in a uniformly random direction (in the
-     * axes scaled by those scales) at the radius of a randomly chosen observed sample, measured the same way.
+     * J. Am. Stat. Assoc. 69 (1974) 383-393, doi:10.1080/01621459.1974.10482962) of the data's scores on it (an
+     * axis whose MAD is 0 keeps its SD); and a radial law fitted to the data's radii measured in those scaled axes
+     * ({@link RadialModel}: a power exponential law matching their median and 95% quantile). Each null sample lies
+     * in a uniformly random direction at a radius drawn from that law.
      *
      * <p>So the null is an elliptical distribution (K.-T. Fang, S. Kotz and K. W. Ng, <i>Symmetric Multivariate
-     * and Related Distributions</i>, Chapman and Hall, 1990) with no modes but the centre, whose tails are as
-     * heavy as the data's: Gaussian data give a near-Gaussian null, heavy-tailed data a heavy-tailed one, and
-     * far points stay far. Clusters do not survive it, because directions are redrawn. Using the radial
-     * distribution is our choice: a Gaussian null, with any scale, is beaten by heavy tails alone.
+     * and Related Distributions</i>, Chapman and Hall, 1990) whose density falls away from its one mode, with the
+     * data's axes and scales like the Gaussian null of the significance test for clustering of Y. Liu, D. N. Hayes,
+     * A. Nobel and J. S. Marron (J. Am. Stat. Assoc. 103 (2008) 1281-1293, doi:10.1198/016214508000000454), but
+     * with tails as heavy or as light as the data's bulk: heavy tails alone do not beat it, and clusters do not
+     * survive it, because directions are redrawn. Unlike that test, no scale is raised to a background noise
+     * level: with fewer features than samples, raising the smaller scales makes the null rounder than the data's
+     * own sample, which then beats it by its chance elongation alone (seen on Gaussian noise). Using a fitted
+     * radial law rather than the data's own radii is our choice: the own radii of a small, far group return in
+     * the null as a shell of far samples, which linkages group into clusters as well-separated as the group.
      *
-     * <p>Each sample's coordinates take {@code rank} normal variates and then one {@code nextInt} for its radius,
-     * in that order, from the generator's one stream.
+     * <p>The law is represented by {@code n} radii at its quantiles {@code (i + 1/2) / n}; each sample's
+     * coordinates take {@code rank} normal variates and then one {@code nextInt} for its radius, in that order,
+     * from the generator's one stream.
      */
     public static ReferenceData ellipticalNull(DataMatrix observed, PrincipalAxes axes) {
         requireMatch(observed, axes);
@@ -372,7 +373,6 @@ public final class ReferenceData implements Serializable {
         int r = axes.rank();
         double[] scores = axes.scores(observed);
         double[] var = axes.variances();
-        double noise = backgroundNoise(observed, axes.means());
         double[] sd = new double[r];
         double[] column = new double[n];
         for (int c = 0; c < r; c++) {
@@ -380,7 +380,7 @@ public final class ReferenceData implements Serializable {
                 column[i] = scores[i * r + c];
             }
             double mad = MAD_TO_SD * mad(column);
-            sd[c] = mad > 0 ? Math.max(mad, noise) : Math.sqrt(var[c]);
+            sd[c] = mad > 0 ? mad : Math.sqrt(var[c]);
         }
         double[] radii = new double[n];
         for (int i = 0; i < n; i++) {
@@ -391,20 +391,15 @@ public final class ReferenceData implements Serializable {
             }
             radii[i] = Math.sqrt(s2);
         }
-        return new ReferenceData(observed, Shape.ELLIPTICAL, null, null, sd, axes.axes(), axes.means(), radii);
-    }
-
-    private static double backgroundNoise(DataMatrix observed, double[] means) {
-        double[] x = observed.rowMajorCopy();
-        int p = means.length;
-        long total = x.length;
-        int stride = (int) Math.max(1, (total + NOISE_SAMPLE - 1) / NOISE_SAMPLE);
-        double[] e = new double[(int) ((total + stride - 1) / stride)];
-        int t = 0;
-        for (long a = 0; a < total; a += stride) {
-            e[t++] = x[(int) a] - means[(int) (a % p)];
+        int dims = 0;
+        for (double v : sd) {
+            dims += v > 0 ? 1 : 0;
         }
-        return MAD_TO_SD * mad(java.util.Arrays.copyOf(e, t));
+        RadialModel model = RadialModel.fit(radii, dims);
+        if (model != null) {
+            radii = model.radii(n);
+        }
+        return new ReferenceData(observed, Shape.ELLIPTICAL, null, null, sd, axes.axes(), axes.means(), radii);
     }
 
     /** The median absolute deviation from the median; sorts {@code v} in place. */

@@ -37,12 +37,14 @@ public record Assessment(Facts facts, Verdict verdict, List<Condition> met, List
  * @param allStable    every cluster's Jaccard status is stable (Hennig's band, decided by the score)
  * @param noneDissolved no cluster's status is dissolved or not assessed
      * @param silhouette   average silhouette of the clustered samples
+     * @param leastClusterSilhouette the smallest mean silhouette width of one cluster's members (NaN when there
+     *                     are no widths)
      * @param calibrated   whether null data were run
      * @param excess       excess over the null from all replicates (NaN without null data)
      * @param pAdjusted    max-statistic adjusted Monte Carlo p-value (NaN without null data)
      * @param cophenetic   the linkage tree's cophenetic correlation
      */
     public record Facts(Linkage linkage, int k, int outliers, double meanAri, double worstJaccard, boolean allStable,
-            boolean noneDissolved, double silhouette, boolean calibrated, double excess, double pAdjusted, double cophenetic) {
+            boolean noneDissolved, double silhouette, double leastClusterSilhouette, boolean calibrated, double excess, double pAdjusted, double cophenetic) {
     }
 }

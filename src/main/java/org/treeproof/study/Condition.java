@@ -12,6 +12,12 @@ public enum Condition {
     BEATS_NULL("beats-null"),
     /** No cluster dissolves: every cluster's mean Jaccard is above Hennig's dissolved band. */
     NO_CLUSTER_DISSOLVES("no-cluster-dissolves"),
+    /**
+     * Every cluster is cohesive: the mean silhouette width of each cluster's members is above 0 ({@link
+     * Cohesion}); a cluster whose members lie on average closer to another cluster is a collection of scattered
+     * samples, such as far samples that a linkage groups together, not a group.
+     */
+    EVERY_CLUSTER_COHESIVE("every-cluster-cohesive"),
     /** Every cluster is stable: every cluster's mean Jaccard is in Hennig's stable band. */
     EVERY_CLUSTER_STABLE("every-cluster-stable"),
     /** Without null data only: the replicates reproduce the solution, mean ARI at least the stable band. */

@@ -33,21 +33,25 @@ import org.treeproof.score.JaccardStability;
  * are outliers and count neither as clusters nor in the fit):
  * <ol>
  *   <li>With null data: {@code supported} when the solution beats the null ({@link Condition#BEATS_NULL}) and
- *       every cluster is stable ({@link Condition#EVERY_CLUSTER_STABLE}); {@code tentative} when it beats the null
- *       and no cluster dissolves but one is only doubtful; otherwise {@code unsupported}. No silhouette band
+ *       every cluster is cohesive ({@link Condition#EVERY_CLUSTER_COHESIVE}) and stable
+ *       ({@link Condition#EVERY_CLUSTER_STABLE}); {@code tentative} when it beats the null, every cluster is
+ *       cohesive and none dissolves but one is only doubtful; otherwise {@code unsupported}. No silhouette band
  *       enters: separation counts through the excess over the null, which compares each k with noise at the
  *       same k.</li>
  *   <li>Without null data (a distance table, or {@code --null-sets 0}) nothing is better than {@code tentative},
- *       which needs every cluster stable, the replicates to reproduce the solution (mean ARI at least
+ *       which needs every cluster cohesive and stable, the replicates to reproduce the solution (mean ARI at least
  *       {@code stableJaccard}) and an average silhouette above {@code reasonableSilhouette}.</li>
  *   <li>Order: the better verdict; then the larger excess over the null (without null data: the larger mean
  *       ARI); then the larger smallest Jaccard; then the larger cophenetic correlation; then the earlier linkage
- *       and the smaller k. The first solution in this order is recommended.</li>
+ *       and the smaller k. The first solution in this order is recommended, leaving out supported solutions that
+ *       are passing states of their tree (item 5).</li>
  *   <li>When no solution is better than {@code unsupported} the verdict is {@code unsupported} with k = 1: the
  *       data hold no convincing cluster structure (beside any samples the tree sets aside as outliers).</li>
  *   <li>Levels: the k of the recommended linkage that are {@code supported} and persist over a range of cut
- *       heights at least half as long, relative to the height, as the longest-persisting supported one; the
- *       recommended k is always a level. Being cuts of one tree they are nested, so two or more describe nested
+ *       heights at least half as long, relative to the height ({@code (high - low) / high}), as the
+ *       longest-persisting supported one of that linkage; the others are passing states of the agglomeration
+ *       (one family split while the other is not yet) and are neither levels nor recommended. The recommended k is
+ *       always a level. Being cuts of one tree they are nested, so two or more describe nested
  *       structure. The persistence condition is our choice.</li>
  * </ol>
  *
@@ -79,16 +83,23 @@ public record DecisionRule(double alpha, double stableJaccard, double dissolvedJ
         if (f.calibrated()) {
             boolean beats = check(met, failed, Condition.BEATS_NULL, f.pAdjusted() <= alpha + 1e-12);
             boolean whole = check(met, failed, Condition.NO_CLUSTER_DISSOLVES, f.noneDissolved());
+            boolean cohesive = check(met, failed, Condition.EVERY_CLUSTER_COHESIVE, cohesive(f));
             boolean stable = check(met, failed, Condition.EVERY_CLUSTER_STABLE, f.allStable());
-            v = !beats || !whole ? Verdict.UNSUPPORTED : stable ? Verdict.SUPPORTED : Verdict.TENTATIVE;
+            v = !beats || !whole || !cohesive ? Verdict.UNSUPPORTED : stable ? Verdict.SUPPORTED : Verdict.TENTATIVE;
         } else {
+            boolean cohesive = check(met, failed, Condition.EVERY_CLUSTER_COHESIVE, cohesive(f));
             boolean stable = check(met, failed, Condition.EVERY_CLUSTER_STABLE, f.allStable());
             boolean reproduced = check(met, failed, Condition.REPRODUCED, f.meanAri() >= stableJaccard);
             boolean separated = check(met, failed, Condition.SEPARATED_WITHOUT_NULL,
                     f.silhouette() > reasonableSilhouette);
-            v = stable && reproduced && separated ? Verdict.TENTATIVE : Verdict.UNSUPPORTED;
+            v = cohesive && stable && reproduced && separated ? Verdict.TENTATIVE : Verdict.UNSUPPORTED;
         }
         return new Assessment(f, v, met, failed);
+    }
+
+    /** Every cluster's members lie, on average, closer to each other than to another cluster ({@link Cohesion}). */
+    private static boolean cohesive(Assessment.Facts f) {
+        return Cohesion.cohesive(f.leastClusterSilhouette());
     }
 
     private static boolean check(List<Condition> met, List<Condition> failed, Condition c, boolean ok) {

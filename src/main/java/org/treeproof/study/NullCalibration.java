@@ -9,13 +9,24 @@ import org.treeproof.score.ReplicateSummary;
  * records out.
  *
  * <p><b>The null data.</b> A unimodal elliptical distribution with the observed data's principal axes, robust
- * scales along them and the data's own radial distribution ({@link
+ * scales along them and a radial law fitted to the data's ({@link
  * org.treeproof.resample.ReferenceData#ellipticalNull}): Gaussian-like for Gaussian data, as in the significance
  * test for clustering of Liu, Hayes, Nobel and Marron (2008, doi:10.1198/016214508000000454), but as
- * heavy-tailed as the data, so heavy tails alone do not beat it.
+ * heavy-tailed as the data's bulk, so heavy tails alone do not beat it.
  *
- * <p><b>Null sets without a cut at k.</b> A null set whose tree has no cut into k clusters of the minimum size
- * counts at that k as mean ARI 0 and silhouette 0 (no reproducible and no separated solution); our convention.
+ * <p><b>Two standardisations.</b> The <i>excess</i>, which orders solutions, standardises the observed mean ARI
+ * and silhouette by the null sets' mean and SD at the same linkage and k. The <i>test statistic</i> standardises
+ * the observed value (from as many replicates as each null set has) and each null set's value alike, by the
+ * mean and SD of all of them that have a cut there, so that under the null the data and the null sets are
+ * exchangeable and the Monte Carlo p-value holds (Hope 1968). Standardising the null sets among themselves
+ * only, as the excess does, caps how far out any one of them can lie (at (m - 1) / sqrt(m) SDs of m values)
+ * while the observed value is not capped, which made the test anti-conservative on noise. A set without a cut
+ * at a linkage and k has no statistic there (counting it as 0 would let the few sets that have the cut stand out
+ * by many SDs).
+ *
+ * <p><b>Null sets without a cut at k.</b> In the excess, a null set whose tree has no cut into k clusters of the
+ * minimum size counts at that k as mean ARI 0 and silhouette 0 (no reproducible and no separated solution); our
+ * convention.
  *
  * <p><b>Standardising.</b> SDs below {@link #SD_FLOOR} are raised to it, so that null sets that agree to the
  * third decimal do not turn a difference in the fourth into a large excess; the floor is our choice (the
@@ -61,12 +72,21 @@ final class NullCalibration {
                 ariSd[l][k] = Math.max(SD_FLOOR, sd(a, ariMean[l][k]));
                 silMean[l][k] = mean(s);
                 silSd[l][k] = Math.max(SD_FLOOR, sd(s, silMean[l][k]));
+                // the test statistic: the observed and the null sets that have this cut, standardised alike
+                double[] pa = finite(withFirst(obsAriTest[l][k], nullAri[l][k]));
+                double[] ps = finite(withFirst(Double.isNaN(obsAriTest[l][k]) ? Double.NaN : obsSil[l][k],
+                        nullSil[l][k]));
+                double pam = mean(pa);
+                double pas = Math.max(SD_FLOOR, sd(pa, pam));
+                double psm = mean(ps);
+                double pss = Math.max(SD_FLOOR, sd(ps, psm));
                 for (int j = 0; j < sets; j++) {
-                    double e = (a[j] - ariMean[l][k]) / ariSd[l][k] + (s[j] - silMean[l][k]) / silSd[l][k];
-                    nullMax[j] = Math.max(nullMax[j], e);
+                    double e = excess(nullAri[l][k][j], nullSil[l][k][j], pam, pas, psm, pss);
+                    if (!Double.isNaN(e)) {
+                        nullMax[j] = Math.max(nullMax[j], e);
+                    }
                 }
-                testExcess[l][k] = excess(obsAriTest[l][k], obsSil[l][k], ariMean[l][k], ariSd[l][k], silMean[l][k],
-                        silSd[l][k]);
+                testExcess[l][k] = excess(obsAriTest[l][k], obsSil[l][k], pam, pas, psm, pss);
                 if (!Double.isNaN(testExcess[l][k])) {
                     observedMax = Math.max(observedMax, testExcess[l][k]);
                 }
@@ -90,8 +110,9 @@ final class NullCalibration {
             }
         }
         double fitted = Double.NaN;
-        double m = mean(nullMax);
-        double sd = sd(nullMax, m);
+        double[] reached = finite(nullMax);
+        double m = mean(reached);
+        double sd = sd(reached, m);
         if (sd > 0 && Double.isFinite(observedMax)) {
             fitted = new NormalDistribution(null, m, sd).cumulativeProbability(observedMax);
             fitted = 1 - fitted;
@@ -125,6 +146,13 @@ final class NullCalibration {
                 out[i] = 0;
             }
         }
+        return out;
+    }
+
+    private static double[] withFirst(double first, double[] rest) {
+        double[] out = new double[rest.length + 1];
+        out[0] = first;
+        System.arraycopy(rest, 0, out, 1, rest.length);
         return out;
     }
 

@@ -12,7 +12,7 @@ package org.treeproof.study;
  *
  * <p>Its p-value is adjusted for the choice among every linkage and k by the single-step maximum statistic
  * (P. H. Westfall and S. S. Young, <i>Resampling-Based Multiple Testing</i>, Wiley, 1993): the Monte Carlo
- * share of null sets whose largest excess over all linkages and k reaches this solution's excess,
+ * share of null sets whose largest test statistic over all linkages and k reaches this solution's,
  * {@code (1 + count) / (1 + sets)} (A. C. A. Hope, J. R. Stat. Soc. B 30 (1968) 582-598,
  * doi:10.1111/j.2517-6161.1968.tb00759.x).
  *
@@ -29,8 +29,12 @@ package org.treeproof.study;
  * @param silhouetteLow    2.5% quantile of the null sets' silhouette
  * @param silhouetteHigh   97.5% quantile of the null sets' silhouette
  * @param excess           the observed solution's excess over the null, from all its replicates
- * @param testExcess       the same from the first {@code replicatesPerSet} replicates, as the null sets have
- * @param pValueAdjusted   the max-statistic Monte Carlo p-value of {@code testExcess}
+ * @param testExcess       the test statistic: the same sum from the first {@code replicatesPerSet} replicates (as
+ *                         many as the null sets have), standardised by the pooled mean and SD of this value and
+ *                         the null sets' values at this linkage and k ({@link NullCalibration}); NaN when the
+ *                         observed cut does not exist
+ * @param pValueAdjusted   the max-statistic Monte Carlo p-value of {@code testExcess} among the null sets'
+ *                         largest statistics
  */
 public record NullStability(int sets, int replicatesPerSet, double ariMean, double ariSD, double ariLow,
         double ariHigh, double pacMean, double silhouetteMean, double silhouetteSD, double silhouetteLow,

@@ -129,8 +129,12 @@ public sealed interface Reason {
         }
     }
 
-    /** How often each k wins when the rule's ordering is applied replicate by replicate. */
-    record Votes(Linkage linkage, List<Recommendation.KShare> shares, int recommendedK) implements Reason {
+    /**
+     * How often each k wins when the rule's ordering is applied replicate by replicate, among the linkage's
+     * solutions that have the recommended verdict.
+     */
+    record Votes(Linkage linkage, Verdict verdict, List<Recommendation.KShare> shares, int recommendedK)
+            implements Reason {
         public Votes {
             shares = List.copyOf(shares);
         }

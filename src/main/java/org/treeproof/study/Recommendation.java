@@ -25,8 +25,9 @@ import org.treeproof.tree.Linkage;
  * @param clustering      the recommended clusters and outliers (for unsupported: one cluster and the samples the
  *                        tree sets aside before its first split into two large branches)
  * @param minClusterSize  the smallest cluster
- * @param votes           per k, the share of replicates whose own stability ranks that k first on the recommended
- *                        linkage (empty without null data)
+ * @param votes           per k, the share of replicates whose own stability ranks that k first among the
+ *                        recommended linkage's solutions with the recommended verdict, every such k listed, in
+ *                        increasing k (empty without null data)
  */
 public record Recommendation(Linkage linkage, int k, CutHeight cutHeight, Verdict verdict, List<Integer> levels,
         List<Reason> reasons, List<CriterionChoice> criteria, List<ClusterEvidence> flaggedClusters,

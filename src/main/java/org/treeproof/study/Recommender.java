@@ -40,8 +40,13 @@ public final class Recommender {
         boolean noneDissolved = e.clusters().stream().noneMatch(c -> c.status() == JaccardStability.Status.DISSOLVED
                 || c.status() == JaccardStability.Status.NOT_ASSESSED);
         return new Assessment.Facts(le.linkage(), e.k(), e.outliers(), e.stability().ari().mean(), e.worstJaccard(),
-                allStable, noneDissolved, e.silhouette(), ns != null, ns == null ? Double.NaN : ns.excess(),
+                allStable, noneDissolved, e.silhouette(), leastClusterSilhouette(e), ns != null, ns == null ? Double.NaN : ns.excess(),
                 ns == null ? Double.NaN : ns.pValueAdjusted(), le.copheneticCorrelation());
+    }
+
+    /** The smallest mean silhouette width of one cluster's members; NaN when no width is defined. */
+    static double leastClusterSilhouette(KEvidence e) {
+        return Cohesion.leastClusterMean(e.sampleSilhouette(), e.clustering());
     }
 
     /** Decides. */
@@ -52,10 +57,14 @@ public final class Recommender {
         Assessment[] strongest = new Assessment[all.size()];
         for (int l = 0; l < all.size(); l++) {
             LinkageEvidence le = all.get(l);
+            var own = new ArrayList<Assessment>();
             for (KEvidence e : le.byK()) {
-                Assessment a = rule.assess(facts(le, e));
-                assessments.add(a);
-                if (strongest[l] == null || rule.order().compare(a, strongest[l]) < 0) {
+                own.add(rule.assess(facts(le, e)));
+            }
+            assessments.addAll(own);
+            java.util.Set<Integer> passing = passingStates(le, own);
+            for (Assessment a : own) {
+                if (!passing.contains(a.k()) && (strongest[l] == null || rule.order().compare(a, strongest[l]) < 0)) {
                     strongest[l] = a;
                 }
             }
@@ -97,14 +106,14 @@ public final class Recommender {
         KEvidence e = le.at(winner.k());
         List<Integer> levels = levels(le, assessments, winner);
         List<Recommendation.CriterionChoice> criteria = criteria(le);
-        List<Recommendation.KShare> votes = votes(le);
+        List<Recommendation.KShare> votes = votes(le, winner.verdict(), assessments);
         reasons.add(new Reason.Chosen(winner, e));
         Clustering solution = farSamplesAside(le, e);
         if (solution.outlierCount() > 0) {
             reasons.add(new Reason.Outliers(solution.outlierCount(), evidence.minClusterSize()));
         }
         if (!votes.isEmpty()) {
-            reasons.add(new Reason.Votes(le.linkage(), votes, e.k()));
+            reasons.add(new Reason.Votes(le.linkage(), winner.verdict(), votes, e.k()));
         }
         if (le.gap() != null) {
             reasons.add(new Reason.Gap(le.gapChoice(), le.gap().ruleMet(), e.k()));
@@ -134,30 +143,42 @@ public final class Recommender {
 
     /**
      * The levels of nested structure on the recommended linkage: its supported solutions that persist over a range
-     * of cut heights at least half as long, relative to the height, as the longest-persisting supported one (a
-     * solution that exists only over a sliver of heights is a passing state of the agglomeration, such as one
-     * family split while the other is not yet); the recommended k is always a level. On trees with inversions an
-     * empty height range never qualifies. The persistence condition is our choice.
+     * of cut heights at least half as long, relative to the height, as the longest-persisting supported one; the
+     * recommended k is always a level. On trees with inversions an empty height range never qualifies. The
+     * persistence condition is our choice.
      */
     private static List<Integer> levels(LinkageEvidence le, List<Assessment> assessments, Assessment winner) {
-        var supported = new ArrayList<KEvidence>();
-        double widest = 0;
-        for (Assessment a : assessments) {
-            if (a.linkage() == le.linkage() && a.verdict() == Verdict.SUPPORTED) {
-                KEvidence e = le.at(a.k());
-                supported.add(e);
-                widest = Math.max(widest, persistence(e));
-            }
-        }
+        var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
+        java.util.Set<Integer> passing = passingStates(le, own);
         var out = new ArrayList<Integer>();
-        for (KEvidence e : supported) {
-            if (e.k() == winner.k() || (widest > 0 && persistence(e) >= 0.5 * widest)) {
-                out.add(e.k());
+        for (Assessment a : own) {
+            if (a.verdict() == Verdict.SUPPORTED && !passing.contains(a.k()) || a.k() == winner.k()) {
+                out.add(a.k());
             }
         }
-        if (!out.contains(winner.k())) {
-            out.add(winner.k());
-            out.sort(null);
+        return out;
+    }
+
+    /**
+     * The supported solutions of one linkage that are passing states of the agglomeration: they exist over a range
+     * of cut heights less than half as long, relative to the height, as the longest-persisting supported one, such
+     * as one family split while the other is not yet. They neither compete for the recommendation nor count as
+     * levels. Empty when no supported solution persists at all (a tree whose every such range is empty).
+     */
+    private static java.util.Set<Integer> passingStates(LinkageEvidence le, List<Assessment> own) {
+        double widest = 0;
+        for (Assessment a : own) {
+            if (a.verdict() == Verdict.SUPPORTED) {
+                widest = Math.max(widest, persistence(le.at(a.k())));
+            }
+        }
+        var out = new java.util.HashSet<Integer>();
+        if (widest > 0) {
+            for (Assessment a : own) {
+                if (a.verdict() == Verdict.SUPPORTED && persistence(le.at(a.k())) < 0.5 * widest) {
+                    out.add(a.k());
+                }
+            }
         }
         return out;
     }
@@ -217,11 +238,21 @@ public final class Recommender {
     /**
      * Per k, the share of replicates in which that k has the largest excess over the null when the replicate's
      * own ARI replaces the mean ARI (the separation term is the solution's own): the rule's ordering read
-     * replicate by replicate.
+     * replicate by replicate. The rule orders by verdict first, and a verdict belongs to all replicates together,
+     * so only the recommended linkage's solutions with the recommended verdict take part, passing states left out
+     * as they are from the recommendation.
      */
-    private List<Recommendation.KShare> votes(LinkageEvidence le) {
+    private List<Recommendation.KShare> votes(LinkageEvidence le, Verdict verdict, List<Assessment> assessments) {
         if (le.byK().isEmpty() || le.byK().get(0).stability().nullModel() == null) {
             return List.of();
+        }
+        var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
+        java.util.Set<Integer> passing = passingStates(le, own);
+        var candidates = new java.util.HashSet<Integer>();
+        for (Assessment a : own) {
+            if (a.verdict() == verdict && !passing.contains(a.k())) {
+                candidates.add(a.k());
+            }
         }
         int replicates = le.byK().get(0).replicateAri().length;
         int[] wins = new int[evidence.settings().maxK() + 1];
@@ -235,6 +266,9 @@ public final class Recommender {
             for (int t = 0; t < ari.length; t++) {
                 KEvidence e = le.byK().get(t);
                 NullStability ns = e.stability().nullModel();
+                if (!candidates.contains(e.k()) || ns == null) {
+                    continue;
+                }
                 double v = NullCalibration.excess(ari[t][r], e.silhouette(), ns.ariMean(), ns.ariSD(),
                         ns.silhouetteMean(), ns.silhouetteSD());
                 if (v > bestValue) {
@@ -248,7 +282,7 @@ public final class Recommender {
         }
         var out = new ArrayList<Recommendation.KShare>();
         for (int k = 2; k < wins.length; k++) {
-            if (wins[k] > 0) {
+            if (candidates.contains(k)) {
                 out.add(new Recommendation.KShare(k, wins[k] / (double) replicates));
             }
         }

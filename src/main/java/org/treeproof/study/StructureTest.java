@@ -2,8 +2,9 @@ package org.treeproof.study;
 
 /**
  * The one test of "is there any cluster structure" that accounts for choosing among linkages and k: the largest
- * null-standardised excess ({@link NullStability}) over every linkage and k of the observed data, against the same
- * maximum on each null data set.
+ * test statistic ({@link NullStability#testExcess}: stability plus separation, the observed data and the null sets
+ * standardised alike) over every linkage and k of the observed data, against the same maximum on each null data
+ * set. A null set with no cut anywhere reaches nothing (its maximum is minus infinity, written as null).
  *
  * <p>Two p-values, both reported. The Monte Carlo one, {@code (1 + sets reaching it) / (1 + sets)} (Hope 1968),
  * is exact for any statistic but cannot go below {@code 1 / (1 + sets)}. The fitted one reads the observed
@@ -13,12 +14,12 @@ package org.treeproof.study;
  * doi:10.1198/016214508000000454, does with its simulated null statistics (from memory of that paper); it can
  * go below the Monte Carlo floor when the evidence is strong, and is only as good as the normal fit.
  *
- * @param statistic        the observed largest excess
+ * @param statistic        the observed largest test statistic
  * @param pValue           the Monte Carlo p-value
  * @param pValueFitted     the p-value from the fitted normal distribution of the null maxima
  * @param nullSets         null data sets
  * @param replicatesPerSet replicates per null set and for the observed statistic
- * @param nullMaxima       the null sets' largest excess, in set order
+ * @param nullMaxima       the null sets' largest test statistic, in set order
  */
 public record StructureTest(double statistic, double pValue, double pValueFitted, int nullSets, int replicatesPerSet,
         double[] nullMaxima) {

@@ -118,9 +118,14 @@ class ExplainIT {
         assertTrue(covs.stream().noneMatch(x -> x.get("flagged").equals("true")), covs.toString());
 
         List<CSVRecord> sens = csv(dir.resolve("sensitivity.csv"));
-        // Ward (chosen here) takes Euclidean distances only: the other two scalings run, log2 cannot (negative values)
-        assertEquals(List.of("scale: none", "scale: center", "log2: on"), sens.stream().map(x -> x.get("alternative"))
-                .toList());
+        // every linkage runs the other two scalings and log2; Ward takes Euclidean distances only, the other linkages
+        // also run every other metric
+        var expected = new java.util.ArrayList<>(List.of("scale: none", "scale: center", "log2: on"));
+        if (!s.get("recommendation").get("linkage").asText().equals("ward")) {
+            expected.addAll(List.of("metric: sqeuclidean", "metric: manhattan", "metric: chebyshev", "metric: cosine",
+                    "metric: pearson", "metric: spearman"));
+        }
+        assertEquals(expected, sens.stream().map(x -> x.get("alternative")).toList());
         for (CSVRecord x : sens.subList(0, 2)) {
             assertTrue(Double.parseDouble(x.get("ari")) > 0.9, x.toString());
             assertEquals("3", x.get("clustersSurviving"), x.toString());

@@ -72,12 +72,13 @@ class MethodsParagraphTest {
                 "average (UPGMA), complete and Ward linkage", "k = 2 to 5 clusters", "from 20 replicates",
                 "a subsample of 80% of the samples drawn without replacement", "(5 replicates each)",
                 "19 null data sets", "(1 + 19)", "10 reference data sets", "principal axes", "(0.1, 0.9]",
-                "adjusted p ≤ 0.05", "mean Jaccard at least 0.75", "every mean Jaccard above 0.5",
+                "adjusted p ≤ 0.05", "mean Jaccard at least 0.75", "every mean Jaccard above 0.5", "mean silhouette width above 0",
                 "at least 5 samples counted as clusters", "first 5 replicates", "Ward2")) {
             assertTrue(md.contains(expected), "missing '" + expected + "' in\n" + md);
         }
         assertEquals(20, st.replicates());
-        assertTrue(md.contains("The evidence supported k = 3 clusters with average linkage"), md);
+        assertTrue(md.contains("The evidence supported k = 3 clusters with "
+                + s.recommendation().linkage().id() + " linkage"), md);
     }
 
     @Test

@@ -6,18 +6,27 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import org.junit.jupiter.api.Test;
 
 /**
- * The excess over the null and the structure test on a case small enough to work by hand. Null ARI 0.2, 0.4, 0.6
- * (mean 0.4, sample SD 0.2) and silhouette 0.1, 0.1, 0.4 (mean 0.2, SD sqrt(0.03)); observed 0.8 and 0.5 give an
- * excess of 2 + 0.3 / sqrt(0.03) = 2 + sqrt(3) = 3.7320508. The null sets' own excesses are -1 - 1/sqrt(3),
- * -1/sqrt(3) and 1 + 2/sqrt(3); a second linkage whose null sets all agree has excess 0 on each (its SD is raised to
- * the floor), so the null maxima are 0, 0 and 2.1547005, none reaching 3.73: Monte Carlo p = 1/4 (Hope 1968). A
- * normal fitted to the maxima (mean 0.7182, SD 1.2440) puts 3.732 at an upper tail of 0.0077039 (scipy 1.10.1
- * norm.sf, computed by hand beside this test).
+ * The excess over the null and the structure test on a case small enough to work by hand.
+ *
+ * <p><b>Excess</b> (the ordering's measure, standardised by the null sets alone): null ARI 0.2, 0.4, 0.6 (mean 0.4,
+ * sample SD 0.2) and silhouette 0.1, 0.1, 0.4 (mean 0.2, SD sqrt(0.03)); observed 0.8 and 0.5 give
+ * 2 + 0.3 / sqrt(0.03) = 2 + sqrt(3).
+ *
+ * <p><b>Test statistic</b> (the observed value and the null sets standardised alike, by the mean and SD of all
+ * four): ARI 0.8, 0.2, 0.4, 0.6 have mean 0.5 and SD sqrt(0.2 / 3); silhouettes 0.5, 0.1, 0.1, 0.4 have mean 0.275
+ * and SD sqrt(0.0425). The observed statistic is 0.3 / sqrt(0.2 / 3) + 0.225 / sqrt(0.0425) = 2.2533053; the null
+ * sets' are -2.0107697, -1.2361730 and 0.1 / sqrt(0.2 / 3) + 0.125 / sqrt(0.0425) = 0.9936374. A second linkage
+ * whose observed cut does not exist and whose null sets all agree has statistic 0 on each (the SD is raised to the
+ * floor), so the null maxima are 0, 0 and 0.9936374, none reaching 2.2533: Monte Carlo p = 1/4 (Hope 1968). A normal
+ * fitted to the maxima (mean 0.3312125, SD 0.5736768) puts 2.2533 at an upper tail of 0.00040335781 (scipy 1.17.1
+ * {@code norm.sf}, computed by hand beside this test).
  */
 class NullCalibrationTest {
+    private static final double ARI_SD = Math.sqrt(0.2 / 3);
+    private static final double SIL_SD = Math.sqrt(0.0425);
 
     @Test
-    void aHandWorkedCaseGivesTheExcessAndBothPValues() {
+    void aHandWorkedCaseGivesTheExcessTheStatisticAndBothPValues() {
         double[][] obsTest = {{0.8}, {Double.NaN}};
         double[][] obsAll = {{0.8}, {Double.NaN}};
         double[][] obsSil = {{0.5}, {Double.NaN}};
@@ -27,7 +36,9 @@ class NullCalibrationTest {
         NullCalibration.Result r = NullCalibration.of(obsTest, obsAll, obsSil, nullAri, nullSil, nullPac, 10);
         NullStability c = r.cells()[0][0];
         assertEquals(2 + Math.sqrt(3), c.excess(), 1e-12);
-        assertEquals(2 + Math.sqrt(3), c.testExcess(), 1e-12);
+        double statistic = 0.3 / ARI_SD + 0.225 / SIL_SD;
+        assertEquals(2.2533053165257235, statistic, 1e-12);
+        assertEquals(statistic, c.testExcess(), 1e-12);
         assertEquals(0.4, c.ariMean(), 1e-12);
         assertEquals(0.2, c.ariSD(), 1e-12);
         assertEquals(Math.sqrt(0.03), c.silhouetteSD(), 1e-12);
@@ -35,23 +46,40 @@ class NullCalibrationTest {
         assertEquals(0.25, c.pValueAdjusted(), 0);
         assertNull(r.cells()[1][0], "a cut that does not exist has no calibration");
         StructureTest t = r.test();
-        assertEquals(2 + Math.sqrt(3), t.statistic(), 1e-12);
+        assertEquals(statistic, t.statistic(), 1e-12);
         assertEquals(0.25, t.pValue(), 0);
-        assertEquals(0.007703887379738761, t.pValueFitted(), 1e-9);
+        assertEquals(0.00040335781052188173, t.pValueFitted(), 1e-12);
         assertEquals(3, t.nullSets());
-        assertEquals(1 + 2 / Math.sqrt(3), t.nullMaxima()[2], 1e-12);
+        assertEquals(0.1 / ARI_SD + 0.125 / SIL_SD, t.nullMaxima()[2], 1e-12);
         assertEquals(0, t.nullMaxima()[0], 1e-12);
     }
 
     @Test
+    void theStatisticStandardisesTheObservedValueAndTheNullSetsAlike() {
+        // the observed value is one of the pooled values, so it cannot lie further out than (m - 1) / sqrt(m) SDs
+        // of m values (here m = 4: 1.5 per measure), however far beyond the null sets it is
+        double[][][] nullAri = {{{0.1, 0.1, 0.1 + 1e-3}}};
+        double[][][] nullSil = {{{0.0, 0.0, 1e-3}}};
+        NullCalibration.Result r = NullCalibration.of(new double[][] {{1.0}}, new double[][] {{1.0}},
+                new double[][] {{0.9}}, nullAri, nullSil, new double[][][] {{{0, 0, 0}}}, 10);
+        assertEquals(3.0, r.test().statistic(), 1e-2);
+    }
+
+    @Test
     void aNullSetWithoutTheCutCountsAsNoStructure() {
-        // the second null set has no cut at this k: it counts as ARI 0 and silhouette 0
+        // the second null set has no cut at this k: in the excess it counts as ARI 0 and silhouette 0; in the test
+        // statistic it has no value at this cut, so (with no other cut) it reaches nothing
         double[][][] nullAri = {{{0.5, Double.NaN, 0.7}}};
         double[][][] nullSil = {{{0.2, Double.NaN, 0.4}}};
         NullCalibration.Result r = NullCalibration.of(new double[][] {{0.9}}, new double[][] {{0.9}},
                 new double[][] {{0.5}}, nullAri, nullSil, new double[][][] {{{0, 0, 0}}}, 5);
         assertEquals(0.4, r.cells()[0][0].ariMean(), 1e-12);
         assertEquals(0.2, r.cells()[0][0].silhouetteMean(), 1e-12);
+        // pooled ARI 0.9, 0.5, 0.7 (mean 0.7, SD 0.2) and silhouette 0.5, 0.2, 0.4 (mean 11/30, SD sqrt(7/300))
+        double silSd = Math.sqrt(7.0 / 300);
+        assertEquals(1 + (0.5 - 11.0 / 30) / silSd, r.test().statistic(), 1e-12);
+        assertEquals(Double.NEGATIVE_INFINITY, r.test().nullMaxima()[1], 0);
+        assertEquals(1.0 / 4, r.test().pValue(), 0);
     }
 
     @Test
