@@ -35,6 +35,27 @@ enum Accumulation {
                 a[jj] = Math.fma(d0, d0, a[jj]);
             }
         }
+
+        @Override
+        void step4x2(double[] a, double[] b, double[] t0, double[] t1, double[] t2, double[] t3, int from, int to,
+                double x0, double x1, double x2, double x3, double y0, double y1, double y2, double y3) {
+            for (int jj = from; jj < to; jj++) {
+                double u0 = t0[jj];
+                double u1 = t1[jj];
+                double u2 = t2[jj];
+                double u3 = t3[jj];
+                double d0 = x0 - u0;
+                double d1 = x1 - u1;
+                double d2 = x2 - u2;
+                double d3 = x3 - u3;
+                double e0 = y0 - u0;
+                double e1 = y1 - u1;
+                double e2 = y2 - u2;
+                double e3 = y3 - u3;
+                a[jj] = Math.fma(d3, d3, Math.fma(d2, d2, Math.fma(d1, d1, Math.fma(d0, d0, a[jj]))));
+                b[jj] = Math.fma(e3, e3, Math.fma(e2, e2, Math.fma(e1, e1, Math.fma(e0, e0, b[jj]))));
+            }
+        }
     },
     /** Sum of absolute differences. */
     ABSOLUTE_DIFFERENCE {
@@ -98,4 +119,15 @@ enum Accumulation {
 
     /** Folds one feature into lanes {@code from..to-1}. */
     abstract void step1(double[] a, double[] t0, int from, int to, double x0);
+
+    /**
+     * {@link #step4} for two samples {@code x} and {@code y} against the same block features, into {@code a} and
+     * {@code b}: each block value is loaded once for both. The same operations on each accumulator as two calls
+     * of {@link #step4}, so the same bits.
+     */
+    void step4x2(double[] a, double[] b, double[] t0, double[] t1, double[] t2, double[] t3, int from, int to,
+            double x0, double x1, double x2, double x3, double y0, double y1, double y2, double y3) {
+        step4(a, t0, t1, t2, t3, from, to, x0, x1, x2, x3);
+        step4(b, t0, t1, t2, t3, from, to, y0, y1, y2, y3);
+    }
 }

@@ -179,7 +179,25 @@ final class PairwiseKernel {
             }
             for (int k0 = 0; k0 < m; k0 += CHUNK_K) {
                 int k1 = Math.min(m, k0 + CHUNK_K);
-                for (int ii = 0; ii < bi; ii++) {
+                int ii = 0;
+                // two row samples at a time share the loads of the block
+                for (; ii + 1 < bi; ii += 2) {
+                    double[] a = acc[ii];
+                    double[] b = acc[ii + 1];
+                    int x = ii * m;
+                    int y = x + m;
+                    int k = k0;
+                    for (; k + 3 < k1; k += 4) {
+                        op.step4x2(a, b, block[k], block[k + 1], block[k + 2], block[k + 3], from, bj,
+                                group[x + k], group[x + k + 1], group[x + k + 2], group[x + k + 3],
+                                group[y + k], group[y + k + 1], group[y + k + 2], group[y + k + 3]);
+                    }
+                    for (; k < k1; k++) {
+                        op.step1(a, block[k], from, bj, group[x + k]);
+                        op.step1(b, block[k], from, bj, group[y + k]);
+                    }
+                }
+                for (; ii < bi; ii++) {
                     double[] a = acc[ii];
                     int x = ii * m;
                     int k = k0;

@@ -74,6 +74,11 @@ public final class ReferenceData implements Serializable {
             public ReferenceData prepare(DataMatrix observed) {
                 return principalBox(observed);
             }
+
+            @Override
+            public ReferenceData prepare(DataMatrix observed, java.util.function.Supplier<PrincipalAxes> axes) {
+                return principalBox(observed, axes.get());
+            }
         },
         /** 0/1 values with each feature's observed frequency of ones: the reference for 0/1 metrics. */
         FEATURE_FREQUENCY("feature-frequency", "binary") {
@@ -98,6 +103,14 @@ public final class ReferenceData implements Serializable {
 
         /** A generator of this kind for {@code observed}. */
         public abstract ReferenceData prepare(DataMatrix observed);
+
+        /**
+         * As {@link #prepare(DataMatrix)}, taking the principal axes of {@code observed} from {@code axes} when it
+         * needs them, so that a caller that needs them elsewhere computes them once.
+         */
+        public ReferenceData prepare(DataMatrix observed, java.util.function.Supplier<PrincipalAxes> axes) {
+            return prepare(observed);
+        }
 
         /** The reference a study with {@code metric} draws unless told otherwise: one whose data it can measure. */
         public static Kind defaultFor(Metric metric) {
@@ -281,6 +294,12 @@ public final class ReferenceData implements Serializable {
      */
     public static ReferenceData nullModel(Metric metric, DataMatrix observed) {
         return metric.binaryOnly() ? featureFrequency(observed) : ellipticalNull(observed);
+    }
+
+    /** As {@link #nullModel(Metric, DataMatrix)}, taking the principal axes of {@code observed} from {@code axes}. */
+    public static ReferenceData nullModel(Metric metric, DataMatrix observed,
+            java.util.function.Supplier<PrincipalAxes> axes) {
+        return metric.binaryOnly() ? featureFrequency(observed) : ellipticalNull(observed, axes.get());
     }
 
     /** Uniform over the principal-axis box of {@code observed} (method (b)), computing its axes. */

@@ -106,11 +106,11 @@ public record ConsensusDistribution(int k, int[] numerators, int[] denominators,
     /** The empirical CDF at {@code x}, decided exactly; {@code NaN} when there are no pairs. */
     public double shareAtMost(BigDecimal x) {
         Objects.requireNonNull(x, "x");
+        Bound b = new Bound(x);
         long at = 0;
-        for (int t = 0; t < counts.length; t++) {
-            if (compare(t, x) <= 0) {
-                at += counts[t];
-            }
+        // values increase, so the first above x ends the sum
+        for (int t = 0; t < counts.length && b.compare(numerators[t], denominators[t]) <= 0; t++) {
+            at += counts[t];
         }
         long total = pairs();
         return total == 0 ? Double.NaN : (double) at / total;
@@ -134,9 +134,11 @@ public record ConsensusDistribution(int k, int[] numerators, int[] denominators,
             throw new IllegalArgumentException("PAC bounds must satisfy 0 <= lower < upper <= 1, got ("
                     + lower + ", " + upper + "]");
         }
+        Bound low = new Bound(lower);
+        Bound high = new Bound(upper);
         long ambiguous = 0;
         for (int t = 0; t < counts.length; t++) {
-            if (compare(t, lower) > 0 && compare(t, upper) <= 0) {
+            if (low.compare(numerators[t], denominators[t]) > 0 && high.compare(numerators[t], denominators[t]) <= 0) {
                 ambiguous += counts[t];
             }
         }
@@ -152,9 +154,39 @@ public record ConsensusDistribution(int k, int[] numerators, int[] denominators,
         return pac(BigDecimal.valueOf(lower), BigDecimal.valueOf(upper));
     }
 
-    /** The sign of (value t - x), exactly. */
-    private int compare(int t, BigDecimal x) {
-        return BigDecimal.valueOf(numerators[t]).compareTo(x.multiply(BigDecimal.valueOf(denominators[t])));
+    /**
+     * A decimal bound compared exactly with fractions: {@code x = unscaled / 10^scale}, so the sign of
+     * {@code num / den - x} is that of {@code num · 10^scale - unscaled · den}, in long arithmetic when the
+     * products fit (always, for bounds with up to 9 decimals), else in BigDecimal.
+     */
+    private static final class Bound {
+        private final BigDecimal x;
+        private final long unscaled;
+        private final long power;
+        private final boolean exactInLong;
+
+        Bound(BigDecimal x) {
+            this.x = x;
+            BigDecimal stripped = x.scale() < 0 ? x.setScale(0) : x;
+            boolean fits = stripped.scale() <= 9 && stripped.unscaledValue().bitLength() < 32;
+            this.exactInLong = fits;
+            this.unscaled = fits ? stripped.unscaledValue().longValue() : 0;
+            this.power = fits ? LongPow.TEN[stripped.scale()] : 0;
+        }
+
+        /** The sign of {@code num / den - x}, exactly ({@code den > 0}). */
+        int compare(int num, int den) {
+            if (exactInLong) {
+                // |num|, den < 2^31, power <= 10^9 < 2^30, |unscaled| < 2^31: both products stay below 2^62
+                return Long.compare(num * power, unscaled * den);
+            }
+            return BigDecimal.valueOf(num).compareTo(x.multiply(BigDecimal.valueOf(den)));
+        }
+    }
+
+    private static final class LongPow {
+        static final long[] TEN = {1L, 10L, 100L, 1_000L, 10_000L, 100_000L, 1_000_000L, 10_000_000L, 100_000_000L,
+            1_000_000_000L};
     }
 
     @Override

@@ -127,11 +127,55 @@ public final class Silhouette {
 
     /** Computes the widths. */
     public Result compute() {
+        return compute(null);
+    }
+
+    /**
+     * The silhouette of each clustering under the same {@code distances}, as {@link #of(CondensedDistances,
+     * Clustering)} then {@link #compute()} one by one (null where the clustering is null), with one pass over the
+     * matrix for all of them instead of one each: every pair's distance is read once and added to the sums of
+     * every clustering, in the same order as a pass of its own, so each result has the same bits.
+     */
+    public static Result[] computeEach(CondensedDistances distances, Clustering[] clusterings) {
+        int count = clusterings.length;
+        Silhouette[] each = new Silhouette[count];
+        int[][] labels = new int[count][];
+        int[] widths = new int[count];
+        boolean any = false;
+        for (int q = 0; q < count; q++) {
+            if (clusterings[q] == null) {
+                continue;
+            }
+            each[q] = of(distances, clusterings[q]);
+            int width = each[q].partition.clusterCount();
+            if (each[q].usesAllPairs(width)) {
+                labels[q] = each[q].partition.labels();
+                widths[q] = width;
+                any = true;
+            }
+        }
+        double[][] sums = any ? clusterSumsAllPairs(distances, labels, widths) : new double[count][];
+        Result[] out = new Result[count];
+        for (int q = 0; q < count; q++) {
+            out[q] = each[q] == null ? null : each[q].compute(sums[q]);
+        }
+        return out;
+    }
+
+    /** Whether {@link #compute} takes the all-pairs sums, over {@code width} label columns. */
+    private boolean usesAllPairs(int width) {
+        int n = partition.size();
+        int clusters = outlier != null ? width - 1 : width;
+        return clusters >= 2 && (long) n * width <= sumsLimit;
+    }
+
+    /** The widths, from the given all-pairs sums when not null (as {@link #clusterSumsAllPairs} gives them). */
+    private Result compute(double[] given) {
         int n = partition.size();
         int k = partition.clusterCount();
         double[] s = new double[n];
         if (outlier != null) {
-            return computeIgnoringOutliers();
+            return computeIgnoringOutliers(given);
         }
         if (k < 2) {
             Arrays.fill(s, Double.NaN);
@@ -141,7 +185,7 @@ public final class Silhouette {
         int[] sizes = partition.clusterSizes();
         double[] rowSums = new double[k];
         if ((long) n * k <= sumsLimit) {
-            double[] sums = clusterSumsAllPairs(labels, k);
+            double[] sums = given != null ? given : clusterSumsAllPairs(labels, k);
             for (int i = 0; i < n; i++) {
                 System.arraycopy(sums, i * k, rowSums, 0, k);
                 s[i] = width(rowSums, labels[i], sizes);
@@ -159,7 +203,7 @@ public final class Silhouette {
         return new Result(s, total / n);
     }
 
-    private Result computeIgnoringOutliers() {
+    private Result computeIgnoringOutliers(double[] given) {
         int n = partition.size();
         int all = partition.clusterCount();   // the clusters and one group of outliers
         int[] labels = partition.labels();
@@ -178,7 +222,7 @@ public final class Silhouette {
             return new Result(s, Double.NaN);
         }
         double[] rowSums = new double[all];
-        double[] sums = (long) n * all <= sumsLimit ? clusterSumsAllPairs(labels, all) : null;
+        double[] sums = given != null ? given : (long) n * all <= sumsLimit ? clusterSumsAllPairs(labels, all) : null;
         double total = 0;
         int counted = 0;
         for (int i = 0; i < n; i++) {
@@ -217,6 +261,59 @@ public final class Silhouette {
             }
             for (int c = 0; c < k; c++) {
                 sums[rowI + c] += acc[c];
+            }
+        }
+        return sums;
+    }
+
+    /**
+     * {@link #clusterSumsAllPairs} for several labellings in one pass ({@code labels[q]} null: none for q); each
+     * accumulator receives the same additions in the same order as in a pass of its own.
+     */
+    private static double[][] clusterSumsAllPairs(CondensedDistances distances, int[][] labels, int[] widths) {
+        int count = labels.length;
+        int q0 = 0;
+        int[] used = new int[count];
+        for (int q = 0; q < count; q++) {
+            if (labels[q] != null) {
+                used[q0++] = q;
+            }
+        }
+        int m = q0;
+        int n = distances.size();
+        double[][] sums = new double[count][];
+        double[][] sumsOf = new double[m][];
+        double[][] acc = new double[m][];
+        int[][] lab = new int[m][];
+        int[] k = new int[m];
+        for (int u = 0; u < m; u++) {
+            int q = used[u];
+            k[u] = widths[q];
+            lab[u] = labels[q];
+            sums[q] = new double[n * k[u]];
+            sumsOf[u] = sums[q];
+            acc[u] = new double[k[u]];
+        }
+        int[] li = new int[m];
+        int t = 0;
+        for (int i = 0; i < n; i++) {
+            for (int u = 0; u < m; u++) {
+                li[u] = lab[u][i];
+                Arrays.fill(acc[u], 0.0);
+            }
+            for (int j = i + 1; j < n; j++) {
+                double d = distances.at(t++);
+                for (int u = 0; u < m; u++) {
+                    acc[u][lab[u][j]] += d;
+                    sumsOf[u][j * k[u] + li[u]] += d;
+                }
+            }
+            for (int u = 0; u < m; u++) {
+                double[] s = sumsOf[u];
+                int rowI = i * k[u];
+                for (int c = 0; c < k[u]; c++) {
+                    s[rowI + c] += acc[u][c];
+                }
             }
         }
         return sums;

@@ -31,9 +31,12 @@ final class GapRun {
     private final ReplicateExecutor executor;
     private final StudyProgress progress;
     private final Checkpoint checkpoint;
+    private final java.util.function.Supplier<org.treeproof.resample.PrincipalAxes> axes;
 
     GapRun(DataMatrix data, CondensedDistances distances, StudySettings settings, List<ReferenceSolution> refs,
-            ReplicateExecutor executor, StudyProgress progress, Checkpoint checkpoint) {
+            ReplicateExecutor executor, StudyProgress progress, Checkpoint checkpoint,
+            java.util.function.Supplier<org.treeproof.resample.PrincipalAxes> axes) {
+        this.axes = axes;
         this.checkpoint = checkpoint;
         this.data = data;
         this.distances = distances;
@@ -48,7 +51,7 @@ final class GapRun {
         int b = settings.referenceSets();
         int l = refs.size();
         double[][][] refLogW = new double[l][b][];
-        ReferenceData generator = settings.gapReference().prepare(data);
+        ReferenceData generator = settings.gapReference().prepare(data, axes);
         progress.stage("reference data sets (gap statistic)", b);
         int first = 0;
         for (double[] kept : checkpoint.rows(Checkpoint.Stage.GAP_SETS)) {

@@ -39,6 +39,8 @@ public record MemoryEstimate(long persistent, long peakPhase, String phase) {
         long replicates = inFlight * perReplicate;
         long nulls = 0;
         if (hasData && s.nullSets() > 0) {
+            // one null set at a time with its replicates in parallel; sets run side by side only when
+            // their memory fits (see nullSetBytes)
             nulls = data + distances + links * ConsensusAccumulator.bytesFor(n, s.maxK(), s.nullReplicates())
                     + inFlight * perReplicate;
         }
@@ -67,6 +69,30 @@ public record MemoryEstimate(long persistent, long peakPhase, String phase) {
             phase = "gap statistic";
         }
         return new MemoryEstimate(persistent, peak, phase);
+    }
+
+    /**
+     * The bytes one null data set holds while it runs as a task of its own on one thread (its data, distances,
+     * consensus counters and one replicate at a time): what each more null set run side by side adds.
+     */
+    public static long nullSetBytes(int n, int p, StudySettings s) {
+        int m = s.resampling() == org.treeproof.resample.Resampling.SUBSAMPLE
+                ? (int) Math.round(s.sampleFraction() * n) : n;
+        long perReplicate = 2 * CondensedDistances.bytesFor(m) + 64L * m * (s.maxK() + s.linkages().size());
+        if (s.resamplesFeatures()) {
+            perReplicate += 8L * m * p;
+        }
+        return 8L * n * p + CondensedDistances.bytesFor(n)
+                + s.linkages().size() * ConsensusAccumulator.bytesFor(n, s.maxK(), s.nullReplicates()) + perReplicate;
+    }
+
+    /**
+     * Whether {@code sets} null data sets fit side by side in {@code heapBytes} next to what the study holds for
+     * the whole run, with the headroom {@link #requireFits} keeps.
+     */
+    public boolean nullSetsFitSideBySide(int sets, long setBytes, long heapBytes) {
+        long needed = persistent + sets * setBytes;
+        return needed + needed / 10 + (64L << 20) <= heapBytes;
     }
 
     public long total() {

@@ -44,6 +44,8 @@ public final class StudyRunner {
     private final int kernelThreads;
     private final StudyProgress progress;
     private Checkpoint checkpoint = Checkpoint.NONE;
+    /** The principal axes of the data, computed once for the null model and the gap reference (when they need them). */
+    private java.util.function.Supplier<org.treeproof.resample.PrincipalAxes> axes;
 
     /**
      * @param kernelThreads threads for whole-matrix distance computations (the replicates are parallel
@@ -72,6 +74,7 @@ public final class StudyRunner {
     /** Runs the study. */
     public Evidence run() {
         DataMatrix data = input.data();
+        axes = memoized(() -> org.treeproof.resample.PrincipalAxes.of(data));
         int n = input.samples();
         int maxK = settings.maxK();
         Metric metric = settings.metric();
@@ -88,17 +91,17 @@ public final class StudyRunner {
                 "replicates");
         NullTable nulls = data != null && settings.nullSets() > 0 ? nullCalibration(data, refs.size(), minSize) : null;
         GapResult[] gaps = data != null && settings.referenceSets() > 0
-                ? new GapRun(data, d, settings, refs, executor, progress, checkpoint).run() : null;
+                ? new GapRun(data, d, settings, refs, executor, progress, checkpoint, axes).run() : null;
         List<BranchPValues> pvalues = data != null && settings.branchPValues() != null
                 ? new MultiscaleRun(data, settings, refs, executor, progress, checkpoint).run() : null;
 
         double[][] silhouettes = new double[refs.size()][maxK - 1];
         Silhouette.Result[][] silResults = new Silhouette.Result[refs.size()][maxK - 1];
+        Silhouette.Result[] widths = NullSetTask.silhouettes(d, refs, maxK);
         for (int l = 0; l < refs.size(); l++) {
             for (int k = 2; k <= maxK; k++) {
-                SizedCut cut = refs.get(l).cut(k);
-                silResults[l][k - 2] = cut == null ? null : Silhouette.of(d, cut.clustering()).compute();
-                silhouettes[l][k - 2] = cut == null ? Double.NaN : silResults[l][k - 2].mean();
+                silResults[l][k - 2] = widths[l * (maxK - 1) + k - 2];
+                silhouettes[l][k - 2] = silResults[l][k - 2] == null ? Double.NaN : silResults[l][k - 2].mean();
             }
         }
         NullCalibration.Result calibration = nulls == null ? null : calibrate(tally, silhouettes, nulls);
@@ -185,7 +188,7 @@ public final class StudyRunner {
     private NullTable nullCalibration(DataMatrix data, int linkages, int minSize) {
         int sets = settings.nullSets();
         int maxK = settings.maxK();
-        var generator = org.treeproof.resample.ReferenceData.nullModel(settings.metric(), data);
+        var generator = org.treeproof.resample.ReferenceData.nullModel(settings.metric(), data, axes);
         double[][][] meanAri = new double[linkages][maxK - 1][sets];
         double[][][] pac = new double[linkages][maxK - 1][sets];
         double[][][] sil = new double[linkages][maxK - 1][sets];
@@ -195,67 +198,55 @@ public final class StudyRunner {
             if (kept >= sets) {
                 break;
             }
-            unpackNullRow(row, kept, meanAri, pac, sil);
+            NullSetTask.unpack(row, kept, meanAri, pac, sil);
             kept++;
             progress.step();
         }
-        for (int j = kept; j < sets; j++) {
-            long seed = Seeds.seedFor(settings.seed(), Seeds.Purpose.NULL_DATA, j);
-            // Without feature resampling only distances matter, and Euclidean ones are the same in the null's
-            // principal coordinates (an exact rotation), which skips the back-transform to the features.
-            DataMatrix nullData = settings.metric().rotationInvariant() && !settings.resamplesFeatures()
-                    ? generator.drawCoordinates(seed) : generator.draw(seed);
-            CondensedDistances nd = settings.metric().compute(nullData, kernelThreads);
-            List<ReferenceSolution> nullRefs = ReferenceSolution.all(settings.linkages(), nd, maxK, minSize, here);
-            StabilityTally t = stability(nullData, nd, nullRefs, settings.nullReplicates(),
-                    Seeds.seedFor(settings.seed(), Seeds.Purpose.NULL_REPLICATE, j), false, null);
-            for (int l = 0; l < linkages; l++) {
-                ConsensusMatrix cm = t.consensus(l);
-                for (int k = 2; k <= maxK; k++) {
-                    SizedCut cut = nullRefs.get(l).cut(k);
-                    double[] a = t.ari(l, k);
-                    meanAri[l][k - 2][j] = cut == null ? Double.NaN : mean(a, a.length);
-                    pac[l][k - 2][j] = cm.pac(k, pacLow(), pacHigh());
-                    sil[l][k - 2][j] = cut == null ? Double.NaN : Silhouette.of(nd, cut.clustering()).compute().mean();
-                }
-            }
-            checkpoint.rowDone(Checkpoint.Stage.NULL_SETS, j, packNullRow(j, meanAri, pac, sil));
+        var task = NullSetTask.of(generator, settings, minSize);
+        java.util.function.Consumer<double[][]> done = result -> {
+            int j = (int) result[0][0];
+            NullSetTask.unpack(result[1], j, meanAri, pac, sil);
+            checkpoint.rowDone(Checkpoint.Stage.NULL_SETS, j, result[1]);
             progress.step();
+        };
+        if (nullSetsSideBySide(data)) {
+            // each null set is one task, run side by side with the others; rows arrive in index order
+            executor.run(kept, sets, task, done);
+        } else {
+            for (int j = kept; j < sets; j++) {
+                done.accept(task.run(j, executor, kernelThreads, here));
+            }
         }
         return new NullTable(meanAri, pac, sil);
     }
 
-    /** One null set's results as a row: mean ARI then PAC, for every linkage and k. */
-    private static double[] packNullRow(int j, double[][][] meanAri, double[][][] pac, double[][][] sil) {
-        int l = meanAri.length;
-        int ks = meanAri[0].length;
-        double[] row = new double[3 * l * ks];
-        int t = 0;
-        for (int a = 0; a < l; a++) {
-            for (int k = 0; k < ks; k++) {
-                row[t++] = meanAri[a][k][j];
-                row[t++] = pac[a][k][j];
-                row[t++] = sil[a][k][j];
-            }
+    /**
+     * Whether null sets run as tasks side by side (always on an executor that ships them elsewhere), or one at a
+     * time with their replicates in parallel, when as many sets as threads would not fit in this JVM's heap. Only
+     * the schedule differs: every set is a pure function of its index.
+     */
+    private boolean nullSetsSideBySide(DataMatrix data) {
+        if (!(executor instanceof LocalExecutor local) || local.threads() == 1) {
+            return true;
         }
-        return row;
+        int n = data.samples();
+        int p = data.features();
+        return MemoryEstimate.of(n, p, settings, local.threads(), true).nullSetsFitSideBySide(local.threads(),
+                MemoryEstimate.nullSetBytes(n, p, settings), Runtime.getRuntime().maxMemory());
     }
 
-    private static void unpackNullRow(double[] row, int j, double[][][] meanAri, double[][][] pac,
-            double[][][] sil) {
-        int l = meanAri.length;
-        int ks = meanAri[0].length;
-        if (row.length != 3 * l * ks) {
-            throw new IllegalStateException("a kept null-set row has the wrong length");
-        }
-        int t = 0;
-        for (int a = 0; a < l; a++) {
-            for (int k = 0; k < ks; k++) {
-                meanAri[a][k][j] = row[t++];
-                pac[a][k][j] = row[t++];
-                sil[a][k][j] = row[t++];
+    private static <T> java.util.function.Supplier<T> memoized(java.util.function.Supplier<T> compute) {
+        return new java.util.function.Supplier<>() {
+            private T value;
+
+            @Override
+            public synchronized T get() {
+                if (value == null) {
+                    value = compute.get();
+                }
+                return value;
             }
-        }
+        };
     }
 
     private BigDecimal pacLow() {

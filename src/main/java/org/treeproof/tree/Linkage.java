@@ -52,10 +52,14 @@ public enum Linkage {
 
         @Override
         void update(double[] dx, double[] dy, double dxy, int nx, int ny, int[] nk, int count) {
+            // Math.max compiles without a branch (which of two distances is larger is unpredictable); it can
+            // differ from a > b ? a : b only for NaN, which distances never are, and when the larger is a zero
+            // (signed zeros), which takes the comparison, rarely
             for (int r = 0; r < count; r++) {
                 double a = dx[r];
                 double b = dy[r];
-                dy[r] = a > b ? a : b;
+                double m = Math.max(a, b);
+                dy[r] = m == 0.0 ? (a > b ? a : b) : m;
             }
         }
     },

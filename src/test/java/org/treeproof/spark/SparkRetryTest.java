@@ -50,7 +50,7 @@ class SparkRetryTest {
         }
     }
 
-    /** Spark, with one index of every run (replicates, each null set, reference sets) failing once. */
+    /** Spark, with one index of every run (replicates, null sets, reference sets) failing once. */
     record Flaky(SparkExecutor spark) implements ReplicateExecutor {
         @Override
         public <T> void run(int first, int count, ReplicateTask<T> task, Consumer<? super T> inOrder) {
@@ -64,8 +64,8 @@ class SparkRetryTest {
         byte[] local = SmallStudy.summary(new LocalExecutor(2));
         INJECTED.set(0);
         byte[] spark = SmallStudy.summary(new Flaky(new SparkExecutor(context)));
-        // one stability run, 19 null sets and one gap run each lost a first attempt
-        assertTrue(INJECTED.get() >= 21, INJECTED.get() + " failures injected");
+        // the stability run, the null sets (one run of 19 tasks) and the gap run each lost a first attempt
+        assertTrue(INJECTED.get() >= 3, INJECTED.get() + " failures injected");
         assertArrayEquals(local, spark);
     }
 }
