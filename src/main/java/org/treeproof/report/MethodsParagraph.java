@@ -122,7 +122,7 @@ public final class MethodsParagraph {
         if (model.nullCalibrated()) {
             String nullData = s.metric().binaryOnly() ? Names.nullModelProse(s.metric())
                     : f("drawn from a unimodal elliptical distribution with the data's principal axes and robust "
-                    + "scales along them (normalised median absolute deviations), as in %s, and distances from the "
+                    + "scales along them (normalised median absolute deviations, as in %s) and distances from the "
                     + "centre drawn from a power exponential law (%s) fitted to the median and 95%% quantile of the "
                     + "data's, so that heavy tails are kept and clusters are not", cite(c, Reference.LIU),
                     cite(c, Reference.GOMEZ));
