@@ -100,10 +100,10 @@ public final class RadialModel {
 
     /** {@code n} radii at the model's quantiles {@code (i + 1/2) / n}, increasing. */
     public double[] radii(int n) {
-        var g = new GammaDistribution(null, dims / (2 * beta), 1);
+        var g = gamma(dims, beta);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
-            out[i] = scale * Math.pow(2 * g.inverseCumulativeProbability((i + 0.5) / n), 1 / (2 * beta));
+            out[i] = scale * unitQuantile(g, beta, (i + 0.5) / n);
         }
         return out;
     }
@@ -113,8 +113,17 @@ public final class RadialModel {
     }
 
     private static double unitQuantile(int dims, double beta, double u) {
-        var g = new GammaDistribution(null, dims / (2 * beta), 1);
+        return unitQuantile(gamma(dims, beta), beta, u);
+    }
+
+    /** The radius quantile at {@code u} with scale 1: {@code (2 G^-1(u))^(1 / (2 beta))}, G the gamma law below. */
+    private static double unitQuantile(GammaDistribution g, double beta, double u) {
         return Math.pow(2 * g.inverseCumulativeProbability(u), 1 / (2 * beta));
+    }
+
+    /** The gamma law of {@code (r / s)^(2 beta) / 2}: shape {@code dims / (2 beta)}, scale 1. */
+    private static GammaDistribution gamma(int dims, double beta) {
+        return new GammaDistribution(null, dims / (2 * beta), 1);
     }
 
     /** The linear-interpolation sample quantile (Hyndman and Fan's type 7, numpy's default) of sorted values. */
