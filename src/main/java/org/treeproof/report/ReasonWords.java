@@ -58,6 +58,13 @@ public final class ReasonWords implements Reason.Visitor<String> {
         StructureTest t = r.test();
         String ps = f("Monte Carlo p = %s over %d null data sets; %s from a normal fit to their maxima",
                 Numbers.p(t.pValue()), t.nullSets(), fitted(t.pValueFitted()));
+        if (r.found() && !r.clustersFound()) {
+            return f("The data depart from the null data without clusters: the largest test statistic (stability "
+                    + "plus separation, standardised alike for the data and the null sets) among every linkage and k "
+                    + "is %s (%s). But no solution with clusters meets the rule's conditions, so this departure is not "
+                    + "evidence of stable, cohesive clusters; skewed or bounded features, a continuum or scattered "
+                    + "far samples can cause it.", Numbers.fixed(t.statistic(), 2), ps);
+        }
         if (r.found()) {
             return f("The data hold cluster structure beyond noise: the largest test statistic (stability plus "
                     + "separation, standardised alike for the data and the null sets) among every linkage and k is "

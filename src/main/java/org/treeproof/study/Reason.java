@@ -43,8 +43,13 @@ public sealed interface Reason {
         T criteria(Criteria r);
     }
 
-    /** The outcome of the structure test. */
-    record Structure(StructureTest test, double alpha) implements Reason {
+    /**
+     * The outcome of the structure test.
+     *
+     * @param clustersFound whether some solution with clusters passed the rule; when the test rejects the null but
+     *                      none did, the data depart from the null in a way that is not stable, cohesive clusters
+     */
+    record Structure(StructureTest test, double alpha, boolean clustersFound) implements Reason {
         public boolean found() {
             return test.pValue() <= alpha + 1e-12;
         }

@@ -95,7 +95,7 @@ public final class Recommender {
         var reasons = new ArrayList<Reason>();
         StructureTest test = evidence.structureTest();
         if (test != null) {
-            reasons.add(new Reason.Structure(test, rule.alpha()));
+            reasons.add(new Reason.Structure(test, rule.alpha(), winner != null));
         } else {
             reasons.add(new Reason.NoNullData(evidence.features() == 0));
         }

@@ -128,6 +128,23 @@ class MethodsParagraphTest {
     }
 
     @Test
+    void aRejectedNullWithoutAnyPassingSolutionIsNotCalledClusterStructure() {
+        // hand-built test outcome: statistic 5.95 beyond every one of 19 null maxima (Monte Carlo p = 1/20)
+        var t = new org.treeproof.study.StructureTest(5.95, 0.05, 2e-4, 19, 10, new double[19]);
+        var words = new ReasonWords(org.treeproof.study.DecisionRule.DEFAULT);
+        String none = words.word(new org.treeproof.study.Reason.Structure(t, 0.05, false));
+        assertTrue(none.startsWith("The data depart from the null data without clusters"), none);
+        assertTrue(none.contains("not evidence of stable, cohesive clusters"), none);
+        assertFalse(none.contains("hold cluster structure"), none);
+        String some = words.word(new org.treeproof.study.Reason.Structure(t, 0.05, true));
+        assertTrue(some.startsWith("The data hold cluster structure beyond noise"), some);
+        // not rejected (p = 0.5): no structure, whatever the rule found
+        var weak = new org.treeproof.study.StructureTest(1.2, 0.5, 0.4, 19, 10, new double[19]);
+        String no = words.word(new org.treeproof.study.Reason.Structure(weak, 0.05, false));
+        assertTrue(no.startsWith("The data hold no cluster structure beyond"), no);
+    }
+
+    @Test
     void aTentativeSolutionSaysWhatHeldItBack() {
         Studies.Study s = Studies.tentative();
         String md = MethodsParagraph.of(s.model()).render();
