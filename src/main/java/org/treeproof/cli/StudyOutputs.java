@@ -69,7 +69,26 @@ final class StudyOutputs {
         var steps = new ArrayList<String>(loaded.preparation().map(r -> r.steps())
                 .orElse(List.of(String.format(Locale.ROOT, "Read a distance table of %d samples.", loaded.samples()))));
         steps.addAll(loneFeatureWarnings(loaded));
+        steps.addAll(skewWarning(loaded));
         return steps;
+    }
+
+    /** One warning when features have a long tail on one side (the three most skewed named, then a count). */
+    static List<String> skewWarning(LoadedInput loaded) {
+        var flags = loaded.matrix().map(org.treeproof.data.SkewedFeatures::of).orElse(List.of());
+        if (flags.isEmpty()) {
+            return List.of();
+        }
+        int features = loaded.matrix().map(m -> m.features()).orElse(0);
+        var named = new ArrayList<String>();
+        for (int i = 0; i < Math.min(3, flags.size()); i++) {
+            named.add(String.format(Locale.ROOT, "%s %.1f", flags.get(i).feature(), flags.get(i).skewness()));
+        }
+        return List.of(String.format(Locale.ROOT, "Warning: %d of %d features have a long tail on one side "
+                + "(skewness beyond %.0f: %s%s). The null data are symmetric, so pieces of such a tail can pass for "
+                + "clusters; for intensities, abundances or counts, a log transform (--log2) before scaling is the "
+                + "usual remedy.", flags.size(), features, org.treeproof.data.SkewedFeatures.LIMIT,
+                String.join(", ", named), flags.size() > 3 ? ", ..." : ""));
     }
 
     /** A warning per feature that alone puts a sample far out (at most five named, then a count). */

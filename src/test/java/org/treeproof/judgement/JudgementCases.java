@@ -61,6 +61,14 @@ public final class JudgementCases {
                     + " the tails of the one population, so a split that sheds them is k = 1 plus outliers.")),
             Map.entry("one-far-point", Expected.none(NO_GROUPS + " The one sample 12 standard units out is an outlier,"
                     + " not a second cluster.")),
+            Map.entry("skewed-noise", Expected.none(NO_GROUPS + " Log-normal features, as expression levels and"
+                    + " abundances often are: a long right tail is skew, not a group.")),
+            Map.entry("likert-noise", Expected.none(NO_GROUPS + " Independent answers on a 1-5 scale: ties and a"
+                    + " discrete grid are not respondent types.")),
+            Map.entry("composition-noise", Expected.none(NO_GROUPS + " One Dirichlet law: compositions are bounded"
+                    + " and closed (parts sum to 1), which is shape, not groups.")),
+            Map.entry("scattered-far-samples", Expected.none(NO_GROUPS + " 5% of the samples lie 8-14 standard units"
+                    + " out in random directions: each is an outlier, and together they are no cluster.")),
             Map.entry("3-groups-3-far-points", new Expected(List.of(new Structure(Set.of(3), SUPPORTED, 30, 0.95,
                     true)), "Three groups (60, 50, 40) about 8 noise SDs apart after z-scoring, plus 3 points 25 units"
                     + " out: the answer is the 3 groups, and the far points are outliers set aside, not clusters.")),

@@ -62,6 +62,18 @@ public final class SyntheticSets {
         for (int s = 1; s <= 2; s++) {
             sets.add(oneFarPoint(s, d + 4000 + s));
         }
+        for (int s = 1; s <= 2; s++) {
+            sets.add(skewedNoise(s, d + 12_000 + s));
+        }
+        for (int s = 1; s <= 2; s++) {
+            sets.add(likertNoise(s, d + 13_000 + s));
+        }
+        for (int s = 1; s <= 2; s++) {
+            sets.add(compositionNoise(s, d + 14_000 + s));
+        }
+        for (int s = 1; s <= 2; s++) {
+            sets.add(scatteredFarSamples(s, d + 15_000 + s));
+        }
         sets.add(groupsWithFarPoints(d + 5001, new int[] {60, 50, 40}, 8, 3));
         sets.add(groupsWithFarPoints(d + 5002, new int[] {80, 70}, 6, 2));
         sets.add(wideGroups("wide-3-groups-p200", d + 301, new int[] {50, 45, 40}, 200, 24, 3.0));
@@ -167,6 +179,128 @@ public final class SyntheticSets {
         x[n] = times(a, scaled(unit(rng, p), 12));
         cls[n] = FAR_POINT;
         return rows("one-far-point-" + index, shuffled(rng, x, cls), cls);
+    }
+
+    /**
+     * One right-skewed population, as expression levels or abundances often are: each feature exp(s_j z_j) of a
+     * correlated Gaussian z, with s_j uniform in 0.5-1.2 (log-normal marginals); n 150-220, p 5-10. The long right
+     * tails give far samples by chance, no groups.
+     */
+    static Set skewedNoise(int index, long rngSeed) {
+        var rng = new SplittableRandom(rngSeed);
+        int n = 150 + rng.nextInt(71);
+        int p = 5 + rng.nextInt(6);
+        double[][] a = mixing(rng, p);
+        double[] spread = new double[p];
+        for (int j = 0; j < p; j++) {
+            spread[j] = 0.5 + 0.7 * rng.nextDouble();
+        }
+        double[][] x = new double[n][];
+        for (int i = 0; i < n; i++) {
+            double[] z = times(a, gaussians(rng, p));
+            for (int j = 0; j < p; j++) {
+                z[j] = Math.exp(spread[j] * z[j] / Math.sqrt(rowSquares(a, j)));
+            }
+            x[i] = z;
+        }
+        return rows("skewed-noise-" + index, x, constantClass(n, "population"));
+    }
+
+    /**
+     * Survey answers without respondent types: n 150-250 respondents answer 10-20 items on a 1-5 scale, each item
+     * with its own answer frequencies (weights 0.5 + U(0, 1), normalised) and independently of every other item.
+     * Many ties, no groups.
+     */
+    static Set likertNoise(int index, long rngSeed) {
+        var rng = new SplittableRandom(rngSeed);
+        int n = 150 + rng.nextInt(101);
+        int p = 10 + rng.nextInt(11);
+        double[][] cumulative = new double[p][5];
+        for (int j = 0; j < p; j++) {
+            double total = 0;
+            for (int c = 0; c < 5; c++) {
+                total += 0.5 + rng.nextDouble();
+                cumulative[j][c] = total;
+            }
+            for (int c = 0; c < 5; c++) {
+                cumulative[j][c] /= total;
+            }
+        }
+        double[][] x = new double[n][p];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < p; j++) {
+                double u = rng.nextDouble();
+                int c = 0;
+                while (c < 4 && u >= cumulative[j][c]) {
+                    c++;
+                }
+                x[i][j] = c + 1;
+            }
+        }
+        return rows("likert-noise-" + index, x, constantClass(n, "population"));
+    }
+
+    /**
+     * Compositions without groups, as relative abundances are: 6-12 parts drawn from one Dirichlet law with integer
+     * parameters 2-5 (each part a sum of that many unit exponentials, divided by the row's total); n 150-220.
+     * Bounded, closed data, no groups.
+     */
+    static Set compositionNoise(int index, long rngSeed) {
+        var rng = new SplittableRandom(rngSeed);
+        int n = 150 + rng.nextInt(71);
+        int p = 6 + rng.nextInt(7);
+        int[] shape = new int[p];
+        for (int j = 0; j < p; j++) {
+            shape[j] = 2 + rng.nextInt(4);
+        }
+        double[][] x = new double[n][p];
+        for (int i = 0; i < n; i++) {
+            double total = 0;
+            for (int j = 0; j < p; j++) {
+                double g = 0;
+                for (int e = 0; e < shape[j]; e++) {
+                    g -= Math.log(1 - rng.nextDouble());
+                }
+                x[i][j] = g;
+                total += g;
+            }
+            for (int j = 0; j < p; j++) {
+                x[i][j] /= total;
+            }
+        }
+        return rows("composition-noise-" + index, x, constantClass(n, "population"));
+    }
+
+    /**
+     * One correlated Gaussian population (n 150-200, p 4-8) and 5% more samples scattered 8-14 standard units from
+     * its centre in random directions: far samples that are not a group of their own.
+     */
+    static Set scatteredFarSamples(int index, long rngSeed) {
+        var rng = new SplittableRandom(rngSeed);
+        int n = 150 + rng.nextInt(51);
+        int p = 4 + rng.nextInt(5);
+        int far = (int) Math.round(0.05 * n);
+        double[][] a = mixing(rng, p);
+        double[][] x = new double[n + far][];
+        String[] cls = new String[n + far];
+        for (int i = 0; i < n; i++) {
+            x[i] = times(a, gaussians(rng, p));
+            cls[i] = "population";
+        }
+        for (int f = 0; f < far; f++) {
+            x[n + f] = times(a, scaled(unit(rng, p), 8 + 6 * rng.nextDouble()));
+            cls[n + f] = FAR_POINT;
+        }
+        return rows("scattered-far-samples-" + index, shuffled(rng, x, cls), cls);
+    }
+
+    /** The sum of squares of row {@code j} of {@code a}: the variance of feature j of {@code a z}. */
+    private static double rowSquares(double[][] a, int j) {
+        double s = 0;
+        for (double v : a[j]) {
+            s += v * v;
+        }
+        return s;
     }
 
     /**
