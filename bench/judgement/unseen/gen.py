@@ -1,0 +1,53 @@
+"""Fourteen seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
+
+Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202; writes OUTDIR/<name>.csv, samples in rows)
+"""
+import os
+import sys
+
+import numpy as np
+
+OUT = sys.argv[1] if len(sys.argv) > 1 else "."
+os.makedirs(OUT, exist_ok=True)
+
+
+def save(name,X):
+    n,p=X.shape
+    with open(os.path.join(OUT, name + ".csv"), "w") as f:
+        f.write("id,"+",".join(f"f{j+1:03d}" for j in range(p))+"\n")
+        for i in range(n): f.write(f"s{i+1:04d},"+",".join(f"{v:.5f}" for v in X[i])+"\n")
+r=np.random.default_rng(20261202)
+# 1 two groups with t3 within noise
+X=r.standard_t(3,(200,8)); X[:100,:3]+=6; save("t3-two-groups",X)
+# 2 wide gaussian noise
+save("wide-noise-p200",r.standard_normal((100,200)))
+# 3 wide heavy-tailed noise
+save("wide-t3-noise-p50",r.standard_t(3,(150,50)))
+# 4 unequal variances 3 groups
+X=np.vstack([r.standard_normal((80,6))*3, r.standard_normal((50,6))*0.7+[8,0,0,0,0,0], r.standard_normal((50,6))*0.7+[0,8,0,0,0,0]]); save("unequal-spread-3",X)
+# 6 moderate overlap 2 groups
+X=r.standard_normal((160,5)); X[:80,0]+=3.5; save("overlap-2-groups",X)
+# 7 uniform 10D
+save("uniform-10d",r.uniform(size=(150,10)))
+# 8 gaussian + 5% scattered far outliers
+X=r.standard_normal((190,6)); O=r.standard_normal((10,6)); O=O/np.linalg.norm(O,axis=1)[:,None]*r.uniform(8,14,(10,1)); save("gauss-5pct-outliers",np.vstack([X,O]))
+# 9 log-normal skewed noise
+save("lognormal-noise",np.exp(r.standard_normal((180,8))))
+# 10 likert noise
+save("likert-noise",r.integers(1,6,(200,15)).astype(float))
+# 11 likert 3 types
+P=np.array([[0.05,0.1,0.2,0.3,0.35],[0.35,0.3,0.2,0.1,0.05],[0.1,0.2,0.4,0.2,0.1]])
+types=np.repeat([0,1,2],[70,70,60]); X=np.zeros((200,15))
+for i,t in enumerate(types):
+    for j in range(15):
+        pr=P[t] if j<10 else P[2]
+        X[i,j]=r.choice(5,p=pr)+1
+save("likert-3-types",X)
+# 12 gaussian noise n=400 p=3 (larger n)
+save("gauss-n400-p3",r.standard_normal((400,3)))
+# 13 microbial-ish: dirichlet compositions no groups
+save("dirichlet-noise",r.dirichlet(np.ones(10)*2,200))
+# 14 mixture 2 groups one tiny (8 of 300) close-ish
+X=r.standard_normal((300,5)); X[:8]+= [6,6,0,0,0]; save("tiny-group-8of300",X)
+# 15 batch: one population, two batches shifted by 1 sd in all 20 features
+X=r.standard_normal((160,20)); X[:80]+=0.8; save("batch-shift",X)
