@@ -89,7 +89,8 @@ public class SparkBench {
         }
         var provenance = new SummaryJson.Provenance("treeproof", "bench", "generated", "0".repeat(64), List.of(),
                 List.of(), null);
-        return new SummaryJson(e, Recommender.of(e, DecisionRule.DEFAULT).recommend(), provenance).toBytes();
+        var rec = Recommender.of(e, DecisionRule.DEFAULT).recommend();
+        return new SummaryJson(e, rec, provenance, new org.treeproof.report.ReasonWords(rec.rule())::word).toBytes();
     }
 
     public static void main(String[] args) {
