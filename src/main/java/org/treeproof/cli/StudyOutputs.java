@@ -99,8 +99,9 @@ final class StudyOutputs {
             var f = flags.get(i);
             out.add(String.format(Locale.ROOT, "Warning: feature %s alone puts sample %s %.0f standard deviations "
                     + "from its mean%s, which can split that sample off as an outlier whatever the other features "
-                    + "say; a nearly constant feature scaled to unit variance does this. To avoid it, drop such "
-                    + "features (--top-variable keeps the most variable ones) or use --scale center or none.",
+                    + "say; a nearly constant feature scaled to unit variance, or one with a long tail, does this. To "
+                    + "avoid it, drop such features (--top-variable keeps the most variable ones), use --scale center or "
+                    + "none, or log-transform a long tail.",
                     f.feature(), f.sample(), f.sds(), f.samples() > 1
                             ? String.format(Locale.ROOT, " (%d samples lie beyond %.0f)", f.samples(),
                                     org.treeproof.data.LoneFeatureOutliers.LIMIT) : ""));

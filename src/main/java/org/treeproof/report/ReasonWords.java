@@ -56,24 +56,20 @@ public final class ReasonWords implements Reason.Visitor<String> {
     @Override
     public String structure(Reason.Structure r) {
         StructureTest t = r.test();
+        String largest = f("the largest test statistic (stability plus separation, standardised alike for the data "
+                + "and the null sets) among every linkage and k is %s", Numbers.fixed(t.statistic(), 2));
         String ps = f("Monte Carlo p = %s over %d null data sets; %s from a normal fit to their maxima",
                 Numbers.p(t.pValue()), t.nullSets(), fitted(t.pValueFitted()));
-        if (r.found() && !r.clustersFound()) {
-            return f("The data depart from the null data without clusters: the largest test statistic (stability "
-                    + "plus separation, standardised alike for the data and the null sets) among every linkage and k "
-                    + "is %s (%s). But no solution with clusters meets the rule's conditions, so this departure is not "
-                    + "evidence of stable, cohesive clusters; skewed or bounded features, a continuum or scattered "
-                    + "far samples can cause it.", Numbers.fixed(t.statistic(), 2), ps);
+        if (!r.found()) {
+            return f("The data hold no cluster structure beyond what data without clusters give: %s, which null data "
+                    + "sets reach too (%s).", largest, ps);
         }
-        if (r.found()) {
-            return f("The data hold cluster structure beyond noise: the largest test statistic (stability plus "
-                    + "separation, standardised alike for the data and the null sets) among every linkage and k is "
-                    + "%s (%s).", Numbers.fixed(t.statistic(), 2), ps);
+        if (!r.clustersFound()) {
+            return f("The data depart from the null data without clusters: %s (%s). But no solution with clusters "
+                    + "meets the rule's conditions, so this departure is not evidence of stable, cohesive clusters; "
+                    + "skewed or bounded features, a continuum or scattered far samples can cause it.", largest, ps);
         }
-        return f("The data hold no cluster structure beyond what data without clusters give: the largest test "
-                + "statistic (stability plus separation, standardised alike for the data and the null sets) among "
-                + "every linkage and k is %s, which null data sets reach too (%s).",
-                Numbers.fixed(t.statistic(), 2), ps);
+        return f("The data hold cluster structure beyond noise: %s (%s).", largest, ps);
     }
 
     private static String fitted(double p) {

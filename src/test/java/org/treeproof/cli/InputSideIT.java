@@ -109,6 +109,35 @@ class InputSideIT {
     }
 
     @Test
+    void stronglySkewedFeaturesAreNamedInThePreparationWithTheLogTransform() throws Exception {
+        // f1 = exp(2 z): log-normal with sigma 2, skewness far beyond 2; f2 and f3 Gaussian around 10
+        var rng = new java.util.SplittableRandom(3);
+        var sb = new StringBuilder("id,f1,f2,f3\n");
+        for (int i = 0; i < 120; i++) {
+            sb.append(String.format(java.util.Locale.ROOT, "s%d,%.6f,%.6f,%.6f%n", i, Math.exp(2 * rng.nextGaussian()),
+                    10 + rng.nextGaussian(), 10 + rng.nextGaussian()));
+        }
+        Path data = Files.writeString(tmp.resolve("skewed.csv"), sb.toString());
+        String[] quick = {"--replicates", "10", "--null-sets", "0", "--reference-sets", "0", "--max-k", "4"};
+        Jar.Result r = assess(concat(new String[] {data.toString(), "--out", "skewed"}, quick));
+        assertEquals(0, r.exit(), r.err());
+        String steps = summary("skewed").path("input").path("preparation").toString();
+        assertTrue(steps.contains("Warning: 1 of 3 features have a long tail on one side (skewness beyond 2: f1 "), steps);
+        assertTrue(steps.contains("--log2"), steps);
+        assertTrue(Files.readString(tmp.resolve("skewed").resolve("methods.md")).contains("long tail on one side"));
+        // the same table with --log2: f1 becomes log2(1 + exp(2 z)), about a softplus of z, no longer skewed beyond 2
+        r = assess(concat(new String[] {data.toString(), "--out", "logged", "--log2"}, quick));
+        assertEquals(0, r.exit(), r.err());
+        assertFalse(summary("logged").path("input").path("preparation").toString().contains("long tail"));
+    }
+
+    private static String[] concat(String[] a, String[] b) {
+        String[] out = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
+    }
+
+    @Test
     void aTableWithoutIdsIsStudiedWithRowNumbersAndASepLineIsHonoured() throws Exception {
         List<String> lines = Files.readAllLines(table("continuous.csv", false));
         var noIds = new StringBuilder();
