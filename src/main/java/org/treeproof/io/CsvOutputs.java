@@ -90,10 +90,10 @@ public final class CsvOutputs {
             for (KEvidence e : le.byK()) {
                 ReplicateSummary a = e.stability().ari();
                 NullStability ns = e.stability().nullModel();
-                int doubtful = 0;
+                var assessment = r.assessment(le.linkage(), e.k());
+                int doubtful = assessment.facts().doubtfulClusters();
                 int dissolved = 0;
                 for (ClusterEvidence c : e.clusters()) {
-                    doubtful += c.status() == JaccardStability.Status.DOUBTFUL ? 1 : 0;
                     dissolved += c.status() == JaccardStability.Status.DISSOLVED
                             || c.status() == JaccardStability.Status.NOT_ASSESSED ? 1 : 0;
                 }
@@ -125,7 +125,7 @@ public final class CsvOutputs {
                 row.add(String.valueOf(doubtful));
                 row.add(String.valueOf(dissolved));
                 row.add(String.valueOf(e.outliers()));
-                row.add(r.assessment(le.linkage(), e.k()).verdict().id());
+                row.add(assessment.verdict().id());
                 rows.add(row);
             }
         }

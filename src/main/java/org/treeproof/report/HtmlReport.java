@@ -190,7 +190,7 @@ public final class HtmlReport {
         var refs = new java.util.ArrayList<>(List.of(Reference.CALINSKI_HARABASZ, Reference.DAVIES_BOULDIN,
                 Reference.DUNN, Reference.GOMEZ, Reference.HENNIG, Reference.HOPE, Reference.HUBERT_ARABIE, Reference.KAUFMAN_ROUSSEEUW,
                 Reference.LIU, Reference.MONTI, Reference.MULLNER, Reference.MURTAGH_LEGENDRE, Reference.ROUSSEEUW,
-                Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD, Reference.WESTFALL_YOUNG));
+                Reference.ROUSSEEUW_CROUX, Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD, Reference.WESTFALL_YOUNG));
         model.explained().ifPresent(x -> refs.addAll(ExplainProse.references(x)));
         for (Reference r : refs) {
             if (r.doi().isEmpty()) {

@@ -122,10 +122,11 @@ public final class MethodsParagraph {
         if (model.nullCalibrated()) {
             String nullData = s.metric().binaryOnly() ? Names.nullModelProse(s.metric())
                     : f("drawn from a unimodal elliptical distribution with the data's principal axes and robust "
-                    + "scales along them (normalised median absolute deviations, as in %s) and distances from the "
+                    + "scales along them (as in %s, but the scale Qn of %s, which two groups along an axis do not "
+                    + "inflate) and distances from the "
                     + "centre drawn from a power exponential law (%s) fitted to the median and 95%% quantile of the "
                     + "data's, so that heavy tails are kept and clusters are not", cite(c, Reference.LIU),
-                    cite(c, Reference.GOMEZ));
+                    cite(c, Reference.ROUSSEEUW_CROUX), cite(c, Reference.GOMEZ));
             out.add(f("To tell structure from noise, the same procedure (%d replicates each) was applied to %d null "
                     + "data sets %s. For each linkage and k, the excess "
                     + "over the null was the mean ARI and the average silhouette, each standardised by the null sets' "
@@ -172,8 +173,8 @@ public final class MethodsParagraph {
             return f("A solution was called supported when it beat the null data (adjusted p ≤ %s), every cluster "
                     + "was cohesive (its members' mean silhouette width above 0; %s) and every cluster was stable "
                     + "(mean Jaccard at least %s; %s); tentative when it beat the null data, every cluster was "
-                    + "cohesive and no cluster dissolved (every mean Jaccard above %s) but a cluster was only "
-                    + "doubtful; and unsupported otherwise. No threshold on the average silhouette entered the "
+                    + "cohesive and no cluster dissolved (every mean Jaccard above %s) but one cluster, and only "
+                    + "one, was doubtful; and unsupported otherwise. No threshold on the average silhouette entered the "
                     + "verdict; it was read only as a description (%s). Among the solutions the better verdict was "
                     + "preferred, then the larger excess over the null, the higher smallest cluster Jaccard and the "
                     + "higher cophenetic correlation, leaving out supported solutions that existed over less than half "

@@ -44,6 +44,8 @@ public final class ReasonWords implements Reason.Visitor<String> {
             case NO_CLUSTER_DISSOLVES -> f("no cluster dissolves (every mean Jaccard above %s)",
                     Numbers.plain(rule.dissolvedJaccard()));
             case EVERY_CLUSTER_COHESIVE -> "every cluster is cohesive (its members' mean silhouette width above 0)";
+            case AT_MOST_ONE_DOUBTFUL -> f("at most one cluster is only doubtful (mean Jaccard from %s to %s), the "
+                    + "others stable", Numbers.plain(rule.dissolvedJaccard()), Numbers.plain(rule.stableJaccard()));
             case EVERY_CLUSTER_STABLE -> f("every cluster is stable (mean Jaccard at least %s)",
                     Numbers.plain(rule.stableJaccard()));
             case REPRODUCED -> f("replicates reproduce the solution (mean ARI at least %s)",

@@ -70,6 +70,9 @@ public record Reference(String cite, String entry, String doi) {
             "Liu, Y., Hayes, D. N., Nobel, A. & Marron, J. S. (2008). Statistical significance of clustering for "
                     + "high-dimension, low-sample size data. Journal of the American Statistical Association, 103, "
                     + "1281–1293.", "10.1198/016214508000000454");
+    static final Reference ROUSSEEUW_CROUX = new Reference("Rousseeuw & Croux, 1993",
+            "Rousseeuw, P. J. & Croux, C. (1993). Alternatives to the median absolute deviation. Journal of the "
+                    + "American Statistical Association, 88, 1273–1283.", "10.1080/01621459.1993.10476408");
     static final Reference GOMEZ = new Reference("Gómez et al., 1998",
             "Gómez, E., Gómez-Villegas, M. A. & Marín, J. M. (1998). A multivariate generalization of the power "
                     + "exponential family of distributions. Communications in Statistics - Theory and Methods, 27, "

@@ -337,8 +337,6 @@ public final class ReferenceData implements Serializable {
         return new ReferenceData(observed, Shape.GAUSSIAN, null, null, sd, axes.axes(), axes.means());
     }
 
-    /** The normal consistency factor of the median absolute deviation, 1 / Φ⁻¹(3/4). */
-    private static final double MAD_TO_SD = 1.482602218505602;
     /** The elliptical null of {@code observed}, computing its axes. */
     public static ReferenceData ellipticalNull(DataMatrix observed) {
         return ellipticalNull(observed, PrincipalAxes.of(observed));
@@ -346,9 +344,8 @@ public final class ReferenceData implements Serializable {
 
     /**
      * A unimodal elliptical null shaped like {@code observed} in everything but clusters: the data's principal
-     * axes; along each axis a robust scale, the normalised median absolute deviation (MAD × 1.4826; F. R. Hampel,
-     * J. Am. Stat. Assoc. 69 (1974) 383-393, doi:10.1080/01621459.1974.10482962) of the data's scores on it (an
-     * axis whose MAD is 0 keeps its SD); and a radial law fitted to the data's radii measured in those scaled axes
+     * axes; along each axis a robust scale, {@link QnScale Qn} (Rousseeuw and Croux 1993) of the data's scores on it
+     * (an axis whose Qn is 0 keeps its SD); and a radial law fitted to the data's radii measured in those scaled axes
      * ({@link RadialModel}: a power exponential law matching their median and 95% quantile). Each null sample lies
      * in a uniformly random direction at a radius drawn from that law.
      *
@@ -362,6 +359,18 @@ public final class ReferenceData implements Serializable {
      * own sample, which then beats it by its chance elongation alone (seen on Gaussian noise). Using a fitted
      * radial law rather than the data's own radii is our choice: the own radii of a small, far group return in
      * the null as a shell of far samples, which linkages group into clusters as well-separated as the group.
+     *
+     * <p><b>Why Qn.</b> Any scale consistent at the null serves the test, since under the null hypothesis the data
+     * are such a distribution; what differs is how the scale reads an axis along which the data are <i>not</i>
+     * unimodal. There the normalised median absolute deviation (F. R. Hampel, J. Am. Stat. Assoc. 69 (1974)
+     * 383-393, doi:10.1080/01621459.1974.10482962), used before, measures how far the modes lie from the median
+     * and exceeds even the SD (two modes ±5 apart with SD 1 in each: MAD × 1.4826 ≈ 7.2, SD ≈ 5.1, in {@code QnScaleTest}'s sample), so the null
+     * was stretched along the very axis that separates two groups and split there as reproducibly as the data
+     * (seen on two groups in t3 noise and on a processing batch: no verdict). Qn, the quartile of the pairwise
+     * distances, falls among distances within a mode (there ≈ 2.2), so the null is as wide as one group along
+     * that axis; at the normal it is consistent and more efficient than the MAD (82% against 37%, the paper's
+     * figures), and it is as robust to far samples (50% breakdown). A common factor on every axis cancels in the
+     * fitted radial law, so only the scales' ratios matter.
      *
      * <p>The law is represented by {@code n} radii at its quantiles {@code (i + 1/2) / n}; each sample's
      * coordinates take {@code rank} normal variates and then one {@code nextInt} for its radius, in that order,
@@ -379,8 +388,8 @@ public final class ReferenceData implements Serializable {
             for (int i = 0; i < n; i++) {
                 column[i] = scores[i * r + c];
             }
-            double mad = MAD_TO_SD * mad(column);
-            sd[c] = mad > 0 ? mad : Math.sqrt(var[c]);
+            double qn = QnScale.of(column);
+            sd[c] = qn > 0 ? qn : Math.sqrt(var[c]);
         }
         double[] radii = new double[n];
         for (int i = 0; i < n; i++) {
@@ -400,24 +409,6 @@ public final class ReferenceData implements Serializable {
             radii = model.radii(n);
         }
         return new ReferenceData(observed, Shape.ELLIPTICAL, null, null, sd, axes.axes(), axes.means(), radii);
-    }
-
-    /** The median absolute deviation from the median; sorts {@code v} in place. */
-    private static double mad(double[] v) {
-        if (v.length == 0) {
-            return 0;
-        }
-        double med = median(v);
-        for (int i = 0; i < v.length; i++) {
-            v[i] = Math.abs(v[i] - med);
-        }
-        return median(v);
-    }
-
-    private static double median(double[] v) {
-        java.util.Arrays.sort(v);
-        int m = v.length / 2;
-        return v.length % 2 == 1 ? v[m] : (v[m - 1] + v[m]) / 2;
     }
 
     private static void requireMatch(DataMatrix observed, PrincipalAxes axes) {

@@ -36,6 +36,7 @@ public record Assessment(Facts facts, Verdict verdict, List<Condition> met, List
      * @param worstJaccard the smallest mean Jaccard of its clusters
  * @param allStable    every cluster's Jaccard status is stable (Hennig's band, decided by the score)
  * @param noneDissolved no cluster's status is dissolved or not assessed
+     * @param doubtfulClusters clusters whose Jaccard status is doubtful (between Hennig's dissolved and stable bands)
      * @param silhouette   average silhouette of the clustered samples
      * @param leastClusterSilhouette the smallest mean silhouette width of one cluster's members (NaN when there
      *                     are no widths)
@@ -45,6 +46,6 @@ public record Assessment(Facts facts, Verdict verdict, List<Condition> met, List
      * @param cophenetic   the linkage tree's cophenetic correlation
      */
     public record Facts(Linkage linkage, int k, int outliers, double meanAri, double worstJaccard, boolean allStable,
-            boolean noneDissolved, double silhouette, double leastClusterSilhouette, boolean calibrated, double excess, double pAdjusted, double cophenetic) {
+            boolean noneDissolved, int doubtfulClusters, double silhouette, double leastClusterSilhouette, boolean calibrated, double excess, double pAdjusted, double cophenetic) {
     }
 }

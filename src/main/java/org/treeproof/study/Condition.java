@@ -18,6 +18,12 @@ public enum Condition {
      * samples, such as far samples that a linkage groups together, not a group.
      */
     EVERY_CLUSTER_COHESIVE("every-cluster-cohesive"),
+    /**
+     * At most one cluster is only doubtful (between Hennig's dissolved and stable bands) and every other is stable:
+     * a solution most of whose clusters the replicates recover only in part is not a tentative finding but an
+     * unstable one.
+     */
+    AT_MOST_ONE_DOUBTFUL("at-most-one-doubtful"),
     /** Every cluster is stable: every cluster's mean Jaccard is in Hennig's stable band. */
     EVERY_CLUSTER_STABLE("every-cluster-stable"),
     /** Without null data only: the replicates reproduce the solution, mean ARI at least the stable band. */

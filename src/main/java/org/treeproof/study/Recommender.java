@@ -39,8 +39,9 @@ public final class Recommender {
         boolean allStable = e.clusters().stream().allMatch(c -> c.status() == JaccardStability.Status.STABLE);
         boolean noneDissolved = e.clusters().stream().noneMatch(c -> c.status() == JaccardStability.Status.DISSOLVED
                 || c.status() == JaccardStability.Status.NOT_ASSESSED);
+        int doubtful = (int) e.clusters().stream().filter(c -> c.status() == JaccardStability.Status.DOUBTFUL).count();
         return new Assessment.Facts(le.linkage(), e.k(), e.outliers(), e.stability().ari().mean(), e.worstJaccard(),
-                allStable, noneDissolved, e.silhouette(), leastClusterSilhouette(e), ns != null, ns == null ? Double.NaN : ns.excess(),
+                allStable, noneDissolved, doubtful, e.silhouette(), leastClusterSilhouette(e), ns != null, ns == null ? Double.NaN : ns.excess(),
                 ns == null ? Double.NaN : ns.pValueAdjusted(), le.copheneticCorrelation());
     }
 

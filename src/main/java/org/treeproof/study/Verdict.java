@@ -2,9 +2,12 @@ package org.treeproof.study;
 
 /** How well the evidence supports a cluster solution; see {@link DecisionRule} for the exact rule. */
 public enum Verdict {
-    /** Stability beats the null, every cluster is stable, and the clusters are well separated. */
+    /** Beats the null, and every cluster is cohesive and stable. */
     SUPPORTED("supported"),
-    /** Stability beats the null and no cluster dissolves, but a cluster is only doubtful or the fit is weak. */
+    /**
+     * Beats the null, every cluster is cohesive, and one cluster is only doubtful, the others stable; without null
+     * data, the best verdict there is (every cluster stable, reproduced and separated).
+     */
     TENTATIVE("tentative"),
     /** No solution with more than one cluster is convincing. */
     UNSUPPORTED("unsupported");

@@ -78,7 +78,7 @@ class MethodsParagraphTest {
         }
         assertEquals(20, st.replicates());
         assertTrue(md.contains("The evidence supported k = 3 clusters with "
-                + s.recommendation().linkage().id() + " linkage"), md);
+                + Names.linkage(s.recommendation().linkage()) + " linkage"), md);
     }
 
     @Test
@@ -92,7 +92,8 @@ class MethodsParagraphTest {
             {"Monti et al., 2003", "10.1023/A:1023949509487"}, {"Şenbabaoğlu et al., 2014", "10.1038/srep06207"},
             {"Hennig, 2007", "10.1016/j.csda.2006.11.025"}, {"Rousseeuw, 1987", "10.1016/0377-0427(87)90125-7"},
             {"Tibshirani et al., 2001", "10.1111/1467-9868.00293"},
-            {"Kaufman & Rousseeuw, 1990", "10.1002/9780470316801"}, {"Liu et al., 2008", "10.1198/016214508000000454"}};
+            {"Kaufman & Rousseeuw, 1990", "10.1002/9780470316801"}, {"Liu et al., 2008", "10.1198/016214508000000454"},
+            {"Rousseeuw & Croux, 1993", "10.1080/01621459.1993.10476408"}};
         for (String[] r : required) {
             assertTrue(text.contains(r[0]), "not cited: " + r[0]);
             assertTrue(refs.contains("https://doi.org/" + r[1]), "no DOI for " + r[0]);
