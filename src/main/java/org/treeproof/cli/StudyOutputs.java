@@ -130,7 +130,7 @@ final class StudyOutputs {
         var provenance = new SummaryJson.Provenance("treeproof", Main.toolVersion(), loaded.source().path(),
                 loaded.source().sha256(), preparationSteps(), inputOptions(), labelsSummary(labels));
         return new SummaryJson(evidence, rec, provenance, new org.treeproof.report.ReasonWords(rec.rule())::word,
-                explanation);
+                explanation, org.treeproof.report.ReasonWords::covariate);
     }
 
     RunInfo runInfo() {

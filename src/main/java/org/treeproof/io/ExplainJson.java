@@ -21,10 +21,11 @@ final class ExplainJson {
     }
 
     /** The recommendation's reasons followed by the sentence of each flagged covariate. */
-    static List<String> withFlags(List<String> reasons, Explanation e) {
+    static List<String> withFlags(List<String> reasons, Explanation e,
+            java.util.function.Function<CovariateFlag, String> flagWording) {
         var out = new ArrayList<>(reasons);
         for (CovariateFlag f : e.flags()) {
-            out.add(f.reason());
+            out.add(flagWording.apply(f));
         }
         return out;
     }

@@ -34,6 +34,7 @@ public final class SummaryJson {
     private final Recommendation recommendation;
     private final Provenance provenance;
     private final java.util.function.Function<org.treeproof.study.Reason, String> wording;
+    private final java.util.function.Function<org.treeproof.explain.CovariateFlag, String> flagWording;
     private final Explanation explanation;
 
     /**
@@ -69,13 +70,18 @@ public final class SummaryJson {
      */
     public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
             java.util.function.Function<org.treeproof.study.Reason, String> wording) {
-        this(evidence, recommendation, provenance, wording, null);
+        this(evidence, recommendation, provenance, wording, null, null);
     }
 
-    /** With the explanation of the recommended solution ({@code null} for none): the {@code explain} block. */
+    /**
+     * With the explanation of the recommended solution ({@code null} for none): the {@code explain} block, and the
+     * report's sentence for each flagged covariate ({@code flagWording}, needed when there is an explanation).
+     */
     public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
-            java.util.function.Function<org.treeproof.study.Reason, String> wording, Explanation explanation) {
+            java.util.function.Function<org.treeproof.study.Reason, String> wording, Explanation explanation,
+            java.util.function.Function<org.treeproof.explain.CovariateFlag, String> flagWording) {
         this.wording = wording;
+        this.flagWording = flagWording;
         this.evidence = evidence;
         this.recommendation = recommendation;
         this.provenance = provenance;
@@ -325,7 +331,7 @@ public final class SummaryJson {
         g.writeArrayFieldStart("reasons");
         // a covariate the clusters follow leads the reasons (the explanation's own sentence)
         if (explanation != null) {
-            for (String flag : ExplainJson.withFlags(List.of(), explanation)) {
+            for (String flag : ExplainJson.withFlags(List.of(), explanation, flagWording)) {
                 g.writeStartObject();
                 g.writeStringField("kind", "covariate-followed");
                 g.writeStringField("text", flag);

@@ -122,8 +122,8 @@ public final class MethodsParagraph {
         if (model.nullCalibrated()) {
             String nullData = s.metric().binaryOnly() ? Names.nullModelProse(s.metric())
                     : f("drawn from a unimodal elliptical distribution with the data's principal axes and robust "
-                    + "scales along them (as in %s, but the scale Qn of %s, which two groups along an axis do not "
-                    + "inflate) and distances from the "
+                    + "scales along them (as in %s, but measured by the estimator Qn of %s, the first quartile of the "
+                    + "pairwise distances, so that two groups along an axis do not widen the null) and distances from the "
                     + "centre drawn from a power exponential law (%s) fitted to the median and 95%% quantile of the "
                     + "data's, so that heavy tails are kept and clusters are not", cite(c, Reference.LIU),
                     cite(c, Reference.ROUSSEEUW_CROUX), cite(c, Reference.GOMEZ));

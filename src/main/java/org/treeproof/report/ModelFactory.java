@@ -129,7 +129,7 @@ final class ModelFactory {
         var reasons = new ArrayList<String>();
         // a covariate the clusters largely follow leads the reasons: it is what a reviewer checks first
         if (explanation != null) {
-            explanation.flags().forEach(flag -> reasons.add(flag.reason()));
+            explanation.flags().forEach(flag -> reasons.add(ReasonWords.covariate(flag)));
         }
         reasons.addAll(reasons());
         var outliers = java.util.Arrays.stream(rec.clustering().outliers()).mapToObj(evidence.sampleIds()::get)

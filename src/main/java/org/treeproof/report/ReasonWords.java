@@ -32,6 +32,18 @@ public final class ReasonWords implements Reason.Visitor<String> {
         return r.accept(this);
     }
 
+    /**
+     * The sentence for a covariate the clusters largely follow (a typed fact of the explanation, decided by
+     * {@link org.treeproof.explain.CovariateRule}); the covariate's name is quoted as given.
+     */
+    public static String covariate(org.treeproof.explain.CovariateFlag flag) {
+        String q = flag.qValue() < 0.001 ? "q < 0.001" : String.format(java.util.Locale.ROOT, "q = %.3f", flag.qValue());
+        return String.format(java.util.Locale.ROOT, "The clusters largely follow the covariate '%s' (%s %.2f, %s): "
+                + "they may reflect how the samples were collected or processed rather than a difference between "
+                + "them; check this before reading the clusters as groups.", flag.covariate(), flag.effectName(),
+                flag.effect(), q);
+    }
+
     /** The sentence for each reason, in order. */
     public List<String> words(List<Reason> reasons) {
         return reasons.stream().map(this::word).toList();
@@ -44,7 +56,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
             case NO_CLUSTER_DISSOLVES -> f("no cluster dissolves (every mean Jaccard above %s)",
                     Numbers.plain(rule.dissolvedJaccard()));
             case EVERY_CLUSTER_COHESIVE -> "every cluster is cohesive (its members' mean silhouette width above 0)";
-            case AT_MOST_ONE_DOUBTFUL -> f("at most one cluster is only doubtful (mean Jaccard from %s to %s), the "
+            case AT_MOST_ONE_DOUBTFUL -> f("at most one cluster is only doubtful (mean Jaccard between %s and %s), the "
                     + "others stable", Numbers.plain(rule.dissolvedJaccard()), Numbers.plain(rule.stableJaccard()));
             case EVERY_CLUSTER_STABLE -> f("every cluster is stable (mean Jaccard at least %s)",
                     Numbers.plain(rule.stableJaccard()));

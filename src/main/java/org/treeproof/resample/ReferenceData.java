@@ -364,12 +364,13 @@ public final class ReferenceData implements Serializable {
      * are such a distribution; what differs is how the scale reads an axis along which the data are <i>not</i>
      * unimodal. There the normalised median absolute deviation (F. R. Hampel, J. Am. Stat. Assoc. 69 (1974)
      * 383-393, doi:10.1080/01621459.1974.10482962), used before, measures how far the modes lie from the median
-     * and exceeds even the SD (two modes ±5 apart with SD 1 in each: MAD × 1.4826 ≈ 7.2, SD ≈ 5.1, in {@code QnScaleTest}'s sample), so the null
-     * was stretched along the very axis that separates two groups and split there as reproducibly as the data
-     * (seen on two groups in t3 noise and on a processing batch: no verdict). Qn, the quartile of the pairwise
-     * distances, falls among distances within a mode (there ≈ 2.2), so the null is as wide as one group along
-     * that axis; at the normal it is consistent and more efficient than the MAD (82% against 37%, the paper's
-     * figures), and it is as robust to far samples (50% breakdown). A common factor on every axis cancels in the
+     * and exceeds even the SD (two modes at ±5 with SD 1 in each: MAD × 1.4826 ≈ 7.2, SD ≈ 5.1, in
+     * {@code QnScaleTest}'s sample), so the null was stretched along the very axis that separates two groups and
+     * split there as reproducibly as the data (seen on two groups in t3 noise and on a processing batch: no
+     * verdict). Qn, the first quartile of the pairwise distances, falls among distances within a mode (there
+     * ≈ 2.2), so the null is as wide as one group along that axis; at the normal it is consistent and more
+     * efficient than the MAD (82% against 37%, the paper's figures, quoted from memory), and as robust to far
+     * samples (50% breakdown). A common factor on every axis cancels in the
      * fitted radial law, so only the scales' ratios matter.
      *
      * <p>The law is represented by {@code n} radii at its quantiles {@code (i + 1/2) / n}; each sample's

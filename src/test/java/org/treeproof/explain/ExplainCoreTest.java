@@ -180,7 +180,7 @@ class ExplainCoreTest {
                 Covariate.categorical("batch", batch), Covariate.categorical("sex", sex), Covariate.numeric("age", age)),
                 1).compute();
         assertTrue(res.get(0).flagged());
-        assertTrue(res.get(0).flag().orElseThrow().reason().contains("'batch'"));
+        assertTrue(org.treeproof.report.ReasonWords.covariate(res.get(0).flag().orElseThrow()).contains("'batch'"));
         assertFalse(res.get(1).flagged());
         assertFalse(res.get(2).flagged());
     }
