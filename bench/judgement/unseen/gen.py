@@ -1,6 +1,7 @@
-"""Fourteen seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
+"""Nineteen seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
 
-Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202; writes OUTDIR/<name>.csv, samples in rows)
+Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, the last five 20261203; writes OUTDIR/<name>.csv,
+samples in rows)
 """
 import os
 import sys
@@ -51,3 +52,15 @@ save("dirichlet-noise",r.dirichlet(np.ones(10)*2,200))
 X=r.standard_normal((300,5)); X[:8]+= [6,6,0,0,0]; save("tiny-group-8of300",X)
 # 15 batch: one population, two batches shifted by 1 sd in all 20 features
 X=r.standard_normal((160,20)); X[:80]+=0.8; save("batch-shift",X)
+# --- added 2 Dec 2026 after the Qn null, from their own generator so the sets above are unchanged ---
+q=np.random.default_rng(20261203)
+# 16 zero-inflated abundances (40% zeros, log-normal otherwise), independent features, no groups
+save("zero-inflated-noise",np.exp(q.normal(2,1,(200,20)))*(q.random((200,20))>0.4))
+# 17 sparser: 60% zeros, 30 features, no groups
+save("zero-inflated-sparse",np.exp(q.normal(1,1,(250,30)))*(q.random((250,30))>0.6))
+# 18 factor model: 3 latent factors over 30 features plus noise, no groups (strongly elongated)
+F=q.normal(size=(220,3)); L=q.normal(size=(3,30)); save("factor-model-noise",F@L+0.5*q.normal(size=(220,30)))
+# 19 integer scores: Gaussian SD 1.2 rounded, 12 features, no groups (many tied values)
+save("rounded-gaussian",np.round(q.normal(0,1.2,(180,12))))
+# 20 two groups in zero-inflated data: the second 100 have 6x the abundance on 8 of 20 features
+X=np.exp(q.normal(2,1,(200,20)))*(q.random((200,20))>0.4); X[100:,:8]*=6; save("zero-inflated-2-groups",X)
