@@ -161,6 +161,28 @@ class ReferenceDataTest {
     }
 
     @Test
+    void theEllipticalNullIsAsWideAsOneModeAlongAnAxisThatSeparatesTwo() {
+        // Feature 1: two modes at -5 and +5, SD 1 each (SD of the whole 5.1); feature 2: N(0, 1.5²). The first
+        // principal axis is feature 1. Its Qn falls among the distances within a mode (about 2.2, as statsmodels
+        // gives for the two-mode sample of QnScaleTest), so the null's spread along it is about 2.2 / 1.5 = 1.5
+        // times that along feature 2 (an elliptical null's covariance is diag(scale²) in the axes, whatever its
+        // radial law); the normalised MAD (about 7.4, the modes' distance from the median) would give about 5,
+        // the SD about 3.4.
+        int n = 2000;
+        var rng = new SplittableRandom(41);
+        double[] v = new double[n * 2];
+        for (int i = 0; i < n; i++) {
+            v[i * 2] = (i % 2 == 0 ? -5 : 5) + rng.nextGaussian();
+            v[i * 2 + 1] = 1.5 * rng.nextGaussian();
+        }
+        DataMatrix x = matrix(n, 2, v);
+        DataMatrix z = ReferenceData.ellipticalNull(x).draw(7);
+        double[][] c = covariance(z);
+        double ratio = Math.sqrt(c[0][0] / c[1][1]);
+        assertTrue(ratio > 1.2 && ratio < 1.9, "null SD ratio along the two axes " + ratio);
+    }
+
+    @Test
     void gaussianNullKeepsTheDataCovariance() {
         // The Gaussian null's expected sample covariance is the data's (Z diag(sd) Vᵀ has covariance
         // V diag(var) Vᵀ). For a Gaussian sample of size n, an entry of the sample covariance has variance
