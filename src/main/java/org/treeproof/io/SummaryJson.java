@@ -80,6 +80,9 @@ public final class SummaryJson {
     public SummaryJson(Evidence evidence, Recommendation recommendation, Provenance provenance,
             java.util.function.Function<org.treeproof.study.Reason, String> wording, Explanation explanation,
             java.util.function.Function<org.treeproof.explain.CovariateFlag, String> flagWording) {
+        if (explanation != null) {
+            java.util.Objects.requireNonNull(flagWording, "flagWording");
+        }
         this.wording = wording;
         this.flagWording = flagWording;
         this.evidence = evidence;

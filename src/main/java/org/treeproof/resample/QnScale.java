@@ -22,7 +22,6 @@ public final class QnScale {
     /** 1 / (√2 Φ⁻¹(5/8)), the normal consistency factor. */
     static final double CONSISTENCY = 2.219144465985076;
 
-
     private QnScale() {
     }
 

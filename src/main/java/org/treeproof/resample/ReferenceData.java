@@ -370,8 +370,8 @@ public final class ReferenceData implements Serializable {
      * verdict). Qn, the first quartile of the pairwise distances, falls among distances within a mode (there
      * ≈ 2.2), so the null is as wide as one group along that axis; at the normal it is consistent and more
      * efficient than the MAD (82% against 37%, the paper's figures, quoted from memory), and as robust to far
-     * samples (50% breakdown). A common factor on every axis cancels in the
-     * fitted radial law, so only the scales' ratios matter.
+     * samples (50% breakdown). A common factor on every axis cancels in the fitted radial law, so only the
+     * scales' ratios matter.
      *
      * <p>The law is represented by {@code n} radii at its quantiles {@code (i + 1/2) / n}; each sample's
      * coordinates take {@code rank} normal variates and then one {@code nextInt} for its radius, in that order,

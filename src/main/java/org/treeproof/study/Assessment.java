@@ -34,8 +34,7 @@ public record Assessment(Facts facts, Verdict verdict, List<Condition> met, List
      * @param outliers     samples set aside as outliers
      * @param meanAri      mean ARI of the replicates with the solution
      * @param worstJaccard the smallest mean Jaccard of its clusters
- * @param allStable    every cluster's Jaccard status is stable (Hennig's band, decided by the score)
- * @param noneDissolved no cluster's status is dissolved or not assessed
+     * @param noneDissolved no cluster's status is dissolved or not assessed
      * @param doubtfulClusters clusters whose Jaccard status is doubtful (between Hennig's dissolved and stable bands)
      * @param silhouette   average silhouette of the clustered samples
      * @param leastClusterSilhouette the smallest mean silhouette width of one cluster's members (NaN when there
@@ -45,7 +44,12 @@ public record Assessment(Facts facts, Verdict verdict, List<Condition> met, List
      * @param pAdjusted    max-statistic adjusted Monte Carlo p-value (NaN without null data)
      * @param cophenetic   the linkage tree's cophenetic correlation
      */
-    public record Facts(Linkage linkage, int k, int outliers, double meanAri, double worstJaccard, boolean allStable,
-            boolean noneDissolved, int doubtfulClusters, double silhouette, double leastClusterSilhouette, boolean calibrated, double excess, double pAdjusted, double cophenetic) {
+    public record Facts(Linkage linkage, int k, int outliers, double meanAri, double worstJaccard,
+            boolean noneDissolved, int doubtfulClusters, double silhouette, double leastClusterSilhouette,
+            boolean calibrated, double excess, double pAdjusted, double cophenetic) {
+        /** Every cluster's Jaccard status is stable (Hennig's band, decided by the score): none other. */
+        public boolean allStable() {
+            return noneDissolved && doubtfulClusters == 0;
+        }
     }
 }

@@ -39,9 +39,8 @@ import org.treeproof.score.JaccardStability;
  *       ({@link Condition#AT_MOST_ONE_DOUBTFUL}); otherwise {@code unsupported}. One doubtful cluster is our
  *       choice: on data without groups (uniform and log-normal noise) the solutions called tentative had three to
  *       six doubtful clusters, while a doubtful cluster beside stable ones is the case of a group the replicates
- *       recover only in part. No silhouette band
- *       enters: separation counts through the excess over the null, which compares each k with noise at the
- *       same k.</li>
+ *       recover only in part. No silhouette band enters: separation counts through the excess over the null,
+ *       which compares each k with noise at the same k.</li>
  *   <li>Without null data (a distance table, or {@code --null-sets 0}) nothing is better than {@code tentative},
  *       which needs every cluster cohesive and stable, the replicates to reproduce the solution (mean ARI at least
  *       {@code stableJaccard}) and an average silhouette above {@code reasonableSilhouette}.</li>

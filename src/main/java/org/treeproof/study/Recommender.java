@@ -36,12 +36,11 @@ public final class Recommender {
     /** The facts the rule reads for one solution. */
     public static Assessment.Facts facts(LinkageEvidence le, KEvidence e) {
         NullStability ns = e.stability().nullModel();
-        boolean allStable = e.clusters().stream().allMatch(c -> c.status() == JaccardStability.Status.STABLE);
         boolean noneDissolved = e.clusters().stream().noneMatch(c -> c.status() == JaccardStability.Status.DISSOLVED
                 || c.status() == JaccardStability.Status.NOT_ASSESSED);
         int doubtful = (int) e.clusters().stream().filter(c -> c.status() == JaccardStability.Status.DOUBTFUL).count();
         return new Assessment.Facts(le.linkage(), e.k(), e.outliers(), e.stability().ari().mean(), e.worstJaccard(),
-                allStable, noneDissolved, doubtful, e.silhouette(), leastClusterSilhouette(e), ns != null, ns == null ? Double.NaN : ns.excess(),
+                noneDissolved, doubtful, e.silhouette(), leastClusterSilhouette(e), ns != null, ns == null ? Double.NaN : ns.excess(),
                 ns == null ? Double.NaN : ns.pValueAdjusted(), le.copheneticCorrelation());
     }
 

@@ -179,7 +179,7 @@ class ReportModelTest {
         var a = r.assessment(r.linkage(), r.k());
         var f = a.facts();
         var odd = new org.treeproof.study.Assessment(new org.treeproof.study.Assessment.Facts(f.linkage(), f.k(),
-                f.outliers(), f.meanAri(), Double.NaN, f.allStable(), f.noneDissolved(), f.doubtfulClusters(), f.silhouette(), f.leastClusterSilhouette(), f.calibrated(),
+                f.outliers(), f.meanAri(), Double.NaN, f.noneDissolved(), f.doubtfulClusters(), f.silhouette(), f.leastClusterSilhouette(), f.calibrated(),
                 f.excess(), f.pAdjusted(),
                 f.cophenetic()), a.verdict(), a.met(), a.failed());
         reasons.add(new org.treeproof.study.Reason.BestFailed(odd));

@@ -17,12 +17,12 @@ class DecisionRuleTest {
     private static final DecisionRule RULE = DecisionRule.DEFAULT;
 
     private static Assessment.Facts calibrated(int k, double excess, double p, boolean allStable, boolean whole) {
-        return new Assessment.Facts(Linkage.AVERAGE, k, 0, 0.9, allStable ? 0.9 : whole ? 0.6 : 0.3, allStable,
+        return new Assessment.Facts(Linkage.AVERAGE, k, 0, 0.9, allStable ? 0.9 : whole ? 0.6 : 0.3,
                 whole, allStable || !whole ? 0 : 1, 0.1, 0.05, true, excess, p, 0.8);
     }
 
     private static Assessment.Facts uncalibrated(double ari, boolean allStable, double silhouette) {
-        return new Assessment.Facts(Linkage.AVERAGE, 2, 0, ari, allStable ? 0.9 : 0.6, allStable, true, allStable ? 0 : 1, silhouette,
+        return new Assessment.Facts(Linkage.AVERAGE, 2, 0, ari, allStable ? 0.9 : 0.6, true, allStable ? 0 : 1, silhouette,
                 silhouette, false, Double.NaN, Double.NaN, 0.8);
     }
 
@@ -57,8 +57,8 @@ class DecisionRuleTest {
     @Test
     void oneDoubtfulClusterIsTentativeTwoAreUnsupported() {
         // boundary of AT_MOST_ONE_DOUBTFUL: 1 doubtful beside stable ones passes, 2 fail, whatever the excess
-        var one = new Assessment.Facts(Linkage.WARD, 5, 0, 0.8, 0.6, false, true, 1, 0.3, 0.1, true, 9, 0.05, 0.7);
-        var two = new Assessment.Facts(Linkage.WARD, 5, 0, 0.8, 0.6, false, true, 2, 0.3, 0.1, true, 9, 0.05, 0.7);
+        var one = new Assessment.Facts(Linkage.WARD, 5, 0, 0.8, 0.6, true, 1, 0.3, 0.1, true, 9, 0.05, 0.7);
+        var two = new Assessment.Facts(Linkage.WARD, 5, 0, 0.8, 0.6, true, 2, 0.3, 0.1, true, 9, 0.05, 0.7);
         assertEquals(Verdict.TENTATIVE, RULE.assess(one).verdict());
         Assessment a = RULE.assess(two);
         assertEquals(Verdict.UNSUPPORTED, a.verdict());
@@ -69,17 +69,17 @@ class DecisionRuleTest {
     void aClusterWhoseMembersLieCloserToAnotherClusterIsNoCluster() {
         // Rousseeuw (1987): a negative width means closer to a neighbouring cluster; a cluster whose members are so
         // on average (0 included: as close to the neighbour as to each other) fails, whatever its stability
-        Assessment scattered = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 4, 3, 0.9, 0.9, true, true, 0, 0.35,
+        Assessment scattered = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 4, 3, 0.9, 0.9, true, 0, 0.35,
                 0.0, true, 8, 0.05, 0.8));
         assertEquals(Verdict.UNSUPPORTED, scattered.verdict());
         assertEquals(List.of(Condition.EVERY_CLUSTER_COHESIVE), scattered.failed());
-        Assessment barely = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 4, 3, 0.9, 0.9, true, true, 0, 0.35,
+        Assessment barely = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 4, 3, 0.9, 0.9, true, 0, 0.35,
                 1e-9, true, 8, 0.05, 0.8));
         assertEquals(Verdict.SUPPORTED, barely.verdict());
-        Assessment noWidths = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 2, 0, 0.9, 0.9, true, true, 0,
+        Assessment noWidths = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 2, 0, 0.9, 0.9, true, 0,
                 Double.NaN, Double.NaN, true, 8, 0.05, 0.8));
         assertEquals(Verdict.SUPPORTED, noWidths.verdict(), "no widths (clusters of one sample) do not fail it");
-        Assessment withoutNull = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 2, 0, 0.9, 0.9, true, true, 0, 0.6,
+        Assessment withoutNull = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 2, 0, 0.9, 0.9, true, 0, 0.6,
                 -0.1, false, Double.NaN, Double.NaN, 0.8));
         assertEquals(Verdict.UNSUPPORTED, withoutNull.verdict());
     }
@@ -87,7 +87,7 @@ class DecisionRuleTest {
     @Test
     void noSilhouetteBandGatesACalibratedVerdict() {
         // a silhouette of 0.02, as in wide data, does not stop a solution that beats the null with stable clusters
-        var f = new Assessment.Facts(Linkage.WARD, 3, 0, 1.0, 1.0, true, true, 0, 0.02, 0.01, true, 30, 0.05, 0.5);
+        var f = new Assessment.Facts(Linkage.WARD, 3, 0, 1.0, 1.0, true, 0, 0.02, 0.01, true, 30, 0.05, 0.5);
         assertEquals(Verdict.SUPPORTED, RULE.assess(f).verdict());
     }
 
