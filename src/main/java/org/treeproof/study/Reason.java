@@ -136,10 +136,11 @@ public sealed interface Reason {
 
     /**
      * How often each k wins when the rule's ordering is applied replicate by replicate, among the linkage's
-     * solutions that have the recommended verdict.
+     * solutions that have the recommended verdict: supported ones by fineness (the finest a replicate reproduces,
+     * its ARI at least {@code reproducedAt}), tentative ones by excess ({@code Recommender}'s votes).
      */
-    record Votes(Linkage linkage, Verdict verdict, List<Recommendation.KShare> shares, int recommendedK)
-            implements Reason {
+    record Votes(Linkage linkage, Verdict verdict, List<Recommendation.KShare> shares, int recommendedK,
+            double reproducedAt) implements Reason {
         public Votes {
             shares = List.copyOf(shares);
         }

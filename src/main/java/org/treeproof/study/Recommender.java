@@ -78,6 +78,19 @@ public final class Recommender {
                 winnerLinkage = l;
             }
         }
+        // each linkage's own choice: its strongest, or, when that is supported, its finest level (rule item 3)
+        for (int l = 0; l < all.size(); l++) {
+            if (perLinkage[l] != null && perLinkage[l].verdict() == Verdict.SUPPORTED) {
+                LinkageEvidence le = all.get(l);
+                List<Integer> lv = levels(le, assessments, perLinkage[l]);
+                int finest = lv.get(lv.size() - 1);
+                perLinkage[l] = assessments.stream().filter(a -> a.linkage() == le.linkage() && a.k() == finest)
+                        .findFirst().orElseThrow();
+            }
+        }
+        if (winner != null) {
+            winner = perLinkage[winnerLinkage];
+        }
         var summaries = new ArrayList<Recommendation.LinkageSummary>();
         for (int l = 0; l < all.size(); l++) {
             LinkageEvidence le = all.get(l);
@@ -113,7 +126,7 @@ public final class Recommender {
             reasons.add(new Reason.Outliers(solution.outlierCount(), evidence.minClusterSize()));
         }
         if (!votes.isEmpty()) {
-            reasons.add(new Reason.Votes(le.linkage(), winner.verdict(), votes, e.k()));
+            reasons.add(new Reason.Votes(le.linkage(), winner.verdict(), votes, e.k(), rule.stableJaccard()));
         }
         if (le.gap() != null) {
             reasons.add(new Reason.Gap(le.gapChoice(), le.gap().ruleMet(), e.k()));
@@ -236,11 +249,18 @@ public final class Recommender {
     }
 
     /**
-     * Per k, the share of replicates in which that k has the largest excess over the null when the replicate's
-     * own ARI replaces the mean ARI (the separation term is the solution's own): the rule's ordering read
-     * replicate by replicate. The rule orders by verdict first, and a verdict belongs to all replicates together,
-     * so only the recommended linkage's solutions with the recommended verdict take part, passing states left out
-     * as they are from the recommendation.
+     * Per k, the share of replicates that the rule's ordering (item 3 of {@link DecisionRule}) would give to that k,
+     * read replicate by replicate among the recommended linkage's solutions with the recommended verdict (passing
+     * states left out, as from the recommendation; a verdict belongs to all replicates together):
+     * <ul>
+     *   <li>supported solutions compete by fineness, so a replicate gives its vote to the finest of them that it
+     *       reproduces, its own ARI with that cut of the data at least the stable band ({@link
+     *       DecisionRule#stableJaccard()}, the same threshold as {@link Condition#REPRODUCED}); a replicate that
+     *       reproduces none gives no vote, so the shares can sum to less than 1;</li>
+     *   <li>tentative solutions compete by their excess over the null, so a replicate gives its vote to the k with
+     *       the largest excess when the replicate's own ARI replaces the mean ARI (the separation term is the
+     *       solution's own).</li>
+     * </ul>
      */
     private List<Recommendation.KShare> votes(LinkageEvidence le, Verdict verdict, List<Assessment> assessments) {
         if (le.byK().isEmpty() || le.byK().get(0).stability().nullModel() == null) {
@@ -254,6 +274,7 @@ public final class Recommender {
                 candidates.add(a.k());
             }
         }
+        boolean byFineness = verdict == Verdict.SUPPORTED;
         int replicates = le.byK().get(0).replicateAri().length;
         int[] wins = new int[evidence.settings().maxK() + 1];
         double[][] ari = new double[le.byK().size()][];
@@ -269,8 +290,13 @@ public final class Recommender {
                 if (!candidates.contains(e.k()) || ns == null) {
                     continue;
                 }
-                double v = NullCalibration.excess(ari[t][r], e.silhouette(), ns.ariMean(), ns.ariSD(),
-                        ns.silhouetteMean(), ns.silhouetteSD());
+                double v;
+                if (byFineness) {
+                    v = ari[t][r] >= rule.stableJaccard() ? e.k() : Double.NEGATIVE_INFINITY;
+                } else {
+                    v = NullCalibration.excess(ari[t][r], e.silhouette(), ns.ariMean(), ns.ariSD(),
+                            ns.silhouetteMean(), ns.silhouetteSD());
+                }
                 if (v > bestValue) {
                     bestValue = v;
                     best = e.k();

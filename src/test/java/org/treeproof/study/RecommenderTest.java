@@ -78,7 +78,25 @@ class RecommenderTest {
         Recommendation r = Recommender.of(e, DecisionRule.DEFAULT).recommend();
         assertTrue(r.levels().contains(2) && r.levels().contains(4), "levels " + r.levels());
         assertFalse(r.levels().contains(3), "k = 3 splits only one family: " + r.levels());
-        assertTrue(r.verdict() != Verdict.UNSUPPORTED);
+        assertEquals(Verdict.SUPPORTED, r.verdict());
+        assertEquals(4, r.k(), "the finest supported level is recommended");
+        // Votes, counted here by hand: each replicate goes to the finest level it reproduces, its ARI with that
+        // cut at least 0.75 (Hennig's stable band, 2007).
+        LinkageEvidence le = e.linkages().stream().filter(x -> x.linkage() == r.linkage()).findFirst().orElseThrow();
+        int replicates = le.at(2).replicateAri().length;
+        assertEquals(r.levels(), r.votes().stream().map(Recommendation.KShare::k).toList());
+        for (Recommendation.KShare share : r.votes()) {
+            int count = 0;
+            for (int i = 0; i < replicates; i++) {
+                boolean reproduced = le.at(share.k()).replicateAri()[i] >= 0.75;
+                boolean finerReproduced = false;
+                for (int finer : r.levels()) {
+                    finerReproduced |= finer > share.k() && le.at(finer).replicateAri()[i] >= 0.75;
+                }
+                count += reproduced && !finerReproduced ? 1 : 0;
+            }
+            assertEquals(count / (double) replicates, share.share(), 1e-12, "k = " + share.k());
+        }
     }
 
     @Test
