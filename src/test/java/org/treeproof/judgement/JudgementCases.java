@@ -24,7 +24,9 @@ public final class JudgementCases {
         /** committed under src/test/resources/judgement/open (scikit-learn's copies, see make_open_sets.py) */
         OPEN,
         /** written at run time by {@link SyntheticSets} */
-        SYNTHETIC
+        SYNTHETIC,
+        /** committed under src/test/resources/judgement/fixed: numpy draws of bench/judgement/unseen/gen.py */
+        FIXED
     }
 
     /**
@@ -81,6 +83,10 @@ public final class JudgementCases {
             Map.entry("wide-4-unequal", new Expected(List.of(new Structure(Set.of(4), SUPPORTED, 10, 0.8, false)),
                     "Four unequal groups (60, 40, 25, 15) planted in 28 of 300 features, recovered by Ward (generator"
                     + " check): k = 4, the group of 15 included.")),
+            Map.entry("five-uneven-groups", new Expected(List.of(new Structure(Set.of(5), SUPPORTED, 30, 0.8,
+                    false)), "Five groups of 40 whose centres lie 4.4 to 8.6 noise SDs apart in ten features: each"
+                    + " group is a cluster, so k = 5; a coarser cut that merges the closer pairs is a level at most,"
+                    + " not the answer (no pair is set apart from the rest).")),
             Map.entry("small-real-group", new Expected(List.of(new Structure(Set.of(2), SUPPORTED, 8, 0.9, false)),
                     "A real group of 10 among 290, about 13 noise SDs away: a small group is still a cluster, so k = 2"
                     + " with the 10 as one cluster (not set aside as outliers).")),
@@ -127,6 +133,13 @@ public final class JudgementCases {
                 + " overlap (1/7, 3/5/8/9) and the default --max-k is 10, so any k from 2 to 10 is defensible as"
                 + " long as every cluster is a real group: at least 45 samples, a quarter of a digit class. The"
                 + " 1796/1 split of a z-scored near-constant pixel is wrong.")));
+        cases.add(new Case("five-groups-numpy", Source.FIXED, "five-groups-numpy.csv", "five-groups-numpy-truth.csv",
+                List.of(), new Expected(List.of(new Structure(Set.of(5), SUPPORTED, 30, 0.8, false)),
+                "Five groups of 40 around centres 5 units from the origin in random directions of ten features"
+                + " (the unseen set S5-5groups-p10, numpy seed 20261204): the centres lie 4.4 to 8.6 noise SDs apart,"
+                + " each group is a cluster, so k = 5. Ward's k = 3 (merging the closer pairs) is supported as well"
+                + " and was recommended by the larger excess before the finest level was: a coarser level, not the"
+                + " answer.")));
         for (SyntheticSets.Set s : SyntheticSets.all()) {
             List<String> options = s.name().startsWith("counts") ? List.of("--log2", "--samples-in-columns")
                     : List.of();

@@ -42,6 +42,8 @@ public final class JudgementSuite {
     private static final ObjectMapper JSON = new ObjectMapper();
     /** Where the open sets are, relative to the project directory. */
     public static final Path OPEN_DIR = Path.of("src", "test", "resources", "judgement", "open");
+    /** Where the committed fixed draws are. */
+    public static final Path FIXED_DIR = Path.of("src", "test", "resources", "judgement", "fixed");
 
     /** What the study recommended for one case. */
     public record Got(String verdict, int k, List<Integer> sizes, List<String> outliers, Map<String, String> cluster) {
@@ -91,7 +93,7 @@ public final class JudgementSuite {
             if (only != null && !only.matcher(c.name()).find()) {
                 continue;
             }
-            Path dir = c.source() == JudgementCases.Source.OPEN ? OPEN_DIR.toAbsolutePath() : synthetic;
+            Path dir = dirOf(c, synthetic);
             Outcome o = runOne(c, dir);
             outcomes.add(o);
             if (progress != null) {
@@ -146,7 +148,7 @@ public final class JudgementSuite {
         for (Case c : JudgementCases.all()) {
             Path out = work.resolve("out").resolve(c.name());
             if ((only == null || only.matcher(c.name()).find()) && Files.isRegularFile(out.resolve("summary.json"))) {
-                Path dir = c.source() == JudgementCases.Source.OPEN ? OPEN_DIR.toAbsolutePath() : synthetic;
+                Path dir = dirOf(c, synthetic);
                 outcomes.add(judgeOutput(c, dir, out, Double.NaN));
             }
         }
@@ -425,5 +427,13 @@ public final class JudgementSuite {
             Files.writeString(markdownFile, markdown(outcomes), StandardCharsets.UTF_8);
         }
         System.exit(outcomes.stream().anyMatch(o -> o.got() == null) ? 1 : 0);
+    }
+
+    private static Path dirOf(Case c, Path synthetic) {
+        return switch (c.source()) {
+            case OPEN -> OPEN_DIR.toAbsolutePath();
+            case FIXED -> FIXED_DIR.toAbsolutePath();
+            case SYNTHETIC -> synthetic;
+        };
     }
 }

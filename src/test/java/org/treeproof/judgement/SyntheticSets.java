@@ -79,6 +79,7 @@ public final class SyntheticSets {
         sets.add(wideGroups("wide-3-groups-p200", d + 301, new int[] {50, 45, 40}, 200, 24, 3.0));
         sets.add(wideGroups("wide-3-groups-p500", d + 302, new int[] {50, 45, 40}, 500, 30, 4.0));
         sets.add(wideGroups("wide-4-unequal-groups-p300", d + 303, new int[] {60, 40, 25, 15}, 300, 28, 4.0));
+        sets.add(fiveUnevenGroups(d + 16_001));
         sets.add(smallRealGroup(d + 6001));
         sets.add(imbalancedGroups(d + 7001));
         sets.add(nestedGroups(d + 8001));
@@ -351,6 +352,33 @@ public final class SyntheticSets {
             }
         }
         return rows(name, shuffled(rng, x, cls), cls);
+    }
+
+    /**
+     * Five groups of 40 in ten features around fixed centres 5 units from the origin in uneven directions, so that
+     * the centres lie 4.4 to 8.6 units apart (two pairs near 5, no pair a level of its own); unit Gaussian noise.
+     * The centres are those of the unseen set S5-5groups-p10 (bench/judgement/unseen/gen.py, numpy seed 20261204),
+     * rounded to two decimals.
+     */
+    static Set fiveUnevenGroups(long seed) {
+        double[][] centres = {
+            {1.28, -1.07, -2.45, -0.06, -2.14, 0.16, 0.07, -1.40, 2.54, -1.79},
+            {1.21, -1.78, -2.46, 0.38, 0.89, 0.52, 0.53, -0.17, 2.31, 2.74},
+            {1.04, -0.35, -3.92, -1.76, -0.22, 0.14, 1.84, -0.92, -1.00, -0.22},
+            {1.23, -1.37, -0.90, 2.76, 0.51, 0.58, 1.62, -1.73, -0.45, 2.60},
+            {-1.40, 0.34, 0.19, 1.30, 0.94, -2.58, 2.67, -0.65, -2.26, 1.00}};
+        var rng = new SplittableRandom(seed);
+        double[][] x = new double[200][];
+        String[] cls = new String[200];
+        for (int i = 0; i < 200; i++) {
+            int g = i / 40;
+            x[i] = gaussians(rng, 10);
+            for (int j = 0; j < 10; j++) {
+                x[i][j] += centres[g][j];
+            }
+            cls[i] = "group-" + (g + 1);
+        }
+        return rows("five-uneven-groups", shuffled(rng, x, cls), cls);
     }
 
     /** 280 samples of one population and a real group of 10, 6 units away on five of ten features. */

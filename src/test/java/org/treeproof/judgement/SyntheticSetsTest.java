@@ -48,9 +48,10 @@ class SyntheticSetsTest {
         for (JudgementCases.Case c : JudgementCases.all()) {
             assertTrue(names.add(c.name()), "duplicate case " + c.name());
             assertFalse(c.expected().reason().isBlank(), c.name());
-            if (c.source() == JudgementCases.Source.OPEN) {
-                assertTrue(Files.isRegularFile(JudgementSuite.OPEN_DIR.resolve(c.file())), c.file());
-                assertTrue(Files.isRegularFile(JudgementSuite.OPEN_DIR.resolve(c.truthFile())), c.truthFile());
+            if (c.source() != JudgementCases.Source.SYNTHETIC) {
+                var dir = c.source() == JudgementCases.Source.OPEN ? JudgementSuite.OPEN_DIR : JudgementSuite.FIXED_DIR;
+                assertTrue(Files.isRegularFile(dir.resolve(c.file())), c.file());
+                assertTrue(Files.isRegularFile(dir.resolve(c.truthFile())), c.truthFile());
             }
         }
         assertTrue(names.size() >= 25, "cases: " + names.size());
