@@ -104,11 +104,11 @@ final class AssessCommand implements Callable<Integer> {
     }
 
     /**
-     * What makes two runs the same study: tool version, input bytes, input preparation and every setting
-     * (not the thread count, which cannot change a result).
+     * What makes two runs the same study: tool version and build (the jar's checksum, {@link BuildIdentity}), input
+     * bytes, input preparation and every setting (not the thread count, which cannot change a result).
      */
     private static String fingerprint(LoadedInput loaded, StudySettings settings) {
-        String text = Main.toolVersion() + "\n" + loaded.source().sha256() + "\n"
+        String text = Main.toolVersion() + "\n" + BuildIdentity.current() + "\n" + loaded.source().sha256() + "\n"
                 + loaded.preparation().map(p -> p.settings().toString()).orElse("distances") + "\n" + settings;
         try {
             var md = java.security.MessageDigest.getInstance("SHA-256");

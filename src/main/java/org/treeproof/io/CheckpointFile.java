@@ -27,7 +27,7 @@ import org.treeproof.study.ReplicateOutcome;
  * A checkpoint kept in a hidden directory beside the output directory ({@code .NAME.checkpoint}): one append-only
  * file per stage of length-prefixed records, each with a CRC-32, flushed to the operating system as soon as it
  * is written, so a process killed at any moment (even by SIGKILL) leaves every record but possibly a torn last
- * one, which is ignored on resume. A fingerprint of the study (tool version, input checksum, every setting)
+ * one, which is ignored on resume. A fingerprint of the study (tool version and build, input checksum, every setting)
  * guards against resuming a different study.
  *
  * <p>For fault-injection tests, the system property {@code treeproof.faultAfterReplicates=N} halts the JVM
@@ -89,7 +89,7 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
                 String kept = Files.readString(dir.resolve(FINGERPRINT), StandardCharsets.UTF_8).strip();
                 if (!kept.equals(fingerprint)) {
                     throw new InputException("--resume: the checkpoint " + dir + " was made by a different study "
-                            + "(other input or settings); rerun with the same command, or without --resume");
+                            + "(other input, settings or treeproof build); rerun with the same command and jar, or without --resume");
                 }
                 return new CheckpointFile(dir, true);
             }
