@@ -89,7 +89,8 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
                 String kept = Files.readString(dir.resolve(FINGERPRINT), StandardCharsets.UTF_8).strip();
                 if (!kept.equals(fingerprint)) {
                     throw new InputException("--resume: the checkpoint " + dir + " was made by a different study "
-                            + "(other input, settings or treeproof build); rerun with the same command and jar, or without --resume");
+                            + "(other input, settings or treeproof build); rerun with the same command and jar, or "
+                            + "without --resume");
                 }
                 return new CheckpointFile(dir, true);
             }

@@ -181,7 +181,8 @@ public final class MethodsParagraph {
                     + "the relative range of cut heights of the linkage's longest-lasting one. The first solution so "
                     + "ordered gave the linkage; when it was supported, the finest supported cut of that linkage's "
                     + "tree was recommended, its coarser supported cuts reported as levels of nested structure. When "
-                    + "no solution was better than unsupported, the data were treated as one group (k = 1).", Numbers.plain(r.alpha()),
+                    + "no solution was better than unsupported, the data were treated as one group (k = 1).",
+                    Numbers.plain(r.alpha()),
                     cite(c, Reference.ROUSSEEUW), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
                     Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW));
         }

@@ -158,7 +158,8 @@ final class ModelFactory {
                                     + "the distances best (highest cophenetic correlation).", rec.linkage().id())
                             : f("%s linkage gives the best-supported solution under the decision rule (best verdict, "
                                     + "then larger excess over the null, then higher smallest cluster Jaccard, then "
-                                    + "higher cophenetic correlation; within the tree, the finest supported cut).", capital(rec.linkage().id())));
+                                    + "higher cophenetic correlation; within the tree, the finest supported cut).",
+                                    capital(rec.linkage().id())));
         }
         return new LinkageComparison(rows, rec.agreement(), rec.linkage(), why);
     }

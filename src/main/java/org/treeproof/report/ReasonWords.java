@@ -182,8 +182,12 @@ public final class ReasonWords implements Reason.Visitor<String> {
             }
         }
         if (r.shares().size() == 1) {
-            return f("k = %d is the only %s solution on %s linkage, so no other k competes replicate by replicate.",
-                    r.recommendedK(), r.verdict().id(), Names.linkage(r.linkage()));
+            String only = f("k = %d is the only %s solution on %s linkage, so no other k competes replicate by "
+                    + "replicate", r.recommendedK(), r.verdict().id(), Names.linkage(r.linkage()));
+            return r.verdict() == Verdict.SUPPORTED
+                    ? f("%s; %s of replicates reproduce it (ARI with that cut at least %s).", only,
+                            Numbers.percent(recommended), Numbers.plain(r.reproducedAt()))
+                    : only + ".";
         }
         String fewer = recommended >= 0.5 ? "" : f("; k = %d wins in fewer than half", r.recommendedK());
         if (r.verdict() == Verdict.SUPPORTED) {

@@ -62,8 +62,8 @@ import org.treeproof.score.JaccardStability;
  *       heights at least half as long, relative to the height ({@code (high - low) / high}), as the
  *       longest-persisting supported one of that linkage; the others are passing states of the agglomeration
  *       (one family split while the other is not yet) and are neither levels nor recommended. The recommended k is
- *       always a level, and the finest one when the verdict is supported. Being cuts of one tree they are nested, so two or more describe nested
- *       structure. The persistence condition is our choice.</li>
+ *       always a level, and the finest one when the verdict is supported. Being cuts of one tree they are nested,
+ *       so two or more describe nested structure. The persistence condition is our choice.</li>
  * </ol>
  *
  * @param alpha                the largest adjusted p-value that beats the null

@@ -25,8 +25,10 @@ import org.treeproof.tree.Linkage;
  * @param clustering      the recommended clusters and outliers (for unsupported: one cluster and the samples the
  *                        tree sets aside before its first split into two large branches)
  * @param minClusterSize  the smallest cluster
- * @param votes           per k, the share of replicates whose own stability ranks that k first among the
- *                        recommended linkage's solutions with the recommended verdict, every such k listed, in
+ * @param votes           per k, the share of replicates that give that k their vote among the recommended
+ *                        linkage's solutions with the recommended verdict (supported: the finest level the
+ *                        replicate reproduces, ARI at least the stable band, so the shares can sum to less than 1;
+ *                        tentative: the largest excess with the replicate's own ARI), every such k listed, in
  *                        increasing k (empty without null data)
  */
 public record Recommendation(Linkage linkage, int k, CutHeight cutHeight, Verdict verdict, List<Integer> levels,

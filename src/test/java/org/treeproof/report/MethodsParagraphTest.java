@@ -146,6 +146,24 @@ class MethodsParagraphTest {
     }
 
     @Test
+    void replicateVotesSayWhatEachReplicateVotedFor() {
+        var words = new ReasonWords(org.treeproof.study.DecisionRule.DEFAULT);
+        var ward = org.treeproof.tree.Linkage.WARD;
+        var supported = org.treeproof.study.Verdict.SUPPORTED;
+        // hand-built shares: 150 of 200 replicates reproduce k = 5, 40 only k = 3, 10 neither
+        String two = words.word(new org.treeproof.study.Reason.Votes(ward, supported, List.of(
+                new org.treeproof.study.Recommendation.KShare(3, 0.2),
+                new org.treeproof.study.Recommendation.KShare(5, 0.75)), 5, 0.75));
+        assertEquals("Replicate by replicate, the finest supported solution on Ward linkage that the replicate "
+                + "reproduces (its ARI with that cut at least 0.75) is k = 3 in 20%, k = 5 in 75% of replicates; 5% "
+                + "reproduce none of them.", two);
+        String one = words.word(new org.treeproof.study.Reason.Votes(ward, supported, List.of(
+                new org.treeproof.study.Recommendation.KShare(2, 0.485)), 2, 0.75));
+        assertTrue(one.endsWith("; 48.5% of replicates reproduce it (ARI with that cut at least 0.75).")
+                || one.endsWith("; 49% of replicates reproduce it (ARI with that cut at least 0.75)."), one);
+    }
+
+    @Test
     void aTentativeSolutionSaysWhatHeldItBack() {
         Studies.Study s = Studies.tentative();
         String md = MethodsParagraph.of(s.model()).render();
