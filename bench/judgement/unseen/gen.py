@@ -1,6 +1,6 @@
-"""Forty-one seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
+"""Seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
 
-Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, then five from 20261203 and twenty-two from 20261204; writes OUTDIR/<name>.csv,
+Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, then five from 20261203, twenty-two from 20261204 and twenty from 20261205; writes OUTDIR/<name>.csv,
 samples in rows)
 """
 import os
@@ -12,11 +12,19 @@ OUT = sys.argv[1] if len(sys.argv) > 1 else "."
 os.makedirs(OUT, exist_ok=True)
 
 
-def save(name,X):
+def save(name,X,truth=None,opts=None):
+    """Writes OUTDIR/name.csv (samples in rows); with truth, name.truth (one planted label per sample, -1 for a
+    planted far sample); with opts, name.opts (options run.sh adds, e.g. --log2)."""
     n,p=X.shape
     with open(os.path.join(OUT, name + ".csv"), "w") as f:
         f.write("id,"+",".join(f"f{j+1:03d}" for j in range(p))+"\n")
         for i in range(n): f.write(f"s{i+1:04d},"+",".join(f"{v:.5f}" for v in X[i])+"\n")
+    if truth is not None:
+        with open(os.path.join(OUT, name + ".truth"), "w") as f:
+            f.write("".join(f"{int(t)}\n" for t in truth))
+    if opts:
+        with open(os.path.join(OUT, name + ".opts"), "w") as f:
+            f.write(opts + "\n")
 r=np.random.default_rng(20261202)
 # 1 two groups with t3 within noise
 X=r.standard_t(3,(200,8)); X[:100,:3]+=6; save("t3-two-groups",X)
@@ -96,3 +104,41 @@ save("W3-close-4sd", np.vstack([w.standard_normal((50,3))+c for c in np.array([[
 C=w.standard_normal((6,50)); C=C/np.linalg.norm(C,axis=1)[:,None]*6
 save("S6-6groups-p50", np.vstack([w.standard_normal((25,50))+c for c in C]))
 X=np.exp(w.normal(0,1,(150,15))); X[:75,:5]*=8; save("S2-lognormal-groups", X)
+# --- added 2 Dec 2026 (late evening), own generator: a fresh batch made before looking at any verdict, with the
+# planted labels (name.truth) so run.sh prints the ARI of the recommendation with them. Prefix V: N none, S<k> k groups.
+v=np.random.default_rng(20261205)
+def blobs(sizes, centres, noise=lambda m,p: v.standard_normal((m,p))):
+    X=np.vstack([noise(m,len(c))+c for m,c in zip(sizes,centres)]); return X, np.repeat(np.arange(len(sizes)),sizes)
+save("VN-gauss-n500-p2", v.standard_normal((500,2)))
+save("VN-t3-n300-p15", v.standard_t(3,(300,15)))
+save("VN-uniform-n300-p3", v.uniform(size=(300,3)))
+save("VN-mixed-scales-p12", v.standard_normal((200,12))*np.logspace(-2,2,12))
+X=v.standard_normal((250,6)); X[0]=15*X[0]/np.linalg.norm(X[0]); save("VN-gauss-1far", X)
+save("VN-lognormal-log2", np.exp(v.normal(3,1,(200,10))), opts="--log2")
+def save_rows(name, G, truth=None):
+    """Counts with one feature (gene) per row and one sample per column, read with --samples-in-columns --log2."""
+    with open(os.path.join(OUT, name + ".csv"), "w") as f:
+        f.write("gene,"+",".join(f"s{i+1:03d}" for i in range(G.shape[1]))+"\n")
+        for j in range(G.shape[0]): f.write(f"g{j+1:04d},"+",".join(str(int(x)) for x in G[j])+"\n")
+    open(os.path.join(OUT, name + ".opts"), "w").write("--samples-in-columns --log2\n")
+    if truth is not None:
+        open(os.path.join(OUT, name + ".truth"), "w").write("".join(f"{int(g)}\n" for g in truth))
+save_rows("VN-nbcounts-rows", v.negative_binomial(5,5/(5+np.exp(v.normal(3,1.5,(400,1)))),(400,60)))
+mu=np.exp(v.normal(3,1.5,(400,1)))*np.ones((400,60)); t=np.repeat([0,1,2],20)
+for g in range(3): mu[g*40:(g+1)*40, t==g]*=4
+save_rows("VS3-nbcounts-rows", v.negative_binomial(5,5/(5+mu)), truth=t)
+X=v.standard_normal((290,8)); X[:10,:3]+=6; save("VS2-small-10of290", X, truth=(np.arange(290)>=10).astype(int))
+R=np.diag([3,0.5,0.5,0.5,0.5]); X,t=blobs([70,70,70],[[0,0,0,0,0],[0,5,0,0,0],[0,0,5,0,0]],lambda m,p: v.standard_normal((m,p))@R)
+save("VS3-elongated", X, truth=t)
+C=v.standard_normal((4,8)); C=C/np.linalg.norm(C,axis=1)[:,None]*6; X,t=blobs([200,100,50,25],C); save("VS4-sizes-200-100-50-25", X, truth=t)
+X=v.standard_normal((150,500)); t=np.repeat([0,1,2],50); X[t==1,:25]+=1.5; X[t==2,25:50]+=1.5; save("VS3-wide-n150-p500", X, truth=t)
+X,t=blobs([100,100],[[7,7,0,0,0,0],[0,0,0,0,0,0]]); O=v.standard_normal((5,6)); O=O/np.linalg.norm(O,axis=1)[:,None]*20
+save("VS2-groups-5far", np.vstack([X,O]), truth=np.concatenate([t,-np.ones(5)]))
+X,t=blobs([100,60,60],[[12,0,0,0],[0,0,0,0],[0,5,0,0]]); save("VS3-nested-family", X, truth=t)
+X,t=blobs([80,80,80],[[8,0,0,0,0,0],[0,8,0,0,0,0],[0,0,0,0,0,0]],lambda m,p: v.standard_t(4,(m,p))); save("VS3-t4-groups", X, truth=t)
+C=v.standard_normal((8,20)); C=C/np.linalg.norm(C,axis=1)[:,None]*6; X,t=blobs([30]*8,C); save("VS8-8groups-p20", X, truth=t)
+X,t=blobs([60,60,60],[[6,0]+[0]*8,[0,6]+[0]*8,[0]*10]); X[::2]+=1.0; save("VS3-groups-plus-batch", X, truth=t)
+P=np.array([[0.75]*20+[0.5]*20,[0.25]*20+[0.5]*20]); t=np.repeat([0,1],[90,90])
+save("VS2-binary-2types", (v.random((180,40))<P[t]).astype(float), truth=t)
+X,t=blobs([50]*4,[[0,0],[6,0],[0,6],[6,6]]); save("VS4-square-p2", X, truth=t)
+X=v.standard_normal((300,3)); X=5*X/np.linalg.norm(X,axis=1)[:,None]+0.3*v.standard_normal((300,3)); save("VN-sphere-shell", X)
