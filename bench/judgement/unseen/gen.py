@@ -19,6 +19,10 @@ def save(name,X,truth=None,opts=None):
     with open(os.path.join(OUT, name + ".csv"), "w") as f:
         f.write("id,"+",".join(f"f{j+1:03d}" for j in range(p))+"\n")
         for i in range(n): f.write(f"s{i+1:04d},"+",".join(f"{v:.5f}" for v in X[i])+"\n")
+    save_extras(name,truth,opts)
+
+
+def save_extras(name,truth,opts):
     if truth is not None:
         with open(os.path.join(OUT, name + ".truth"), "w") as f:
             f.write("".join(f"{int(t)}\n" for t in truth))
@@ -104,7 +108,7 @@ save("W3-close-4sd", np.vstack([w.standard_normal((50,3))+c for c in np.array([[
 C=w.standard_normal((6,50)); C=C/np.linalg.norm(C,axis=1)[:,None]*6
 save("S6-6groups-p50", np.vstack([w.standard_normal((25,50))+c for c in C]))
 X=np.exp(w.normal(0,1,(150,15))); X[:75,:5]*=8; save("S2-lognormal-groups", X)
-# --- added 2 Dec 2026 (late evening), own generator: a fresh batch made before looking at any verdict, with the
+# --- added 2-3 Dec 2026 (around midnight), own generator: a fresh batch made before looking at any verdict, with the
 # planted labels (name.truth) so run.sh prints the ARI of the recommendation with them. Prefix V: N none, S<k> k groups.
 v=np.random.default_rng(20261205)
 def blobs(sizes, centres, noise=lambda m,p: v.standard_normal((m,p))):
@@ -120,9 +124,7 @@ def save_rows(name, G, truth=None):
     with open(os.path.join(OUT, name + ".csv"), "w") as f:
         f.write("gene,"+",".join(f"s{i+1:03d}" for i in range(G.shape[1]))+"\n")
         for j in range(G.shape[0]): f.write(f"g{j+1:04d},"+",".join(str(int(x)) for x in G[j])+"\n")
-    open(os.path.join(OUT, name + ".opts"), "w").write("--samples-in-columns --log2\n")
-    if truth is not None:
-        open(os.path.join(OUT, name + ".truth"), "w").write("".join(f"{int(g)}\n" for g in truth))
+    save_extras(name,truth,"--samples-in-columns --log2")
 save_rows("VN-nbcounts-rows", v.negative_binomial(5,5/(5+np.exp(v.normal(3,1.5,(400,1)))),(400,60)))
 mu=np.exp(v.normal(3,1.5,(400,1)))*np.ones((400,60)); t=np.repeat([0,1,2],20)
 for g in range(3): mu[g*40:(g+1)*40, t==g]*=4
