@@ -45,8 +45,10 @@ public final class InputOptions {
     private boolean log2;
 
     @Option(names = "--scale", paramLabel = "HOW", converter = ScaleConverter.class,
-            description = "Per-feature scaling after log2: none, center or zscore (population SD; constant features"
-                    + " are dropped and reported). Default: zscore; none for the 0/1 metrics jaccard and hamming.")
+            description = "Per-feature scaling after log2: none, center, zscore (population SD) or robust (median and"
+                    + " Qn, which keeps the separation of groups that lie on few features; long-tailed features need"
+                    + " --log2 first); constant features are dropped and reported. Default: zscore; none for the 0/1"
+                    + " metrics jaccard and hamming.")
     private Scale scale;
 
     @Option(names = "--top-variable", paramLabel = "N", converter = TopVariableConverter.class,

@@ -16,7 +16,8 @@ import java.util.Objects;
  *       order, kept in input order; asking for at least as many features as there are keeps all of them (and
  *       the report says so) rather than failing, because the count left after the missing-value policy is not
  *       known in advance;</li>
- *   <li>the scaling ({@link Scale}); under z-scoring, constant features are dropped and reported.</li>
+ *   <li>the scaling ({@link Scale}); under z-scoring and robust scaling, constant features are dropped and
+ *       reported.</li>
  * </ol>
  * Applying a preparation is a pure function of the matrix; nothing is read or written.
  *

@@ -15,7 +15,7 @@ import java.util.Optional;
  * @param inputFeatures   features in the table as read
  * @param missingCells    missing cells in the table as read
  * @param droppedSamples  samples dropped, in input order (only the missing-value policy drops samples)
- * @param droppedFeatures features dropped by the missing-value policy or as constant under z-scoring, in the
+ * @param droppedFeatures features dropped by the missing-value policy or as constant under z-scoring or robust scaling, in the
  *                        order they were dropped; features left out by the top-variable step are not listed here
  *                        but described by {@code topVariable}
  * @param imputedCells    cells filled in with their feature's median
@@ -81,7 +81,7 @@ public record PreparationReport(Preparation settings, int inputSamples, int inpu
                 : String.format(Locale.ROOT, "Asked for the %d most variable features; all %d were kept.",
                         t.requested(), t.candidates())));
         if (!constant.isEmpty()) {
-            out.add(String.format(Locale.ROOT, "Dropped %d constant feature(s), which have no z-score: %s.",
+            out.add(String.format(Locale.ROOT, "Dropped %d constant feature(s), which have no spread to scale by: %s.",
                     constant.size(), names(constant)));
         }
         out.add(settings.scale().sentence());
@@ -118,8 +118,8 @@ public record PreparationReport(Preparation settings, int inputSamples, int inpu
         MISSING_VALUES("has missing values"),
         /** Every value of the feature was missing, so there was no median to impute. */
         NO_OBSERVED_VALUES("has no observed value to take a median of"),
-        /** The feature takes one value in every sample, so its standard deviation is 0 and it has no z-score. */
-        CONSTANT("is constant, so it has no z-score");
+        /** The feature takes one value in every sample, so its spread is 0 and it cannot be scaled (z-score or Qn). */
+        CONSTANT("is constant, so it has no spread to scale by");
 
         private final String description;
 

@@ -55,6 +55,63 @@ public enum Scale {
             }
             run.table.shiftAndDivide(mean, sd);
         }
+    },
+    /**
+     * Subtract each feature's median and divide by its Q<sub>n</sub> scale (see {@link QnScale}; Rousseeuw and
+     * Croux 1993, doi:10.1080/01621459.1993.10476408). At a normal feature Qn equals the SD, so noise features
+     * are scaled as by {@link #ZSCORE}; but Qn is read within a mode, so a feature whose values fall in separated
+     * groups keeps its separation, where dividing by the SD shrinks it by the between-group spread (the problem
+     * of standardising by the total SD that G. W. Milligan and M. C. Cooper, "A study of standardization of
+     * variables in cluster analysis", J. Classification 5 (1988) 181-204, doi:10.1007/BF01897163, describe). A
+     * feature whose Qn is 0 (at least about a quarter of the sample pairs tie, e.g. a binary or mostly-zero
+     * feature) is divided by its population SD instead. Constant features are dropped, as for z-scores.
+     *
+     * <p>Not the default: Qn also reads the spread of a skewed feature's dense core, so a long tail is magnified.
+     * Tried as the default on the judgement suite (draw 0) and the unseen sets (3 December 2026), it found
+     * groups missed under z-scores (three groups in t4 noise; groups on two of ten features beside a batch) but
+     * made two false claims on noise (skewed features; zero-inflated abundances) and lost two supported sets (a
+     * group of 30 of 300 in t3 noise; two groups in 30 of 1000 features): see {@code bench/judgement/README.md}.
+     * Long-tailed features need {@code --log2} first.
+     */
+    ROBUST("Centred every feature at its median and divided it by its Qn scale (Rousseeuw and Croux 1993; by its"
+            + " standard deviation where Qn is 0).", "robust", "qn") {
+        @Override
+        void apply(PreparationRun run) {
+            boolean[] constant = run.table.constantFeatures();
+            int left = 0;
+            for (boolean c : constant) {
+                left += c ? 0 : 1;
+            }
+            if (left == 0) {
+                throw new InputException(run.where.source() + ": all " + run.table.samples() + " samples are "
+                        + "identical: every feature is constant across the samples, so --scale robust leaves nothing"
+                        + " to cluster");
+            }
+            run.dropFeatures(constant, PreparationReport.Reason.CONSTANT, new int[constant.length]);
+            run.table.scaleByPowerOfTwo(run.table.powerOfTwoExponents(), -1);
+            int p = run.table.features();
+            double[] median = new double[p];
+            double[] divisor = new double[p];
+            double[] mean = null;
+            double[] variance = null;
+            for (int j = 0; j < p; j++) {
+                double[] x = run.table.column(j);
+                double qn = QnScale.of(x);
+                Arrays.sort(x);
+                int n = x.length;
+                median[j] = n % 2 == 1 ? x[n / 2] : (x[n / 2 - 1] + x[n / 2]) / 2;
+                if (qn > 0) {
+                    divisor[j] = qn;
+                } else {
+                    if (variance == null) {
+                        mean = run.table.means();
+                        variance = run.table.variances(mean);
+                    }
+                    divisor[j] = Math.sqrt(variance[j]);
+                }
+            }
+            run.table.shiftAndDivide(median, divisor);
+        }
     };
 
     private final String sentence;

@@ -7,6 +7,7 @@ import java.util.Objects;
 import java.util.SplittableRandom;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.data.InputException;
+import org.treeproof.data.QnScale;
 import org.treeproof.distance.Metric;
 
 /**

@@ -46,6 +46,35 @@ class PreparationTest {
     }
 
     @Test
+    void robustScalingDividesByQnAndFallsBackToTheStandardDeviationWhereQnIsZero() {
+        // a = {1, 2, 3, 4, 5}: median 3; Qn's k = C(3, 2) = 3 (h = 5/2 + 1 = 3), and the sorted pairwise distances
+        // are 1, 1, 1, 1, 2, ..., so the third is 1 and Qn = 1 / (sqrt(2) * Phi^-1(5/8)) = 2.2191444659850757
+        // (Rousseeuw & Croux 1993, eq. for Qn; the factor to 16 digits from scipy.stats.norm.ppf(0.625)).
+        // b = {0, 0, 1, 1, 1}: 1 + 3 = 4 pairs tie, so the third smallest distance is 0 and Qn = 0: b is divided by
+        // its population SD sqrt(0.24) (mean 0.6; (2 * 0.36 + 3 * 0.16) / 5 = 0.24) after subtracting its median 1.
+        Prepared p = prep(MissingPolicy.ERROR, false, Scale.ROBUST, 0)
+                .apply(table(2, 1, 0, 2, 0, 3, 1, 4, 1, 5, 1));
+        double q = 2.2191444659850757;
+        double sd = Math.sqrt(0.24);
+        assertArrayEquals(new double[] {-2 / q, -1 / sd, -1 / q, -1 / sd, 0, 0, 1 / q, 0, 2 / q, 0},
+                p.matrix().rowMajorCopy(), 1e-15);
+        assertTrue(p.report().steps().contains(Scale.ROBUST.sentence()));
+    }
+
+    @Test
+    void robustScalingKeepsTheSeparationOfTwoModesThatZscoresShrink() {
+        // c = {0, 0.1, 0.2, 10, 10.1, 10.2}: two modes 10 apart. n = 6, h = 4, k = C(4, 2) = 6: the six distances
+        // within the modes are 0.1 (four times) and 0.2 (twice), so the sixth is 0.2 and Qn = 0.2 * 2.2191444659850757.
+        // The modes end (10 - 0.2) / Qn = 22.08 apart; as z-scores (population SD 5.000667, numpy std) only 1.96 apart.
+        Prepared robust = prep(MissingPolicy.ERROR, false, Scale.ROBUST, 0).apply(table(1, 0, 0.1, 0.2, 10, 10.1, 10.2));
+        Prepared z = prep(MissingPolicy.ERROR, false, Scale.ZSCORE, 0).apply(table(1, 0, 0.1, 0.2, 10, 10.1, 10.2));
+        double[] r = robust.matrix().rowMajorCopy();
+        double[] s = z.matrix().rowMajorCopy();
+        assertEquals(9.8 / (0.2 * 2.2191444659850757), r[3] - r[2], 1e-9);
+        assertEquals(9.8 / 5.000666622228147, s[3] - s[2], 1e-9);
+    }
+
+    @Test
     void centerSubtractsTheMeanAndLeavesConstantFeaturesAtExactZero() {
         // a = {1, 2, 6}: mean 3. b = {0.1, 0.1, 0.1} is constant: its mean is taken as 0.1 exactly.
         Prepared p = prep(MissingPolicy.ERROR, false, Scale.CENTER, 0).apply(table(2, 1, 0.1, 2, 0.1, 6, 0.1));

@@ -72,7 +72,7 @@ class InputOptionsTest {
                 refusal("--top-variable many"));
         String[][] expected = {{"'--delimiter'", "'ab' is not one character"}, {"'--delimiter'", "quote character"},
             {"'--missing'", "unknown missing-value policy 'fill'; use one of error, drop-features, drop-samples,"
-                + " impute-median"}, {"'--scale'", "unknown scaling 'unit'; use one of none, center, zscore"},
+                + " impute-median"}, {"'--scale'", "unknown scaling 'unit'; use one of none, center, zscore, robust"},
             {"'--top-variable'", "'-5' is negative"}, {"'--top-variable'", "'many' is not a whole number"}};
         for (int k = 0; k < expected.length; k++) {
             String m = messages.get(k);

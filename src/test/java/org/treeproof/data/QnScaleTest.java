@@ -1,4 +1,4 @@
-package org.treeproof.resample;
+package org.treeproof.data;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -1,4 +1,4 @@
-package org.treeproof.resample;
+package org.treeproof.data;
 
 import java.util.Arrays;
 
