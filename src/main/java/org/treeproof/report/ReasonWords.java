@@ -81,7 +81,8 @@ public final class ReasonWords implements Reason.Visitor<String> {
         if (!r.clustersFound()) {
             return f("The data depart from the null data without clusters: %s (%s). But no solution with clusters "
                     + "meets the rule's conditions, so this departure is not evidence of stable, cohesive clusters; "
-                    + "skewed or bounded features, a continuum or scattered far samples can cause it.", largest, ps);
+                    + "skewed or bounded features, a continuum, scattered far samples or, under z-scores, groups on "
+                    + "a few of many features diluted by the scaling (see --scale) can cause it.", largest, ps);
         }
         return f("The data hold cluster structure beyond noise: %s (%s).", largest, ps);
     }
