@@ -144,7 +144,24 @@ public final class CondensedDistances implements Serializable, CondensedRows {
         return OwnedDistances.trusted(items.length, gatherValues(items));
     }
 
+    /**
+     * {@link #gatherOwned} into {@code out}, an array of length {@code length(items.length)} that the caller lends
+     * to the result: its old values are overwritten, and the caller may use it again only once the result's last
+     * user (e.g. a linkage working in place) is done with it. Saves allocating (and zeroing) a matrix per replicate.
+     */
+    public OwnedDistances gatherOwned(int[] items, double[] out) {
+        if (out.length != length(items.length)) {
+            throw new IllegalArgumentException("an array of " + out.length + " values cannot hold the distances of "
+                    + items.length + " items");
+        }
+        return OwnedDistances.trusted(items.length, gatherValues(items, out));
+    }
+
     private double[] gatherValues(int[] items) {
+        return gatherValues(items, new double[length(items.length)]);
+    }
+
+    private double[] gatherValues(int[] items, double[] out) {
         int m = items.length;
         // (i, j) with i < j is at base[i] + j: one addition per pair instead of the index arithmetic
         int[] base = new int[m];
@@ -153,7 +170,6 @@ public final class CondensedDistances implements Serializable, CondensedRows {
             Objects.checkIndex(i, n);
             base[a] = (int) ((long) n * i - (long) i * (i + 1) / 2 - i - 1);
         }
-        double[] out = new double[length(m)];
         double[] v = values;
         int t = 0;
         for (int a = 0; a < m; a++) {

@@ -36,6 +36,20 @@ public final class OwnedDistances implements CondensedRows {
         return new OwnedDistances(n, array().clone());
     }
 
+    /**
+     * A copy of these distances in {@code out} (of this matrix's length), which the caller lends to the copy: the
+     * caller may use {@code out} again only once the copy's last user (e.g. a linkage working in place) is done.
+     */
+    public OwnedDistances copyInto(double[] out) {
+        double[] v = array();
+        if (out.length != v.length) {
+            throw new IllegalArgumentException("an array of " + out.length + " values cannot hold a copy of "
+                    + v.length);
+        }
+        System.arraycopy(v, 0, out, 0, v.length);
+        return new OwnedDistances(n, out);
+    }
+
     /** A copy of {@code distances} that its owner may give up. */
     public static OwnedDistances copyOf(CondensedDistances distances) {
         Objects.requireNonNull(distances, "distances");

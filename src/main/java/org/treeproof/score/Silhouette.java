@@ -133,8 +133,14 @@ public final class Silhouette {
     /**
      * The silhouette of each clustering under the same {@code distances}, as {@link #of(CondensedDistances,
      * Clustering)} then {@link #compute()} one by one (null where the clustering is null), with one pass over the
-     * matrix for all of them instead of one each: every pair's distance is read once and added to the sums of
-     * every clustering, in the same order as a pass of its own, so each result has the same bits.
+     * matrix for all of them instead of one each. The pass sums each sample's distances to the blocks of the
+     * clusterings' common refinement (the groups of samples that every clustering puts together; for the nested
+     * cuts of a few trees a few dozen blocks), two additions per pair whatever the number of clusterings; a
+     * clustering's sum to one of its clusters is then the sum of its blocks' sums, in block order. The sums are
+     * the same as a pass of its own up to rounding (they are added in another order), so a width can differ from
+     * {@link #compute()}'s in the last bits; the result does not depend on threads or on the order of the
+     * clusterings. When the refinement has too many blocks for the sums' memory, each clustering's own sums are
+     * accumulated in the same pass instead.
      */
     public static Result[] computeEach(CondensedDistances distances, Clustering[] clusterings) {
         int count = clusterings.length;
@@ -154,12 +160,72 @@ public final class Silhouette {
                 any = true;
             }
         }
-        double[][] sums = any ? clusterSumsAllPairs(distances, labels, widths) : new double[count][];
+        double[][] sums = !any ? new double[count][] : refinedSums(distances, labels, widths);
         Result[] out = new Result[count];
         for (int q = 0; q < count; q++) {
             out[q] = each[q] == null ? null : each[q].compute(sums[q]);
         }
         return out;
+    }
+
+    /**
+     * Each labelling's per-sample cluster sums ({@code labels[q]} null: none for q) through the blocks of the
+     * labellings' common refinement, or directly when the blocks' sums would exceed {@link #SUMS_LIMIT}.
+     */
+    private static double[][] refinedSums(CondensedDistances distances, int[][] labels, int[] widths) {
+        int n = distances.size();
+        int[] block = new int[n];
+        int blocks = 1;
+        for (int[] lab : labels) {
+            if (lab == null) {
+                continue;
+            }
+            // refine: the pair (block, label) gets a new block number, in the order of first appearance
+            var ids = new java.util.HashMap<Long, Integer>();
+            for (int i = 0; i < n; i++) {
+                long key = (long) block[i] * n + lab[i];
+                Integer id = ids.get(key);
+                if (id == null) {
+                    id = ids.size();
+                    ids.put(key, id);
+                }
+                block[i] = id;
+            }
+            blocks = ids.size();
+        }
+        if ((long) n * blocks > SUMS_LIMIT) {
+            return clusterSumsAllPairs(distances, labels, widths);
+        }
+        double[] blockSums = clusterSumsAllPairs(distances, new int[][] {block}, new int[] {blocks})[0];
+        int[] first = new int[blocks];
+        Arrays.fill(first, -1);
+        for (int i = 0; i < n; i++) {
+            if (first[block[i]] < 0) {
+                first[block[i]] = i;
+            }
+        }
+        double[][] sums = new double[labels.length][];
+        for (int q = 0; q < labels.length; q++) {
+            int[] lab = labels[q];
+            if (lab == null) {
+                continue;
+            }
+            int k = widths[q];
+            int[] labelOf = new int[blocks];
+            for (int b = 0; b < blocks; b++) {
+                labelOf[b] = lab[first[b]];
+            }
+            double[] s = new double[n * k];
+            for (int i = 0; i < n; i++) {
+                int from = i * blocks;
+                int to = i * k;
+                for (int b = 0; b < blocks; b++) {
+                    s[to + labelOf[b]] += blockSums[from + b];
+                }
+            }
+            sums[q] = s;
+        }
+        return sums;
     }
 
     /** Whether {@link #compute} takes the all-pairs sums, over {@code width} label columns. */

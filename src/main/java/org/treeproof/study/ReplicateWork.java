@@ -22,8 +22,9 @@ import org.treeproof.tree.SizedCuts;
  *
  * <p>Sample replicates gather their rows of the full distance matrix and never recompute a distance;
  * feature replicates recompute distances over their features, on one thread (the replicates themselves
- * run in parallel). Memory per running replicate: one condensed matrix over its draws, the working copy of
- * every linkage but the last (which works in place on it), and O(n · maxK) labels.
+ * run in parallel). Memory per running replicate: one condensed matrix over its draws, one working copy that
+ * every linkage but the last overwrites in turn (the last works in place on the matrix), and O(n · maxK) labels;
+ * both arrays are kept for the next replicate of this work object (two per thread at most).
  *
  * <p><b>Shipped to other machines</b>, the work carries the data table but not the full n² matrix (unless
  * there is no table, as for an input of distances). A copy without the matrix computes each replicate's
@@ -43,6 +44,11 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
     private final int maxK;
     private final int minClusterSize;
     private final int samples;
+    /**
+     * Condensed arrays of finished replicates, for the next ones to overwrite instead of allocating (and zeroing)
+     * two matrices per replicate; at most two per thread that ran one. Not shipped: a copy starts empty.
+     */
+    private final transient java.util.Queue<double[]> spare = new java.util.concurrent.ConcurrentLinkedQueue<>();
 
     /**
      * @param data      the data table, or {@code null} when only distances are known
@@ -78,6 +84,8 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         int[] draws = plan.draws();
         int[] distinct = plan.distinct();
         OwnedDistances d;
+        double[] gathered = null;
+        double[] work = null;
         if (plan.resamplesFeatures() || distances == null) {
             DataMatrix rows = data.selectSamples(distinct);
             OwnedDistances onDistinct = plan.resamplesFeatures() ? metric.computeOwned(rows, plan.features(), 1)
@@ -85,15 +93,22 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
             d = draws.length == distinct.length ? onDistinct
                     : onDistinct.freeze().gatherOwned(plan.drawToDistinct());
         } else {
-            d = distances.gatherOwned(draws);
+            gathered = borrow(CondensedDistances.length(draws.length));
+            d = distances.gatherOwned(draws, gathered);
         }
         int[] firstDrawOf = firstDrawOfDistinct(plan);
         int[][][] labels = new int[linkages.size()][][];
         BranchSupport.Replicate[] support = supports == null ? null : new BranchSupport.Replicate[linkages.size()];
         int last = linkages.size() - 1;
         for (int l = 0; l <= last; l++) {
-            // each linkage overwrites a matrix of its own; the last one takes the replicate's, so no copy is made
-            MergeTree tree = linkages.get(l).clusterInPlace(l == last ? d : d.copy());
+            // each linkage overwrites a matrix of its own (one array, reused from linkage to linkage); the last one
+            // takes the replicate's, so no copy is made for it
+            OwnedDistances mine = d;
+            if (l < last) {
+                work = work != null ? work : borrow(CondensedDistances.length(draws.length));
+                mine = d.copyInto(work);
+            }
+            MergeTree tree = linkages.get(l).clusterInPlace(mine);
             int minSize = StudySettings.minClusterSizeFor(minClusterSize, samples, tree.leaves());
             int[][] cuts = SizedCuts.of(tree, minSize, maxK).labelsUpTo(maxK);
             labels[l] = new int[maxK][];
@@ -105,7 +120,24 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
                 support[l] = supports.get(l).score(draws, tree);
             }
         }
+        // every tree is built: no linkage holds the arrays any longer
+        if (work != null) {
+            spare.add(work);
+        }
+        if (gathered != null) {
+            spare.add(gathered);
+        }
         return new ReplicateOutcome(index, distinct, labels, support);
+    }
+
+    /** A spare array of {@code length} values (old contents), or a new one; spares of another length are dropped. */
+    private double[] borrow(int length) {
+        for (double[] a = spare.poll(); a != null; a = spare.poll()) {
+            if (a.length == length) {
+                return a;
+            }
+        }
+        return new double[length];
     }
 
     /**
