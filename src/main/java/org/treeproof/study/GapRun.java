@@ -3,6 +3,7 @@ package org.treeproof.study;
 import java.util.List;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.distance.CondensedDistances;
+import org.treeproof.distance.OwnedDistances;
 import org.treeproof.resample.ReferenceData;
 import org.treeproof.distance.Metric;
 import org.treeproof.resample.ReplicateExecutor;
@@ -101,12 +102,27 @@ final class GapRun {
             // Euclidean distances and sums of squares are the same in the reference's own coordinates (an exact
             // rotation), which skips the back-transform to the features.
             DataMatrix ref = metric.rotationInvariant() ? generator.drawCoordinates(seed) : generator.draw(seed);
-            CondensedDistances rd = metric.compute(ref, 1);
             double[][] out = new double[linkages.size() + 1][];
             out[0] = new double[] {index};
-            for (int li = 0; li < linkages.size(); li++) {
-                MergeTree tree = linkages.get(li).cluster(rd);
-                out[li + 1] = logW(metric, ref, rd, tree, maxK);
+            if (!metric.rotationInvariant()) {
+                CondensedDistances rd = metric.compute(ref, 1);   // W_k is then read from the distances
+                for (int li = 0; li < linkages.size(); li++) {
+                    out[li + 1] = logW(metric, ref, rd, linkages.get(li).cluster(rd), maxK);
+                }
+                return out;
+            }
+            // W_k comes from the coordinates, so the trees may overwrite the distances: every linkage but the
+            // last works on one copy (overwritten in turn), the last in place, instead of a fresh copy each
+            OwnedDistances rd = metric.computeOwned(ref, 1);
+            int last = linkages.size() - 1;
+            double[] work = null;
+            for (int li = 0; li <= last; li++) {
+                OwnedDistances mine = rd;
+                if (li < last) {
+                    work = work != null ? work : new double[CondensedDistances.length(rd.size())];
+                    mine = rd.copyInto(work);
+                }
+                out[li + 1] = logW(metric, ref, null, linkages.get(li).clusterInPlace(mine), maxK);
             }
             return out;
         }
@@ -117,6 +133,7 @@ final class GapRun {
         return Seeds.seedFor(masterSeed, Seeds.Purpose.GAP_REFERENCE, index);
     }
 
+    /** log W_k for k = 1..maxK; {@code d} is read only for a metric that is not rotation-invariant (else null). */
     private static double[] logW(Metric metric, DataMatrix x, CondensedDistances d, MergeTree tree, int maxK) {
         double[] out = new double[maxK];
         if (metric.rotationInvariant()) {
