@@ -50,6 +50,20 @@ public final class OwnedDistances implements CondensedRows {
         return new OwnedDistances(n, out);
     }
 
+    /**
+     * A copy of {@code distances} in {@code out} (of the matrix's length), lent by the caller as for
+     * {@link #copyInto}.
+     */
+    public static OwnedDistances copyOf(CondensedDistances distances, double[] out) {
+        Objects.requireNonNull(distances, "distances");
+        if (out.length != CondensedDistances.length(distances.size())) {
+            throw new IllegalArgumentException("an array of " + out.length + " values cannot hold a copy of the "
+                    + "distances of " + distances.size() + " items");
+        }
+        distances.copyInto(out);
+        return new OwnedDistances(distances.size(), out);
+    }
+
     /** A copy of {@code distances} that its owner may give up. */
     public static OwnedDistances copyOf(CondensedDistances distances) {
         Objects.requireNonNull(distances, "distances");

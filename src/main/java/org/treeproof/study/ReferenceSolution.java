@@ -2,6 +2,7 @@ package org.treeproof.study;
 
 import java.util.List;
 import org.treeproof.distance.CondensedDistances;
+import org.treeproof.distance.OwnedDistances;
 import org.treeproof.resample.LocalExecutor;
 import org.treeproof.tree.Linkage;
 import org.treeproof.tree.MergeTree;
@@ -34,7 +35,10 @@ record ReferenceSolution(Linkage linkage, MergeTree tree, SizedCut[] cuts, int m
     }
 
     static ReferenceSolution of(Linkage linkage, CondensedDistances d, int maxK, int minSize) {
-        MergeTree tree = linkage.cluster(d);
+        return of(linkage, linkage.cluster(d), maxK, minSize);
+    }
+
+    private static ReferenceSolution of(Linkage linkage, MergeTree tree, int maxK, int minSize) {
         SizedCuts sized = SizedCuts.of(tree, minSize, maxK);
         SizedCut[] cuts = new SizedCut[maxK];
         for (int k = 1; k <= maxK; k++) {
@@ -50,6 +54,15 @@ record ReferenceSolution(Linkage linkage, MergeTree tree, SizedCut[] cuts, int m
     static List<ReferenceSolution> all(List<Linkage> linkages, CondensedDistances d, int maxK, int minSize,
             LocalExecutor executor) {
         var out = new java.util.ArrayList<ReferenceSolution>(linkages.size());
+        if (executor.threads() == 1) {
+            // one after another: every linkage overwrites the same copy of the matrix instead of a fresh one
+            double[] work = new double[CondensedDistances.length(d.size())];
+            for (Linkage linkage : linkages) {
+                var mine = OwnedDistances.copyOf(d, work);
+                out.add(of(linkage, linkage.clusterInPlace(mine), maxK, minSize));
+            }
+            return List.copyOf(out);
+        }
         executor.runHere(0, linkages.size(), i -> of(linkages.get(i), d, maxK, minSize), out::add);
         return List.copyOf(out);
     }
