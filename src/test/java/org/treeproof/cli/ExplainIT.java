@@ -118,19 +118,19 @@ class ExplainIT {
         assertTrue(covs.stream().noneMatch(x -> x.get("flagged").equals("true")), covs.toString());
 
         List<CSVRecord> sens = csv(dir.resolve("sensitivity.csv"));
-        // every linkage runs the other two scalings and log2; Ward takes Euclidean distances only, the other linkages
-        // also run every other metric
-        var expected = new java.util.ArrayList<>(List.of("scale: none", "scale: center", "log2: on"));
+        // every linkage runs the other three scalings and log2; Ward takes Euclidean distances only, the other
+        // linkages also run every other metric
+        var expected = new java.util.ArrayList<>(List.of("scale: none", "scale: center", "scale: robust", "log2: on"));
         if (!s.get("recommendation").get("linkage").asText().equals("ward")) {
             expected.addAll(List.of("metric: sqeuclidean", "metric: manhattan", "metric: chebyshev", "metric: cosine",
                     "metric: pearson", "metric: spearman"));
         }
         assertEquals(expected, sens.stream().map(x -> x.get("alternative")).toList());
-        for (CSVRecord x : sens.subList(0, 2)) {
+        for (CSVRecord x : sens.subList(0, 3)) {
             assertTrue(Double.parseDouble(x.get("ari")) > 0.9, x.toString());
             assertEquals("3", x.get("clustersSurviving"), x.toString());
         }
-        assertTrue(sens.get(2).get("note").startsWith("not run: "), sens.get(2).toString());
+        assertTrue(sens.get(3).get("note").startsWith("not run: "), sens.get(3).toString());
 
         Document html = Jsoup.parse(dir.resolve("report.html").toFile(), "UTF-8");
         for (String id : List.of("features", "covariates", "sensitivity")) {
