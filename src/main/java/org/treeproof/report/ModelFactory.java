@@ -247,9 +247,14 @@ final class ModelFactory {
         String base = "Stability and fit are statistical evidence about this data set, not validation of subtypes. "
                 + "Clusters that steer clinical or other consequential decisions need review by people who know the "
                 + "domain and confirmation in independent data.";
+        // resampling and null data cannot tell a cut through a continuous path from a gap between groups: the curved
+        // chain of the judgement suite and a random walk are supported (RELIABILITY.md, "A continuum is the blind spot")
+        String continuum = " Stable clusters can also be segments of a continuum (a gradient in time, dose or "
+                + "development): replicates and null data cannot tell a cut through a continuous path from a gap "
+                + "between groups, so look for the gaps in the tree and the heat map.";
         return switch (rec.verdict()) {
-            case SUPPORTED -> base;
-            case TENTATIVE -> base + " This solution is tentative: treat its clusters as hypotheses to test.";
+            case SUPPORTED -> base + continuum;
+            case TENTATIVE -> base + continuum + " This solution is tentative: treat its clusters as hypotheses to test.";
             case UNSUPPORTED -> base + " Finding no convincing structure here does not prove that none exists: it may "
                     + "lie in features, samples or scales this study did not examine.";
         };

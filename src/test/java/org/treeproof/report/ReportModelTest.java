@@ -66,6 +66,7 @@ class ReportModelTest {
             assertTrue(t.recommended().isEmpty());
         }
         assertTrue(m.caution().contains("does not prove that none exists"));
+        assertFalse(m.caution().contains("continuum"), m.caution());
     }
 
     @Test
@@ -169,6 +170,7 @@ class ReportModelTest {
         assertEquals(Verdict.TENTATIVE, m.decision().verdict());
         assertTrue(m.decision().headline().contains("tentatively"));
         assertTrue(m.caution().contains("hypotheses"));
+        assertTrue(m.caution().contains("segments of a continuum"), m.caution());
     }
 
     @Test
