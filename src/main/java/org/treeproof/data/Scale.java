@@ -33,17 +33,7 @@ public enum Scale {
     ZSCORE("Scaled every feature to mean 0 and population standard deviation 1 (z-scores).", "zscore", "z-score", "standardize", "standardise") {
         @Override
         void apply(PreparationRun run) {
-            boolean[] constant = run.table.constantFeatures();
-            int left = 0;
-            for (boolean c : constant) {
-                left += c ? 0 : 1;
-            }
-            if (left == 0) {
-                throw new InputException(run.where.source() + ": all " + run.table.samples() + " samples are "
-                        + "identical: every feature is constant across the samples, so --scale zscore leaves nothing"
-                        + " to cluster");
-            }
-            run.dropFeatures(constant, PreparationReport.Reason.CONSTANT, new int[constant.length]);
+            dropConstantFeatures(run, this);
             // z-scores do not change when a feature is scaled, so each is first divided by a power of two near its
             // largest magnitude (exactly): then neither the squares of 1e308 overflow nor those of 1e-310 underflow,
             // and ordinary values give the same bits as without it.
@@ -77,17 +67,7 @@ public enum Scale {
             + " standard deviation where Qn is 0).", "robust", "qn") {
         @Override
         void apply(PreparationRun run) {
-            boolean[] constant = run.table.constantFeatures();
-            int left = 0;
-            for (boolean c : constant) {
-                left += c ? 0 : 1;
-            }
-            if (left == 0) {
-                throw new InputException(run.where.source() + ": all " + run.table.samples() + " samples are "
-                        + "identical: every feature is constant across the samples, so --scale robust leaves nothing"
-                        + " to cluster");
-            }
-            run.dropFeatures(constant, PreparationReport.Reason.CONSTANT, new int[constant.length]);
+            dropConstantFeatures(run, this);
             run.table.scaleByPowerOfTwo(run.table.powerOfTwoExponents(), -1);
             int p = run.table.features();
             double[] median = new double[p];
@@ -156,6 +136,24 @@ public enum Scale {
     }
 
     abstract void apply(PreparationRun run);
+
+    /**
+     * Drops and reports the constant features, which have no spread to divide by; refuses a table whose every
+     * feature is constant, naming {@code scale}.
+     */
+    private static void dropConstantFeatures(PreparationRun run, Scale scale) {
+        boolean[] constant = run.table.constantFeatures();
+        int left = 0;
+        for (boolean c : constant) {
+            left += c ? 0 : 1;
+        }
+        if (left == 0) {
+            throw new InputException(run.where.source() + ": all " + run.table.samples() + " samples are "
+                    + "identical: every feature is constant across the samples, so --scale " + scale.userName()
+                    + " leaves nothing to cluster");
+        }
+        run.dropFeatures(constant, PreparationReport.Reason.CONSTANT, new int[constant.length]);
+    }
 
     @Override
     public String toString() {
