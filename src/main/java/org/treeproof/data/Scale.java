@@ -77,9 +77,7 @@ public enum Scale {
             for (int j = 0; j < p; j++) {
                 double[] x = run.table.column(j);
                 double qn = QnScale.of(x);
-                Arrays.sort(x);
-                int n = x.length;
-                median[j] = n % 2 == 1 ? x[n / 2] : (x[n / 2 - 1] + x[n / 2]) / 2;
+                median[j] = MissingPolicy.medianOfObserved(x);   // no cell is missing after the missing-value step
                 if (qn > 0) {
                     divisor[j] = qn;
                 } else {

@@ -114,15 +114,10 @@ final class GapRun {
             // W_k comes from the coordinates, so the trees may overwrite the distances: every linkage but the
             // last works on one copy (overwritten in turn), the last in place, instead of a fresh copy each
             OwnedDistances rd = metric.computeOwned(ref, 1);
-            int last = linkages.size() - 1;
-            double[] work = null;
-            for (int li = 0; li <= last; li++) {
-                OwnedDistances mine = rd;
-                if (li < last) {
-                    work = work != null ? work : new double[CondensedDistances.length(rd.size())];
-                    mine = rd.copyInto(work);
-                }
-                out[li + 1] = logW(metric, ref, null, linkages.get(li).clusterInPlace(mine), maxK);
+            double[] work = linkages.size() > 1 ? new double[CondensedDistances.length(rd.size())] : null;
+            List<MergeTree> trees = Linkage.clusterEach(linkages, rd, work);
+            for (int li = 0; li < linkages.size(); li++) {
+                out[li + 1] = logW(metric, ref, null, trees.get(li), maxK);
             }
             return out;
         }

@@ -99,16 +99,13 @@ final class ReplicateWork implements ReplicateTask<ReplicateOutcome> {
         int[] firstDrawOf = firstDrawOfDistinct(plan);
         int[][][] labels = new int[linkages.size()][][];
         BranchSupport.Replicate[] support = supports == null ? null : new BranchSupport.Replicate[linkages.size()];
-        int last = linkages.size() - 1;
-        for (int l = 0; l <= last; l++) {
-            // each linkage overwrites a matrix of its own (one array, reused from linkage to linkage); the last one
-            // takes the replicate's, so no copy is made for it
-            OwnedDistances mine = d;
-            if (l < last) {
-                work = work != null ? work : borrow(CondensedDistances.length(draws.length));
-                mine = d.copyInto(work);
-            }
-            MergeTree tree = linkages.get(l).clusterInPlace(mine);
+        if (linkages.size() > 1) {
+            work = borrow(CondensedDistances.length(draws.length));
+        }
+        // every linkage but the last overwrites the one working copy in turn; the last takes the replicate's matrix
+        List<MergeTree> trees = Linkage.clusterEach(linkages, d, work);
+        for (int l = 0; l < linkages.size(); l++) {
+            MergeTree tree = trees.get(l);
             int minSize = StudySettings.minClusterSizeFor(minClusterSize, samples, tree.leaves());
             int[][] cuts = SizedCuts.of(tree, minSize, maxK).labelsUpTo(maxK);
             labels[l] = new int[maxK][];

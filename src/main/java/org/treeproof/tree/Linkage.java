@@ -254,6 +254,22 @@ public enum Linkage {
         return algorithm.runInPlace(this, distances);
     }
 
+    /**
+     * The tree of each linkage over {@code distances}, which the last linkage takes over in place; every other
+     * linkage works on a copy in {@code work} (a lent array of the matrix's length, overwritten in turn; may be
+     * null for one linkage). The caller may use {@code work} again once this returns. The same trees as
+     * {@link #cluster(CondensedDistances)} one by one, without a fresh copy per linkage.
+     */
+    public static java.util.List<MergeTree> clusterEach(java.util.List<Linkage> linkages, OwnedDistances distances,
+            double[] work) {
+        var trees = new java.util.ArrayList<MergeTree>(linkages.size());
+        int last = linkages.size() - 1;
+        for (int l = 0; l <= last; l++) {
+            trees.add(linkages.get(l).clusterInPlace(l == last ? distances : distances.copyInto(work)));
+        }
+        return trees;
+    }
+
     /** The agglomeration algorithm a linkage uses, as described by Müllner (2011). */
     private enum Algorithm {
         MINIMUM_SPANNING_TREE {
