@@ -62,6 +62,18 @@ class PreparationTest {
     }
 
     @Test
+    void robustScalingOfHugeValuesAndOfAnAllConstantTable() {
+        // a = {1, 2, 3, 4, 1e308}: median 3, the third smallest pairwise distance 1, so Qn = 2.2191444659850757 and
+        // 1e308 becomes (1e308 - 3) / Qn = 4.506e307, finite (the power-of-two step keeps the differences in range).
+        double q = 2.2191444659850757;
+        Prepared p = prep(MissingPolicy.ERROR, false, Scale.ROBUST, 0).apply(table(1, 1, 2, 3, 4, 1e308));
+        assertArrayEquals(new double[] {-2 / q, -1 / q, 0, 1 / q, 1e308 / q}, p.matrix().rowMajorCopy(), 1e293);
+        InputException e = assertThrows(InputException.class,
+                () -> prep(MissingPolicy.ERROR, false, Scale.ROBUST, 0).apply(table(2, 1, 2, 1, 2)));
+        assertTrue(e.getMessage().contains("so --scale robust leaves nothing to cluster"), e.getMessage());
+    }
+
+    @Test
     void robustScalingKeepsTheSeparationOfTwoModesThatZscoresShrink() {
         // c = {0, 0.1, 0.2, 10, 10.1, 10.2}: two modes 10 apart. n = 6, h = 4, k = C(4, 2) = 6: the six distances
         // within the modes are 0.1 (four times) and 0.2 (twice), so the sixth is 0.2 and Qn = 0.2 * 2.2191444659850757.
