@@ -1,6 +1,6 @@
 """Seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
 
-Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, then five from 20261203, twenty-two from 20261204 and twenty from 20261205; writes OUTDIR/<name>.csv,
+Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, then five from 20261203, twenty-two from 20261204, twenty from 20261205 and fifteen from 20261206; writes OUTDIR/<name>.csv,
 samples in rows)
 """
 import os
@@ -144,3 +144,37 @@ P=np.array([[0.75]*20+[0.5]*20,[0.25]*20+[0.5]*20]); t=np.repeat([0,1],[90,90])
 save("VS2-binary-2types", (v.random((180,40))<P[t]).astype(float), truth=t)
 X,t=blobs([50]*4,[[0,0],[6,0],[0,6],[6,6]]); save("VS4-square-p2", X, truth=t)
 X=v.standard_normal((300,3)); X=5*X/np.linalg.norm(X,axis=1)[:,None]+0.3*v.standard_normal((300,3)); save("VN-sphere-shell", X)
+# --- added 3 Dec 2026 (morning), fifth generator, written and run once before any of its verdicts was seen. Prefix U:
+# UN none, US<k> k groups. Kinds: continua (a linear gradient, an arc), technical triplicates, small n, correlated
+# heavy tails, sparse counts with uneven library sizes, one latent trait on a 1-5 scale; small groups of 10, nested
+# groups in wide data, groups in t3 noise beside far samples, survey types, compositions, counts in rows with five
+# subtypes, unequal covariances, groups on a few features of mixed units.
+u=np.random.default_rng(20261206)
+def ublobs(sizes, centres, noise=lambda m,p: u.standard_normal((m,p))):
+    X=np.vstack([noise(m,len(c))+c for m,c in zip(sizes,centres)]); return X, np.repeat(np.arange(len(sizes)),sizes)
+t=u.uniform(0,1,(240,1)); a=u.standard_normal((1,12)); a=a/np.linalg.norm(a)*6
+save("UN-gradient-linear", t@a+u.standard_normal((240,12)))
+th=u.uniform(0,np.pi,220); X=np.column_stack([10*np.cos(th),10*np.sin(th)])+u.standard_normal((220,2))
+save("UN-gradient-arc-p10", np.hstack([X,u.standard_normal((220,8))]))
+B=u.standard_normal((60,8)); save("UN-tech-triplicates", np.repeat(B,3,axis=0)+0.15*u.standard_normal((180,8)))
+save("UN-small-n30-p5", u.standard_normal((30,5)))
+S=0.7**np.abs(np.subtract.outer(np.arange(20),np.arange(20))); L=np.linalg.cholesky(S)
+save("UN-t3-correlated-p20", (u.standard_normal((250,20))@L.T)/np.sqrt(u.chisquare(3,(250,1))/3))
+sf=np.exp(u.normal(0,0.5,(1,80))); mu=np.exp(u.normal(0,1.2,(300,1)))*sf
+save_rows("UN-sparse-counts-rows", u.negative_binomial(2,2/(2+mu)))
+z=u.standard_normal((200,1)); ld=u.uniform(0.5,1.2,(1,20))
+save("UN-likert-one-trait", np.clip(np.round(3+z@ld+0.8*u.standard_normal((200,20))),1,5))
+X,t=ublobs([10,10,10],[[8,0,0,0,0,0],[0,8,0,0,0,0],[0,0,0,0,0,0]]); save("US3-n30-small", X, truth=t)
+X=u.standard_normal((160,200)); t=np.repeat([0,1,2,3],40); X[t>=2,:20]+=3; X[t==1,20:30]+=3; X[t==3,30:40]+=3
+save("US4-nested-wide-p200", X, truth=t)
+X,t=ublobs([120,120],[[7,7,7,0,0,0,0,0],[0]*8],lambda m,p: u.standard_t(3,(m,p))); O=u.standard_normal((12,8))
+O=O/np.linalg.norm(O,axis=1)[:,None]*20; save("US2-t3-12far", np.vstack([X,O]), truth=np.concatenate([t,-np.ones(12)]))
+P=np.array([[4.5]*4+[1.5]*4+[3]*4,[1.5]*4+[4.5]*4+[3]*4,[3]*4+[3]*4+[4.5]*4]); t=np.repeat([0,1,2],60)
+save("US3-likert-types", np.clip(np.round(P[t]+0.8*u.standard_normal((180,12))),1,5), truth=t)
+A=np.full((2,10),2.0); A[0,0]=A[1,1]=8; t=np.repeat([0,1],100); save("US2-dirichlet-groups", np.vstack([u.dirichlet(A[g]) for g in t]), truth=t)
+mu=np.exp(u.normal(3,1.5,(500,1)))*np.ones((500,60)); t=np.repeat(np.arange(5),12)
+for g in range(5): mu[g*30:(g+1)*30, t==g]*=4
+save_rows("US5-counts-rows", u.negative_binomial(5,5/(5+mu)), truth=t)
+R=np.diag([3,1,1,1,1]); X,t=ublobs([120,80],[[0,0,0,0,0],[0,8,0,0,0]]); X[t==1]=(X[t==1]-[0,8,0,0,0])@R+[0,8,0,0,0]
+save("US2-unequal-cov", X, truth=t)
+X,t=ublobs([60,60,60],[[6,0,0]+[0]*9,[0,6,0]+[0]*9,[0,0,6]+[0]*9]); save("US3-mixed-units", X*np.logspace(-1,2,12), truth=t)
