@@ -151,7 +151,7 @@ X=v.standard_normal((300,3)); X=5*X/np.linalg.norm(X,axis=1)[:,None]+0.3*v.stand
 # subtypes, unequal covariances, groups on a few features of mixed units.
 u=np.random.default_rng(20261206)
 def ublobs(sizes, centres, noise=lambda m,p: u.standard_normal((m,p))):
-    X=np.vstack([noise(m,len(c))+c for m,c in zip(sizes,centres)]); return X, np.repeat(np.arange(len(sizes)),sizes)
+    return blobs(sizes, centres, noise)   # blobs of the fourth generator, drawing from this generator's seed
 t=u.uniform(0,1,(240,1)); a=u.standard_normal((1,12)); a=a/np.linalg.norm(a)*6
 save("UN-gradient-linear", t@a+u.standard_normal((240,12)))
 th=u.uniform(0,np.pi,220); X=np.column_stack([10*np.cos(th),10*np.sin(th)])+u.standard_normal((220,2))
