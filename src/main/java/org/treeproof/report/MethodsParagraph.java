@@ -28,9 +28,16 @@ import org.treeproof.tree.Linkage;
  * text.
  */
 public final class MethodsParagraph {
-    /** Markdown's inline markup characters, escaped where text comes from outside the renderer. */
+    /**
+     * Markdown's inline markup characters, escaped where text comes from outside the renderer. A {@code <} is
+     * escaped only where it could open raw HTML or an autolink (before a letter, {@code /}, {@code !} or
+     * {@code ?}; CommonMark 0.31, sections 6.5-6.6), and a {@code >} never (it marks a block quote only at the start
+     * of a line, and every paragraph here starts with the renderer's own words), so that "p < 0.001" stays
+     * readable when the text is pasted as it is.
+     */
     private static final CharSequenceTranslator MARKDOWN = new LookupTranslator(Map.of("\\", "\\\\", "`", "\\`",
-            "*", "\\*", "_", "\\_", "[", "\\[", "]", "\\]", "<", "\\<", ">", "\\>"));
+            "*", "\\*", "_", "\\_", "[", "\\[", "]", "\\]"));
+    private static final java.util.regex.Pattern TAG_OPENER = java.util.regex.Pattern.compile("<(?=[A-Za-z/!?])");
 
     private final ReportModel model;
 
@@ -253,6 +260,6 @@ public final class MethodsParagraph {
     }
 
     private static String md(String text) {
-        return MARKDOWN.translate(text);
+        return TAG_OPENER.matcher(MARKDOWN.translate(text)).replaceAll("\\\\<");
     }
 }
