@@ -31,13 +31,17 @@ public final class MethodsParagraph {
     /**
      * Markdown's inline markup characters, escaped where text comes from outside the renderer. A {@code <} is
      * escaped only where it could open raw HTML or an autolink (before a letter, {@code /}, {@code !} or
-     * {@code ?}; CommonMark 0.31, sections 6.5-6.6), and a {@code >} never (it marks a block quote only at the start
-     * of a line, and every paragraph here starts with the renderer's own words), so that "p < 0.001" stays
-     * readable when the text is pasted as it is.
+     * {@code ?}; CommonMark spec 0.31.2, "Raw HTML" and "Autolinks"), a {@code >} never (it marks a block quote
+     * only at the start of a line, and every paragraph here starts with the renderer's own words), and a {@code _}
+     * only where it is not inside a word (an underscore between letters or digits cannot open or close emphasis;
+     * "Emphasis and strong emphasis"), so that "p < 0.001" and feature names such as petal_width_cm read the same
+     * when the text is pasted as it is.
      */
     private static final CharSequenceTranslator MARKDOWN = new LookupTranslator(Map.of("\\", "\\\\", "`", "\\`",
-            "*", "\\*", "_", "\\_", "[", "\\[", "]", "\\]"));
+            "*", "\\*", "[", "\\[", "]", "\\]"));
     private static final java.util.regex.Pattern TAG_OPENER = java.util.regex.Pattern.compile("<(?=[A-Za-z/!?])");
+    private static final java.util.regex.Pattern LOOSE_UNDERSCORE =
+            java.util.regex.Pattern.compile("(?<![\\p{L}\\p{N}])_|_(?![\\p{L}\\p{N}])");
 
     private final ReportModel model;
 
@@ -260,6 +264,7 @@ public final class MethodsParagraph {
     }
 
     private static String md(String text) {
-        return TAG_OPENER.matcher(MARKDOWN.translate(text)).replaceAll("\\\\<");
+        String escaped = TAG_OPENER.matcher(MARKDOWN.translate(text)).replaceAll("\\\\<");
+        return LOOSE_UNDERSCORE.matcher(escaped).replaceAll("\\\\_");
     }
 }
