@@ -1,6 +1,6 @@
 """Seeded data sets that the decision rule was not developed on (bench/judgement/unseen/README.md).
 
-Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, then five from 20261203, twenty-two from 20261204, twenty from 20261205 and fifteen from 20261206; writes OUTDIR/<name>.csv,
+Usage: python3 gen.py OUTDIR   (numpy only; seed 20261202, then five from 20261203, twenty-two from 20261204, twenty from 20261205 fifteen from 20261206 and fourteen from 20261207; writes OUTDIR/<name>.csv,
 samples in rows)
 """
 import os
@@ -178,3 +178,35 @@ save_rows("US5-counts-rows", u.negative_binomial(5,5/(5+mu)), truth=t)
 R=np.diag([3,1,1,1,1]); X,t=ublobs([120,80],[[0,0,0,0,0],[0,8,0,0,0]]); X[t==1]=(X[t==1]-[0,8,0,0,0])@R+[0,8,0,0,0]
 save("US2-unequal-cov", X, truth=t)
 X,t=ublobs([60,60,60],[[6,0,0]+[0]*9,[0,6,0]+[0]*9,[0,0,6]+[0]*9]); save("US3-mixed-units", X*np.logspace(-1,2,12), truth=t)
+# --- added 3 Dec 2026 (evening), sixth generator, written and run once before any of its verdicts was seen. Prefix X:
+# XN none, XS<k> k groups. Kinds: a full ring, very heavy tails (t2), skewed features with far samples, one factor over
+# wide data, small wide noise; a small group in t3 noise, three families of two subgroups, small groups in wide data,
+# a tight knot of far samples beside two groups, five groups in a row, groups of unequal spread, groups beside a
+# processing batch, counts in rows, yes/no answers of two types.
+x=np.random.default_rng(20261207)
+def xblobs(sizes, centres, noise=lambda m,p: x.standard_normal((m,p))):
+    return blobs(sizes, centres, noise)   # blobs of the fourth generator, drawing from this generator's seed
+th=x.uniform(0,2*np.pi,200); save("XN-ring-p2", np.column_stack([5*np.cos(th),5*np.sin(th)])+0.4*x.standard_normal((200,2)))
+save("XN-t2-p6", x.standard_normal((180,6))/np.sqrt(x.chisquare(2,(180,1))/2))
+O=x.standard_normal((6,8)); O=O/np.linalg.norm(O,axis=1)[:,None]*15
+save("XN-gamma-6far", np.vstack([x.gamma(2,1,(200,8)), 2+O]))
+ld=np.zeros((1,300)); ld[0,:60]=x.uniform(0.5,1,60); save("XN-wide-factor-p300", x.standard_normal((120,1))@ld+x.standard_normal((120,300)))
+save("XN-small-n40-p50", x.standard_normal((40,50)))
+X,t=xblobs([90,10],[[0]*6,[8,8,8,8,0,0]],lambda m,p: x.standard_t(3,(m,p))); save("XS2-90-10-t3", X, truth=t)
+F=np.array([[10,0],[0,10],[-10,0]]); C=[list(F[f]+s)+[0]*4 for f in range(3) for s in ([4,0],[0,4])]
+X,t=xblobs([40]*6,C); save("XS6-nested-3x2", X, truth=t//2)
+X=x.standard_normal((45,300)); t=np.repeat([0,1,2],15)
+for g in range(3): X[t==g,g*20:(g+1)*20]+=2.5
+save("XS3-wide-n45-p300", X, truth=t)
+X,t=xblobs([70,70],[[8,8,8,0,0],[0]*5]); K=x.standard_normal((1,5)); K=K/np.linalg.norm(K)*25
+save("XS2-4-knotted-far", np.vstack([X,K+0.3*x.standard_normal((4,5))]), truth=np.concatenate([t,-np.ones(4)]))
+X,t=xblobs([40]*5,[[6*g,0,0,0,0] for g in range(5)]); save("XS5-in-a-row", X, truth=t)
+X,t=xblobs([100,100],[[0]*5,[12,0,0,0,0]]); X[t==1]=(X[t==1]-[12,0,0,0,0])*3+[12,0,0,0,0]; save("XS2-spread-1-3", X, truth=t)
+C=np.zeros((4,12))
+for g in range(4): C[g,2*g:2*g+2]=7
+X,t=xblobs([50]*4,C); X[::2]+=0.7; save("XS4-groups-batch", X, truth=t)
+mu=np.exp(x.normal(3,1.5,(600,1)))*np.ones((600,45)); t=np.repeat([0,1,2],15)
+for g in range(3): mu[g*40:(g+1)*40, t==g]*=3
+save_rows("XS3-counts-rows", x.negative_binomial(5,5/(5+mu)), truth=t)
+P=np.full((2,30),0.5); P[0,:10]=0.8; P[1,:10]=0.2; t=np.repeat([0,1],[100,80])
+save("XS2-yes-no-types", (x.random((180,30))<P[t]).astype(float), truth=t)
