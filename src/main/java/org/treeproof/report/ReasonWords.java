@@ -235,15 +235,22 @@ public final class ReasonWords implements Reason.Visitor<String> {
 
     @Override
     public String criteria(Reason.Criteria r) {
-        var parts = new ArrayList<String>();
+        // criteria that pick the same k share one clause, in the order the first of them comes
+        var byK = new java.util.LinkedHashMap<Integer, List<String>>();
         for (Recommendation.CriterionChoice c : r.disagreeing()) {
             if (c.criterion() != null) {
-                String verdict = r.linkage().stream().filter(a -> a.k() == c.k()).findFirst()
-                        .map(a -> a.verdict() == Verdict.SUPPORTED ? "" : f(", %s there%s", a.verdict().id(),
-                                a.failed().isEmpty() ? "" : ": it fails the condition that " + condition(a.failed().get(0))))
-                        .orElse("");
-                parts.add(f("%s picks k = %d%s", c.name(), c.k(), verdict));
+                byK.computeIfAbsent(c.k(), k -> new ArrayList<>()).add(c.name());
             }
+        }
+        var parts = new ArrayList<String>();
+        for (var e : byK.entrySet()) {
+            int k = e.getKey();
+            String verdict = r.linkage().stream().filter(a -> a.k() == k).findFirst()
+                    .map(a -> a.verdict() == Verdict.SUPPORTED ? "" : f(", %s there%s", a.verdict().id(),
+                            a.failed().isEmpty() ? "" : ": it fails the condition that " + condition(a.failed().get(0))))
+                    .orElse("");
+            parts.add(f("%s %s k = %d%s", Prose.and(e.getValue()), e.getValue().size() == 1 ? "picks" : "pick", k,
+                    verdict));
         }
         return parts.isEmpty() ? f("Every criterion taken alone agrees with k = %d.", r.recommendedK())
                 : "Taken alone, " + String.join("; ", parts) + ".";
