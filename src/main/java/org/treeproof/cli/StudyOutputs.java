@@ -70,7 +70,40 @@ final class StudyOutputs {
                 .orElse(List.of(String.format(Locale.ROOT, "Read a distance table of %d samples.", loaded.samples()))));
         steps.addAll(loneFeatureWarnings(loaded));
         steps.addAll(skewWarning(loaded));
+        steps.addAll(multimodalNote(loaded));
         return steps;
+    }
+
+    /**
+     * With z-scores, one note when some (not all) features have values in separated modes on their own
+     * ({@link org.treeproof.data.MultimodalFeatures}; the three with the largest dip named, then a count).
+     */
+    static List<String> multimodalNote(LoadedInput loaded) {
+        boolean zscores = loaded.preparation().map(r -> r.settings().scale() == org.treeproof.data.Scale.ZSCORE)
+                .orElse(false);
+        if (!zscores || loaded.matrix().isEmpty()) {
+            return List.of();
+        }
+        var data = loaded.matrix().get();
+        var result = org.treeproof.data.MultimodalFeatures.of(data);
+        var flags = result.flags();
+        if (flags.isEmpty() || flags.size() == data.features()) {
+            return List.of();
+        }
+        var named = new ArrayList<String>();
+        for (int i = 0; i < Math.min(3, flags.size()); i++) {
+            var t = flags.get(i).test();
+            named.add(String.format(Locale.ROOT, "%s (dip %.3f, p %s)", flags.get(i).feature(), t.dip(),
+                    t.pBelow() || t.pValue() < 0.001 ? "< 0.001" : String.format(Locale.ROOT, "= %.3f", t.pValue())));
+        }
+        return List.of(String.format(Locale.ROOT, "Note: %d of the %d features tested %s values in separated "
+                + "modes on their own (Hartigan's dip test, family-wise level %s over the features tested): %s%s. "
+                + "Z-scores divide each feature by its standard deviation, which for such a feature includes the "
+                + "distance between its modes, so groups that lie on a few features can be diluted by the others; "
+                + "with features in one unit, --scale none keeps those distances.", flags.size(), result.tested(),
+                flags.size() == 1 ? "has" : "have",
+                java.math.BigDecimal.valueOf(org.treeproof.data.MultimodalFeatures.ALPHA).toPlainString(),
+                String.join(", ", named), flags.size() > 3 ? ", ..." : ""));
     }
 
     /** One warning when features have a long tail on one side (the three most skewed named, then a count). */

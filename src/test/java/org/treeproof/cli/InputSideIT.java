@@ -131,6 +131,30 @@ class InputSideIT {
         assertFalse(summary("logged").path("input").path("preparation").toString().contains("long tail"));
     }
 
+    @Test
+    void featuresWithSeparatedModesAreNotedWithZScoresOnly() throws Exception {
+        // f1: three groups of 50 in a row, centres 6 apart (SD 1); f2-f4 Gaussian. Z-scoring divides f1 by about 5
+        var rng = new java.util.SplittableRandom(8);
+        var sb = new StringBuilder("id,f1,f2,f3,f4\n");
+        for (int i = 0; i < 150; i++) {
+            sb.append(String.format(java.util.Locale.ROOT, "s%d,%.6f,%.6f,%.6f,%.6f%n", i, 6 * (i / 50) + rng.nextGaussian(),
+                    rng.nextGaussian(), rng.nextGaussian(), rng.nextGaussian()));
+        }
+        Path data = Files.writeString(tmp.resolve("modes.csv"), sb.toString());
+        String[] quick = {"--replicates", "10", "--null-sets", "0", "--reference-sets", "0", "--max-k", "4"};
+        Jar.Result r = assess(concat(new String[] {data.toString(), "--out", "modes"}, quick));
+        assertEquals(0, r.exit(), r.err());
+        String steps = summary("modes").path("input").path("preparation").toString();
+        assertTrue(steps.contains("Note: 1 of the 4 features tested has values in separated modes on their own "
+                + "(Hartigan's dip test, family-wise level 0.01 over the features tested): f1 (dip "), steps);
+        assertTrue(steps.contains("--scale none"), steps);
+        assertTrue(Files.readString(tmp.resolve("modes").resolve("methods.md")).contains("separated modes"));
+        // without z-scores nothing divides f1 by its spread: no note
+        r = assess(concat(new String[] {data.toString(), "--out", "unscaled", "--scale", "none"}, quick));
+        assertEquals(0, r.exit(), r.err());
+        assertFalse(summary("unscaled").path("input").path("preparation").toString().contains("separated modes"));
+    }
+
     private static String[] concat(String[] a, String[] b) {
         String[] out = java.util.Arrays.copyOf(a, a.length + b.length);
         System.arraycopy(b, 0, out, a.length, b.length);
