@@ -26,14 +26,21 @@ public record EvidenceTable(Linkage linkage, double copheneticCorrelation, boole
                 throw new IllegalArgumentException("rows must run k = 2, 3, ... in order");
             }
         }
-        if (gapChoice < 0 || gapChoice > rows.size() + 1) {
-            throw new IllegalArgumentException("gap choice " + gapChoice + " outside 0.." + (rows.size() + 1));
+        // The gap statistic cuts the tree itself, so its choice may be a k with no row here (no cut into k
+        // clusters of at least the minimum size).
+        if (gapChoice < 0) {
+            throw new IllegalArgumentException("gap choice " + gapChoice + " is negative");
         }
     }
 
     /** Whether the gap statistic was computed. */
     public boolean hasGap() {
         return gapChoice > 0;
+    }
+
+    /** Whether the gap statistic's k has a row: a cut of the tree into that many clusters of the minimum size. */
+    public boolean gapChoiceHasRow() {
+        return gapChoice >= 2 && gapChoice <= rows.size() + 1;
     }
 
     /** The row at {@code k}. */

@@ -85,8 +85,10 @@ final class HtmlTables {
             }
             page.endTable();
             if (t.hasGap()) {
-                h.element("p", "note", f("The gap statistic picks k = %d%s.", t.gapChoice(), t.gapRuleMet() ? ""
-                        : " (its rule was not met below the largest k examined)"));
+                h.element("p", "note", f("The gap statistic picks k = %d%s%s.", t.gapChoice(), t.gapRuleMet() ? ""
+                        : " (its rule was not met below the largest k examined)", t.gapChoice() == 1
+                                || t.gapChoiceHasRow() ? "" : "; this tree has no cut into that many clusters of at "
+                                + "least the minimum size, so the table has no row for it"));
             }
         }
         if (tie) {

@@ -52,6 +52,30 @@ class ReportModelTest {
     }
 
     @Test
+    void aGapChoiceWithNoSizedCutIsReportedNotRefused() {
+        // Two groups of 15, 10 SDs apart on every feature, with a minimum cluster size of 16: no tree has a cut into
+        // two or more clusters of 16, so the evidence tables have no row, while the gap statistic (which cuts the
+        // trees itself) still picks k = 2. This once stopped the report with an internal error.
+        var settings = org.treeproof.study.StudySettings.builder().linkages(List.of(org.treeproof.tree.Linkage.WARD))
+                .maxK(5).replicates(10).referenceSets(10).nullSets(0).seed(11).minClusterSize(16).build();
+        var rng = new java.util.SplittableRandom(2);
+        double[] v = new double[30 * 4];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = (i / 4 >= 15 ? 10 : 0) + Studies.gaussian(rng);
+        }
+        Studies.Study s = Studies.run(new org.treeproof.data.DataMatrix(Studies.ids(30, i -> "s" + i),
+                Studies.names(4), v), settings);
+        ReportModel m = s.model();
+        EvidenceTable t = m.table(org.treeproof.tree.Linkage.WARD);
+        assertTrue(t.rows().isEmpty());
+        assertEquals(s.evidence().linkages().get(0).gapChoice(), t.gapChoice());
+        assertEquals(2, t.gapChoice());
+        assertFalse(t.gapChoiceHasRow());
+        String html = HtmlReport.of(m, List.of()).render();
+        assertTrue(html.contains("this tree has no cut into that many clusters of at least the minimum size"));
+    }
+
+    @Test
     void uniformNoiseIsUnsupportedAndTheClusterFiguresAreLeftOutWithANote() {
         ReportModel m = Studies.noise().model();
         assertEquals(Verdict.UNSUPPORTED, m.decision().verdict());
