@@ -76,7 +76,7 @@ final class StudyChartInputs {
                 + " linkage)";
         return new Plan("dendrogram", title, "", (dir, base) -> {
             var in = new DendrogramInput(title, chartTree(chosen.tree()), evidence.sampleIds().toArray(String[]::new),
-                    solution == null ? new int[n] : solution.clustering().labels(),
+                    solution == null ? new int[n] : rec.clustering().labels(),
                     solution == null ? Double.NaN : rec.cutHeight().chosen(), chosen.branchSupport(),
                     BranchPValueCharts.auPerMerge(chosen), heightLabel);
             var chart = new DendrogramChart(in);
@@ -91,14 +91,14 @@ final class StudyChartInputs {
         }
         String title = "Silhouette of " + rec.k() + " clusters, " + linkage + " linkage";
         return new Plan("silhouette", title, "", (dir, base) -> {
-            // outliers have no silhouette width: the chart shows the clustered samples
-            int[] clustered = solution.clustering().clustered();
+            // outliers have no silhouette width: the chart shows the recommended clusters' samples (widths of the cut)
+            int[] clustered = rec.clustering().clustered();
             double[] widths = new double[clustered.length];
             double[] all = solution.sampleSilhouette();
             for (int t = 0; t < clustered.length; t++) {
                 widths[t] = all[clustered[t]];
             }
-            var in = new SilhouetteInput(title, widths, solution.clustering().clusteredPartition().labels());
+            var in = new SilhouetteInput(title, widths, rec.clustering().clusteredPartition().labels());
             return new Drawn(new SilhouetteChart(in).write(dir, base), SilhouetteChart.WIDTH, SilhouetteChart.HEIGHT);
         });
     }
@@ -240,7 +240,7 @@ final class StudyChartInputs {
         return new Plan("heatmap", title, note, (dir, base) -> {
             var in = new DataHeatmapInput(title, n, q, features.values(data), data.sampleIds().toArray(String[]::new),
                     features.names(data), chartTree(chosen.tree()), features.tree(),
-                    solution == null ? null : solution.clustering().labels());
+                    solution == null ? null : rec.clustering().labels());
             var chart = new DataHeatmapChart(in);
             return new Drawn(chart.write(dir, base), DataHeatmapChart.WIDTH, chart.height());
         });

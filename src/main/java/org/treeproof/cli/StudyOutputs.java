@@ -57,7 +57,7 @@ final class StudyOutputs {
 
     LabelComparison labels() {
         return classes == null ? null
-                : LabelComparison.of(ReportModel.recommendedPartition(evidence, rec), classes);
+                : LabelComparison.of(ReportModel.recommendedPartition(rec), classes);
     }
 
     SummaryJson.LabelsSummary labelsSummary(LabelComparison l) {

@@ -38,10 +38,13 @@ final class Figures {
                         + "tree best represents the distances). No cut is recommended.", n, link, metric)));
 
         if (clusters) {
+            int afterCut = rec.clustering().outlierCount() - e.outliers();
             out.add(figure("silhouette", f("Silhouette widths at k = %d", k), f("Silhouette width of each sample in "
                     + "the %d-cluster solution, grouped by cluster and sorted; the average is %s. A width below 0 means "
-                    + "the sample is on average closer to another cluster (Rousseeuw 1987).", k,
-                    Numbers.fixed(e.silhouette(), 2))));
+                    + "the sample is on average closer to another cluster (Rousseeuw 1987).%s", k,
+                    Numbers.fixed(e.silhouette(), 2), afterCut == 0 ? "" : f(" The widths and their average are those "
+                            + "of the cut, which also held the %d far sample%s set aside afterwards (not drawn).",
+                            afterCut, afterCut == 1 ? "" : "s"))));
         }
 
         boolean calibrated = evidence.structureTest() != null;

@@ -157,10 +157,15 @@ public final class ReasonWords implements Reason.Visitor<String> {
 
     @Override
     public String outliers(Reason.Outliers r) {
+        String after = r.afterCut() == 0 ? "" : f(" %s of them joined their cluster far above its own first split and "
+                + "%s set aside after the cut was assessed, so the cut's figures (stability, silhouette, the evidence "
+                + "table) include %s; the clusters' sizes and members leave %s out.", r.afterCut() == r.count() ? "All"
+                : Integer.toString(r.afterCut()), r.afterCut() == 1 ? "was" : "were", r.afterCut() == 1 ? "it" : "them",
+                r.afterCut() == 1 ? "it" : "them");
         return f("%d sample%s %s set aside as outlier%s, not clusters: on branches of fewer than %d samples, or joining "
                 + "the tree (or their cluster) far above its first split into two large branches; they are listed in "
-                + "clusters.csv and left out of k.", r.count(), r.count() == 1 ? "" : "s", r.count() == 1 ? "is" : "are",
-                r.count() == 1 ? "" : "s", r.minClusterSize());
+                + "clusters.csv and left out of k.%s", r.count(), r.count() == 1 ? "" : "s", r.count() == 1 ? "is" : "are",
+                r.count() == 1 ? "" : "s", r.minClusterSize(), after);
     }
 
     @Override

@@ -122,17 +122,12 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
     }
 
     /**
-     * The recommended solution over all samples, in input order: the cut of the recommended linkage's tree at k,
-     * or one cluster when the verdict is unsupported. This is what {@link LabelComparison#of} compares.
+     * The recommended solution over all samples, in input order, as clusters.csv gives it: the recommendation's
+     * clusters, each outlier a group of its own (one cluster plus any far samples when the verdict is unsupported).
+     * This is what {@link LabelComparison#of} compares.
      */
-    public static Partition recommendedPartition(Evidence evidence, Recommendation recommendation) {
-        if (recommendation.k() == 1) {
-            return new Partition(new int[evidence.samples()], 1);
-        }
-        return evidence.linkages().stream().filter(l -> l.linkage() == recommendation.linkage()).findFirst()
-                .orElseThrow(() -> new IllegalArgumentException("the recommended linkage "
-                        + recommendation.linkage().id() + " is not in the evidence"))
-                .at(recommendation.k()).clustering().withSingletons();
+    public static Partition recommendedPartition(Recommendation recommendation) {
+        return recommendation.clustering().withSingletons();
     }
 
     /** The evidence table of a linkage. */

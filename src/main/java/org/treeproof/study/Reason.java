@@ -104,8 +104,15 @@ public sealed interface Reason {
         }
     }
 
-    /** Samples set aside as outliers in the recommended solution. */
-    record Outliers(int count, int minClusterSize) implements Reason {
+    /**
+     * Samples set aside as outliers in the recommended solution.
+     *
+     * @param count          all of them
+     * @param minClusterSize the fewest samples a cluster holds
+     * @param afterCut       how many of them were set aside after the assessed cut, as far from their cluster
+     *                       ({@code Recommender}'s far samples): the cut's figures include them
+     */
+    record Outliers(int count, int minClusterSize, int afterCut) implements Reason {
         @Override
         public <T> T accept(Visitor<T> v) {
             return v.outliers(this);

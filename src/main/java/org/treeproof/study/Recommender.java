@@ -123,7 +123,8 @@ public final class Recommender {
         reasons.add(new Reason.Chosen(winner, e));
         Clustering solution = farSamplesAside(le, e);
         if (solution.outlierCount() > 0) {
-            reasons.add(new Reason.Outliers(solution.outlierCount(), evidence.minClusterSize()));
+            reasons.add(new Reason.Outliers(solution.outlierCount(), evidence.minClusterSize(),
+                    solution.outlierCount() - e.outliers()));
         }
         if (!votes.isEmpty()) {
             reasons.add(new Reason.Votes(le.linkage(), winner.verdict(), votes, e.k(), rule.stableJaccard()));
@@ -150,7 +151,7 @@ public final class Recommender {
                     summaries.stream().filter(s -> s.linkage() != le.linkage()).toList()));
         }
         return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict(), levels, reasons, criteria,
-                flaggedClusters(e), flaggedSamples(e), summaries, agreement, rule, assessments, test, solution,
+                flaggedClusters(e, solution), flaggedSamples(e, solution), summaries, agreement, rule, assessments, test, solution,
                 evidence.minClusterSize(), votes);
     }
 
@@ -220,7 +221,7 @@ public final class Recommender {
         LinkageEvidence le = evidence.linkages().get(l);
         Clustering one = SizedCuts.of(le.tree(), evidence.minClusterSize(), 2).oneClusterWithOutliers(FAR_FACTOR);
         if (one.outlierCount() > 0) {
-            reasons.add(new Reason.Outliers(one.outlierCount(), evidence.minClusterSize()));
+            reasons.add(new Reason.Outliers(one.outlierCount(), evidence.minClusterSize(), 0));
         }
         int n = le.tree().leaves();
         double root = le.tree().height(n - 2);
@@ -354,23 +355,32 @@ public final class Recommender {
         return out;
     }
 
-    private List<ClusterEvidence> flaggedClusters(KEvidence e) {
+    /** The recommended clusters that are not stable, with their sizes in the final solution. */
+    private static List<ClusterEvidence> flaggedClusters(KEvidence e, Clustering solution) {
+        int[] sizes = new int[e.clusters().size()];
+        for (int label : solution.labels()) {
+            if (label >= 0) {
+                sizes[label]++;
+            }
+        }
         var out = new ArrayList<ClusterEvidence>();
         for (ClusterEvidence c : e.clusters()) {
             if (c.status() != JaccardStability.Status.STABLE) {
-                out.add(c);
+                out.add(new ClusterEvidence(c.id(), sizes[c.id() - 1], c.jaccard(), c.dissolvedShare(),
+                        c.recoveredShare(), c.status()));
             }
         }
         return out;
     }
 
-    private List<Recommendation.SampleFlag> flaggedSamples(KEvidence e) {
+    /** The flagged samples of the recommended clusters, leaving out every outlier of the final solution. */
+    private List<Recommendation.SampleFlag> flaggedSamples(KEvidence e, Clustering solution) {
         var out = new ArrayList<Recommendation.SampleFlag>();
         double[] st = e.sampleStability();
         double[] sil = e.sampleSilhouette();
         for (int i = 0; i < st.length; i++) {
-            if (e.clustering().isOutlier(i)) {
-                continue;   // far samples set aside afterwards keep their flags; clusters.csv shows them as outliers
+            if (solution.isOutlier(i)) {
+                continue;   // an outlier, set aside by the cut or afterwards as far from its cluster, has no cluster
             }
             boolean unstable = st[i] < rule.unstableSample();
             boolean negative = sil[i] < 0;

@@ -172,18 +172,55 @@ class ReportModelTest {
         Recommendation rec = s.recommendation();
         KEvidence chosen = s.evidence().linkages().stream().filter(l -> l.linkage() == rec.linkage()).findFirst()
                 .orElseThrow().at(rec.k());
-        assertEquals(chosen.clusters(), m.clusters());
+        assertEquals(chosen.clusters().size(), m.clusters().size());
         assertEquals(rec.flaggedSamples(), m.flaggedSamples());
         assertFalse(m.flaggedSamples().isEmpty(), "the samples between two groups are flagged");
         assertEquals(m.clusters().stream().filter(c -> c.status() != JaccardStability.Status.STABLE).toList(),
                 m.flaggedClusters());
-        assertEquals(chosen.clustering().withSingletons(), ReportModel.recommendedPartition(s.evidence(), rec));
+        assertEquals(rec.clustering().withSingletons(), ReportModel.recommendedPartition(rec));
+    }
+
+    @Test
+    void farSamplesSetAsideAfterTheCutLeaveTheirClusterEverywhere() {
+        // Two groups of 30, 10 apart on each of 4 features, and two samples 25 out on the first feature beside the
+        // first group. Ward merges each far sample into the first group (cost about 1.4 x 25) long before the groups
+        // merge (about 5.5 x 20), so the cut at k = 2 holds them; they join that cluster far above its own first
+        // split and are set aside after the cut. The cluster table, the partition compared with labels and the
+        // flagged samples must then all be those of clusters.csv.
+        var settings = org.treeproof.study.StudySettings.builder().linkages(List.of(org.treeproof.tree.Linkage.WARD))
+                .maxK(4).replicates(20).referenceSets(10).nullSets(19).nullReplicates(5).seed(11).build();
+        var rng = new java.util.SplittableRandom(9);
+        int n = 62;
+        double[] v = new double[n * 4];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < 4; j++) {
+                double centre = i < 30 ? 0 : i < 60 ? 10 : j == 0 ? -25 : 0;
+                v[i * 4 + j] = centre + Studies.gaussian(rng);
+            }
+        }
+        Studies.Study s = Studies.run(new org.treeproof.data.DataMatrix(Studies.ids(n, i -> "s" + i),
+                Studies.names(4), v), settings);
+        Recommendation rec = s.recommendation();
+        assertEquals(2, rec.k());
+        KEvidence cut = s.evidence().linkages().get(0).at(2);
+        assertEquals(0, cut.outliers(), "the cut itself holds the far samples");
+        assertTrue(rec.clustering().isOutlier(60) && rec.clustering().isOutlier(61));
+        ReportModel m = s.model();
+        assertEquals(List.of(30, 30), m.clusters().stream().map(c -> c.size()).toList());
+        var p = ReportModel.recommendedPartition(rec);
+        assertEquals(4, p.clusterCount(), "two clusters and two far samples, each a group of its own");
+        assertTrue(rec.flaggedSamples().stream().noneMatch(f -> f.sample() >= 60));
+        var outliers = rec.reasons().stream().filter(r -> r instanceof org.treeproof.study.Reason.Outliers)
+                .map(r -> (org.treeproof.study.Reason.Outliers) r).findFirst().orElseThrow();
+        assertEquals(2, outliers.count());
+        assertEquals(2, outliers.afterCut());
+        assertTrue(new ReasonWords(rec.rule()).word(outliers).contains("set aside after the cut was assessed"));
     }
 
     @Test
     void unsupportedRecommendsOneGroupOfAllSamples() {
         Studies.Study s = Studies.noise();
-        var p = ReportModel.recommendedPartition(s.evidence(), s.recommendation());
+        var p = ReportModel.recommendedPartition(s.recommendation());
         assertEquals(1, p.clusterCount());
         assertEquals(s.evidence().samples(), p.size());
     }
