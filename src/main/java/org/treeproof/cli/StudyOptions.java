@@ -220,7 +220,13 @@ final class StudyOptions {
             b.nullReplicates(nullReplicates);
         }
         if (minClusterSize != null) {
-            b.minClusterSize(minClusterSize);
+            if (minClusterSize < 1) {
+                // 0 means "automatic" inside the library; on the command line the default is had by leaving it out
+                problems.add("--min-cluster-size must be at least 1 (leave it out for the default), got "
+                        + minClusterSize);
+            } else {
+                b.minClusterSize(minClusterSize);
+            }
         }
         if (seed != null) {
             b.seed(seed);

@@ -75,8 +75,15 @@ public final class ReasonWords implements Reason.Visitor<String> {
         String ps = f("Monte Carlo p = %s over %d null data sets; %s from a normal fit to their maxima",
                 Numbers.p(t.pValue()), t.nullSets(), fitted(t.pValueFitted()));
         if (!r.found()) {
-            return f("The data hold no cluster structure beyond what data without clusters give: %s, which null data "
-                    + "sets reach too (%s).", largest, ps);
+            if (t.reachedBy() == 0) {
+                return f("No solution can beat the null data with %d null data sets: %s, beyond every null set, but "
+                        + "the Monte Carlo p-value cannot go below 1/(1 + %d) = %s, above the level %s (%s). At least "
+                        + "%d null data sets are needed (--null-sets).", t.nullSets(), largest, t.nullSets(),
+                        Numbers.p(t.smallestPValue()), Numbers.plain(r.alpha()), ps,
+                        StructureTest.setsNeededFor(r.alpha()));
+            }
+            return f("The data hold no cluster structure beyond what data without clusters give: %s, which %d of the "
+                    + "%d null data sets reach (%s).", largest, t.reachedBy(), t.nullSets(), ps);
         }
         if (!r.clustersFound()) {
             return f("The data depart from the null data without clusters: %s (%s). But no solution with clusters "

@@ -132,11 +132,16 @@ final class NullCalibration {
         if (Double.isNaN(observed)) {
             return 1.0;
         }
+        return (1.0 + reaching(observed, nulls)) / (1.0 + nulls.length);
+    }
+
+    /** How many of {@code nulls} reach {@code observed} (are not below it), as Hope's p-value counts them. */
+    static int reaching(double observed, double[] nulls) {
         int atLeast = 0;
         for (double v : nulls) {
             atLeast += !(v < observed) ? 1 : 0;
         }
-        return (1.0 + atLeast) / (1.0 + nulls.length);
+        return atLeast;
     }
 
     private static double[] filled(double[] v) {

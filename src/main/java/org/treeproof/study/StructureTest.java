@@ -34,4 +34,19 @@ public record StructureTest(double statistic, double pValue, double pValueFitted
     public double[] nullMaxima() {
         return nullMaxima.clone();
     }
+
+    /** How many null sets reach the observed statistic: the count in the Monte Carlo p-value. */
+    public int reachedBy() {
+        return NullCalibration.reaching(statistic, nullMaxima);
+    }
+
+    /** The smallest Monte Carlo p-value these null sets allow, {@code 1 / (1 + sets)}. */
+    public double smallestPValue() {
+        return 1.0 / (1.0 + nullSets);
+    }
+
+    /** The fewest null sets whose smallest Monte Carlo p-value is at most {@code alpha}. */
+    public static int setsNeededFor(double alpha) {
+        return (int) Math.ceil(1.0 / alpha - 1.0 - 1e-9);
+    }
 }

@@ -155,6 +155,14 @@ public record StudySettings(List<Linkage> linkages, Metric metric, int maxK, int
             p.add("--max-k " + maxK + " is too large for replicates of " + smallest
                     + " samples; lower --max-k to " + largest + " or raise --sample-fraction");
         }
+        int m = minClusterSize(samples);
+        if (p.isEmpty() && 2 * m > samples) {
+            p.add(minClusterSize > 0
+                    ? "--min-cluster-size " + m + " leaves no room for 2 clusters in " + samples + " samples; give "
+                            + samples / 2 + " or less"
+                    : "the input has " + samples + " samples, too few for 2 clusters of the default smallest size "
+                            + m + "; give --min-cluster-size " + samples / 2 + " or less, or add samples");
+        }
         if (!hasData) {
             if (featureFraction < 1) {
                 p.add("--feature-fraction needs a data table; distances alone cannot be resampled by feature");

@@ -139,8 +139,10 @@ class MethodsParagraphTest {
         assertFalse(none.contains("hold cluster structure"), none);
         String some = words.word(new org.treeproof.study.Reason.Structure(t, 0.05, true));
         assertTrue(some.startsWith("The data hold cluster structure beyond noise"), some);
-        // not rejected (p = 0.5): no structure, whatever the rule found
-        var weak = new org.treeproof.study.StructureTest(1.2, 0.5, 0.4, 19, 10, new double[19]);
+        // not rejected (9 of 19 null maxima reach 1.2: p = 10 / 20 = 0.5): no structure, whatever the rule found
+        double[] maxima = new double[19];
+        java.util.Arrays.fill(maxima, 0, 9, 2.0);
+        var weak = new org.treeproof.study.StructureTest(1.2, 0.5, 0.4, 19, 10, maxima);
         String no = words.word(new org.treeproof.study.Reason.Structure(weak, 0.05, false));
         assertTrue(no.startsWith("The data hold no cluster structure beyond"), no);
     }

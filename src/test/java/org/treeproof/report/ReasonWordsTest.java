@@ -43,4 +43,34 @@ class ReasonWordsTest {
         assertEquals("Every criterion taken alone agrees with k = 4.",
                 new ReasonWords(DecisionRule.DEFAULT).criteria(reason));
     }
+
+    @Test
+    void theStructureTestSaysHowManyNullSetsReachTheStatisticAndWhenTooFewCanNeverBeBeaten() {
+        var words = new ReasonWords(DecisionRule.DEFAULT);
+        // 19 null sets, 3 of which reach 4.0 (4.0, 4.5, 6.1): Monte Carlo p = (1 + 3) / 20 = 0.2
+        double[] nineteen = new double[19];
+        java.util.Arrays.fill(nineteen, 1.0);
+        nineteen[2] = 4.0;
+        nineteen[7] = 4.5;
+        nineteen[11] = 6.1;
+        var reached = new org.treeproof.study.StructureTest(4.0, 0.2, 0.3, 19, 10, nineteen);
+        assertEquals(3, reached.reachedBy());
+        String text = words.structure(new Reason.Structure(reached, 0.05, false));
+        org.junit.jupiter.api.Assertions.assertTrue(text.contains("is 4.00, which 3 of the 19 null data sets reach"),
+                text);
+        // 9 null sets, none reaching 5.0: p = 1 / 10 = 0.1, the smallest 9 sets allow, above 0.05; 19 are needed
+        // because 1 / (1 + 19) = 0.05
+        double[] nine = new double[9];
+        java.util.Arrays.fill(nine, 2.0);
+        var floor = new org.treeproof.study.StructureTest(5.0, 0.1, 1e-5, 9, 10, nine);
+        assertEquals(0, floor.reachedBy());
+        assertEquals(19, org.treeproof.study.StructureTest.setsNeededFor(0.05));
+        text = words.structure(new Reason.Structure(floor, 0.05, false));
+        org.junit.jupiter.api.Assertions.assertTrue(text.startsWith("No solution can beat the null data with 9 null "
+                + "data sets: "), text);
+        org.junit.jupiter.api.Assertions.assertTrue(text.contains("beyond every null set, but the Monte Carlo p-value "
+                + "cannot go below 1/(1 + 9) = 0.100, above the level 0.05"), text);
+        org.junit.jupiter.api.Assertions.assertTrue(text.endsWith("At least 19 null data sets are needed "
+                + "(--null-sets)."), text);
+    }
 }
