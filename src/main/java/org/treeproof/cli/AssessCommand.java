@@ -41,8 +41,9 @@ import picocli.CommandLine.Parameters;
 @Command(name = "assess", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Cluster the input with each linkage, recluster resampled replicates, calibrate against null "
                 + "data and the gap statistic, and recommend a number of clusters with its reasons.",
-            "Writes DIR/summary.json, clusters.csv, scores.csv, features.csv, methods.md, report.html and charts/ "
-                + "(covariates.csv with --covariates, sensitivity.csv with --sensitivity)."})
+            "Writes DIR/summary.json, clusters.csv, scores.csv, methods.md, report.html and charts/, and when clusters "
+                + "are recommended features.csv (covariates.csv with --covariates, sensitivity.csv with "
+                + "--sensitivity)."})
 final class AssessCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "INPUT", description = "Data table (CSV/TSV, optionally .gz), samples in rows "

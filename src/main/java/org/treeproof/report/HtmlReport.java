@@ -131,6 +131,8 @@ public final class HtmlReport {
         String cls = "verdict verdict-" + d.verdict().id();
         h.open("div", "class", cls, "role", "status").element("strong", d.verdict().id()).text(d.headline())
                 .close("div");
+        // the caution stands beside the claim as well as in the closing section
+        h.element("p", "caution", model.caution());
         h.open("dl", "class", "facts");
         fact(h, "Number of clusters (k)", Integer.toString(d.k()));
         fact(h, d.hasClusters() ? "Linkage" : "Tree shown", Names.linkage(d.linkage()) + " linkage");

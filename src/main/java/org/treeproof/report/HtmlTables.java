@@ -55,16 +55,23 @@ final class HtmlTables {
             page.table("evidence", f("Cophenetic correlation of the tree with the distances: %s%s",
                     Numbers.fixed(t.copheneticCorrelation(), 3), t.monotone() ? ""
                             : "; the tree has inversions, so each row is the state after the first n − k merges"),
-                    "#k", "#Outliers", "#Cut height", "#Range giving k", "#Mean ARI [middle 95% of replicates]",
+                    "#k", "Verdict", "#Outliers", "#Cut height", "#Range giving k", "#Mean ARI [middle 95% of replicates]",
                     "#Null ARI [middle 95% of sets]", "#PAC", "#Null PAC", "#Smallest Jaccard", "#Silhouette",
                     "#Null silhouette", "#Excess over null", "#Adjusted p", "#Calinski-Harabasz",
-                    "#Davies-Bouldin", "#Dunn", "#Gap ± s_k", "Verdict");
+                    "#Davies-Bouldin", "#Dunn", "#Gap ± s_k");
             for (EvidenceRow r : t.rows()) {
                 h.open("tr", "class", r.recommended() ? "recommended" : null);
                 tie |= r.tieDependent();
                 // wide cells may wrap only at one ordinary space (no-break spaces elsewhere), so that at narrower
                 // widths the table fits by putting a figure's interval, range end or s_k on a second line
-                page.num(Integer.toString(r.k())).num(Integer.toString(r.outliers()))
+                // the verdict second, so that it stays in view when a narrow window scrolls the wide table
+                page.num(Integer.toString(r.k()));
+                h.open("td", "class", "verdict-cell").text(r.verdict().id());
+                if (r.recommended()) {
+                    h.element("span", "tag tag-recommended", "recommended");
+                }
+                h.close("td");
+                page.num(Integer.toString(r.outliers()))
                         .num(Numbers.scaled(r.cutHeight().chosen()) + (r.tieDependent()
                         ? NBSP + "†" : "")).num(Numbers.scaled(r.cutHeight().low()) + NBSP + "to "
                                 + Numbers.scaled(r.cutHeight().high()))
@@ -77,11 +84,7 @@ final class HtmlTables {
                         .num(Numbers.scaled(r.calinskiHarabasz())).num(Numbers.fixed(r.daviesBouldin(), 2))
                         .num(Numbers.fixed(r.dunn(), 3)).num(Double.isFinite(r.gap()) ? Numbers.fixed(r.gap(), 3)
                                 + " ±" + NBSP + Numbers.fixed(r.gapSE(), 3) : Numbers.MISSING);
-                h.open("td", "class", "verdict-cell").text(r.verdict().id());
-                if (r.recommended()) {
-                    h.element("span", "tag tag-recommended", "recommended");
-                }
-                h.close("td").close("tr");
+                h.close("tr");
             }
             page.endTable();
             if (t.hasGap()) {

@@ -63,6 +63,7 @@ public final class MethodsParagraph {
                 .ifPresent(m -> sb.append(md(String.join(" ", m))).append("\n\n"));
         sb.append("# Result\n\n").append(result()).append("\n\n");
         model.explained().ifPresent(x -> sb.append(explained(x)));
+        sb.append("## Caution\n\n").append(md(model.caution())).append("\n\n");
         sb.append("## References\n\n");
         List<Reference> refs = new ArrayList<>(cited);
         // alphabetical as a reader expects (Şenbabaoğlu among the S, Müllner before Murtagh), not by code point

@@ -50,6 +50,9 @@ class HtmlReportTest {
             assertEquals(Integer.toString(m.decision().k()), decision.select("dl.facts dd").first().text());
             assertEquals(m.decision().criteria().size(), decision.select("table.criteria tbody tr").size());
             assertEquals(m.decision().reasons(), decision.select("ul li").eachText());
+            // the caution beside the verdict, as in the closing section
+            assertEquals(m.caution(), decision.selectFirst("p.caution").text());
+            assertEquals(m.caution(), d.getElementById("caution").selectFirst("p.caution").text());
             for (String id : WITHOUT_LABELS) {
                 assertFalse(d.getElementById(id).select("h2").text().isBlank(), id);
             }
@@ -163,23 +166,24 @@ class HtmlReportTest {
                 .orElseThrow().at(rec.k());
         var cells = marked.first().select("td");
         assertEquals(Integer.toString(rec.k()), cells.get(0).text());
-        assertEquals(Integer.toString(e.outliers()), cells.get(1).text());
-        assertPrinted(cells.get(2).text().replace("\u00A0†", ""), e.cutHeight().chosen(), "cut height");
-        String[] ari = cells.get(4).text().replace('\u00A0', ' ').replaceAll("[\\[\\],]", " ").trim().split("\\s+");
+        // the verdict second, with the recommended tag
+        assertTrue(cells.get(1).text().startsWith(rec.verdict().id()) && cells.get(1).text().contains("recommended"));
+        assertEquals(Integer.toString(e.outliers()), cells.get(2).text());
+        assertPrinted(cells.get(3).text().replace("\u00A0†", ""), e.cutHeight().chosen(), "cut height");
+        String[] ari = cells.get(5).text().replace('\u00A0', ' ').replaceAll("[\\[\\],]", " ").trim().split("\\s+");
         assertPrinted(ari[0], e.stability().ari().mean(), "mean ARI");
         assertPrinted(ari[1], e.stability().ari().low(), "ARI low");
         assertPrinted(ari[2], e.stability().ari().high(), "ARI high");
-        assertPrinted(cells.get(6).text(), e.stability().pac(), "PAC");
-        assertPrinted(cells.get(8).text(), e.worstJaccard(), "smallest Jaccard");
-        assertPrinted(cells.get(9).text(), e.silhouette(), "silhouette");
-        assertPrinted(cells.get(10).text(), e.stability().nullModel().silhouetteMean(), "null silhouette");
-        assertPrinted(cells.get(11).text(), e.stability().nullModel().excess(), "excess over the null");
-        assertPrinted(cells.get(12).text(), e.stability().nullModel().pValueAdjusted(), "adjusted p");
-        assertPrinted(cells.get(15).text(), e.dunn(), "Dunn");
-        String[] gap = cells.get(16).text().replace('\u00A0', ' ').split(" ± ");
+        assertPrinted(cells.get(7).text(), e.stability().pac(), "PAC");
+        assertPrinted(cells.get(9).text(), e.worstJaccard(), "smallest Jaccard");
+        assertPrinted(cells.get(10).text(), e.silhouette(), "silhouette");
+        assertPrinted(cells.get(11).text(), e.stability().nullModel().silhouetteMean(), "null silhouette");
+        assertPrinted(cells.get(12).text(), e.stability().nullModel().excess(), "excess over the null");
+        assertPrinted(cells.get(13).text(), e.stability().nullModel().pValueAdjusted(), "adjusted p");
+        assertPrinted(cells.get(16).text(), e.dunn(), "Dunn");
+        String[] gap = cells.get(17).text().replace('\u00A0', ' ').split(" ± ");
         assertPrinted(gap[0], e.gap(), "gap");
         assertPrinted(gap[1], e.gapSE(), "s_k");
-        assertTrue(cells.last().text().contains("recommended"));
         assertEquals(1, d.select("#linkages tr.recommended").size());
     }
 

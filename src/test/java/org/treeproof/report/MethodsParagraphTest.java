@@ -63,6 +63,16 @@ class MethodsParagraphTest {
     }
 
     @Test
+    void theCautionFollowsTheResult() {
+        for (Studies.Study s : List.of(Studies.separated(), Studies.noise())) {
+            String md = MethodsParagraph.of(s.model()).render();
+            int result = md.indexOf("# Result");
+            int caution = md.indexOf("## Caution\n\n" + s.model().caution());
+            assertTrue(result >= 0 && caution > result && caution < md.indexOf("## References"), md);
+        }
+    }
+
+    @Test
     void theProcedureIsDescribedFromTheSettings() {
         Studies.Study s = Studies.separated();
         String md = MethodsParagraph.of(s.model()).render();
