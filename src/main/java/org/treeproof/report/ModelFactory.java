@@ -79,7 +79,8 @@ final class ModelFactory {
             tables.add(table(le));
         }
         Decision decision = decision(explanation);
-        List<ClusterEvidence> clusters = rec.k() > 1 ? finalSizes(linkageEvidence(rec.linkage()).at(rec.k()).clusters())
+        List<ClusterEvidence> clusters = rec.k() > 1 ? ClusterEvidence.sizedBy(
+                linkageEvidence(rec.linkage()).at(rec.k()).clusters(), rec.clustering())
                 : List.of();
         var notes = new ArrayList<String>();
         notes.addAll(dataNotes());
@@ -90,26 +91,6 @@ final class ModelFactory {
         return new ReportModel(run, evidence.settings(), rec.rule(), decision, tables, comparison(),
                 clusters, rec.flaggedSamples(), labels, settingsList(), caution(), figures, notes, explanation,
                 BranchPValueReport.clusterBranches(evidence, rec));
-    }
-
-    /**
-     * The recommended clusters' evidence with their sizes as delivered: far samples set aside after the cut leave
-     * their cluster (the recommendation's clustering is the one partition of clusters.csv, the charts and the tables);
-     * the Jaccard figures are the cut's.
-     */
-    private List<ClusterEvidence> finalSizes(List<ClusterEvidence> cut) {
-        int[] sizes = new int[cut.size()];
-        for (int label : rec.clustering().labels()) {
-            if (label >= 0) {
-                sizes[label]++;
-            }
-        }
-        var out = new ArrayList<ClusterEvidence>();
-        for (ClusterEvidence c : cut) {
-            out.add(new ClusterEvidence(c.id(), sizes[c.id() - 1], c.jaccard(), c.dissolvedShare(), c.recoveredShare(),
-                    c.status()));
-        }
-        return out;
     }
 
     private EvidenceTable table(LinkageEvidence le) {

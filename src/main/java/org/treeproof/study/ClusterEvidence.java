@@ -14,4 +14,20 @@ import org.treeproof.score.JaccardStability;
  */
 public record ClusterEvidence(int id, int size, double jaccard, double dissolvedShare, double recoveredShare,
         JaccardStability.Status status) {
+
+    /**
+     * The clusters of a cut with their sizes in {@code solution}, the recommended clusters as delivered: samples set
+     * aside after the cut leave their cluster; the stability figures stay the cut's.
+     */
+    public static java.util.List<ClusterEvidence> sizedBy(java.util.List<ClusterEvidence> cut,
+            org.treeproof.partition.Clustering solution) {
+        int[] sizes = new int[cut.size()];
+        for (int label : solution.labels()) {
+            if (label >= 0) {
+                sizes[label]++;
+            }
+        }
+        return cut.stream().map(c -> new ClusterEvidence(c.id(), sizes[c.id() - 1], c.jaccard(), c.dissolvedShare(),
+                c.recoveredShare(), c.status())).toList();
+    }
 }

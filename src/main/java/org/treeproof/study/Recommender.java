@@ -357,20 +357,8 @@ public final class Recommender {
 
     /** The recommended clusters that are not stable, with their sizes in the final solution. */
     private static List<ClusterEvidence> flaggedClusters(KEvidence e, Clustering solution) {
-        int[] sizes = new int[e.clusters().size()];
-        for (int label : solution.labels()) {
-            if (label >= 0) {
-                sizes[label]++;
-            }
-        }
-        var out = new ArrayList<ClusterEvidence>();
-        for (ClusterEvidence c : e.clusters()) {
-            if (c.status() != JaccardStability.Status.STABLE) {
-                out.add(new ClusterEvidence(c.id(), sizes[c.id() - 1], c.jaccard(), c.dissolvedShare(),
-                        c.recoveredShare(), c.status()));
-            }
-        }
-        return out;
+        return ClusterEvidence.sizedBy(e.clusters(), solution).stream()
+                .filter(c -> c.status() != JaccardStability.Status.STABLE).toList();
     }
 
     /** The flagged samples of the recommended clusters, leaving out every outlier of the final solution. */
