@@ -57,12 +57,12 @@ final class StudyOutputs {
 
     LabelComparison labels() {
         return classes == null ? null
-                : LabelComparison.of(ReportModel.recommendedPartition(rec), classes);
+                : LabelComparison.of(rec.clustering(), classes);
     }
 
     SummaryJson.LabelsSummary labelsSummary(LabelComparison l) {
         return l == null ? null : new SummaryJson.LabelsSummary(labelsFile.toString(), l.ari(), l.classNames(),
-                l.table());
+                l.table(), l.outliers());
     }
 
     List<String> preparationSteps() {

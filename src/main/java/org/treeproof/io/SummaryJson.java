@@ -61,7 +61,7 @@ public final class SummaryJson {
     }
 
     /** The recommended solution against known labels. */
-    public record LabelsSummary(String file, double ari, List<String> classes, int[][] table) {
+    public record LabelsSummary(String file, double ari, List<String> classes, int[][] table, int[] outliers) {
     }
 
     /**
@@ -454,6 +454,11 @@ public final class SummaryJson {
                 g.writeNumber(v);
             }
             g.writeEndArray();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("outliers");
+        for (int v : l.outliers()) {
+            g.writeNumber(v);
         }
         g.writeEndArray();
         g.writeEndObject();

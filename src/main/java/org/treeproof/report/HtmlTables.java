@@ -212,8 +212,9 @@ final class HtmlTables {
         LabelComparison l = model.labels();
         openSection(h, "labels");
         h.element("p", f("Adjusted Rand index of the recommended solution with the %d known classes: %s (1 means the "
-                + "same grouping; about 0, agreement no better than chance; Hubert & Arabie 1985). The classes were not "
-                + "used in clustering.", l.classNames().size(), Numbers.fixed(l.ari(), 3)));
+                + "same grouping; about 0, agreement no better than chance; Hubert & Arabie 1985)%s. The classes were not "
+                + "used in clustering.", l.classNames().size(), Numbers.fixed(l.ari(), 3), l.hasOutliers()
+                        ? "; each outlier counts as a group of its own" : ""));
         String[] headers = new String[l.classNames().size() + 2];
         headers[0] = "Cluster";
         for (int c = 0; c < l.classNames().size(); c++) {
@@ -229,6 +230,17 @@ final class HtmlTables {
                 page.num(Integer.toString(l.count(r, c)));
                 total += l.count(r, c);
                 columnTotals[c] += l.count(r, c);
+            }
+            page.num(Integer.toString(total));
+            h.close("tr");
+        }
+        if (l.hasOutliers()) {
+            h.open("tr").open("th", "scope", "row").text("Outliers").close("th");
+            int total = 0;
+            for (int c = 0; c < l.classNames().size(); c++) {
+                page.num(Integer.toString(l.outliers()[c]));
+                total += l.outliers()[c];
+                columnTotals[c] += l.outliers()[c];
             }
             page.num(Integer.toString(total));
             h.close("tr");

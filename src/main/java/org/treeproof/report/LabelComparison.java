@@ -15,15 +15,29 @@ import org.treeproof.score.AdjustedRandIndex;
  * Classification 2 (1985) 193-218, doi:10.1007/BF01908075: 1 for the same grouping, about 0 for agreement no
  * better than chance.
  *
+ * <p>Outliers (samples set aside, in no cluster) count each as a group of their own in the index, as the judgement
+ * suite counts them, and are shown as one row of their own beside the clusters.
+ *
  * @param classNames the known classes, in order of their first sample in the input
  * @param ari        the adjusted Rand index of the recommended solution with the classes
  * @param table      the contingency table, {@code [cluster][class]}: rows are the recommended clusters in their
  *                   order (cluster {@code r + 1}), columns the classes in the order of {@code classNames}
+ * @param outliers   the outliers of each class, in the order of {@code classNames} (all 0 without outliers)
  */
-public record LabelComparison(List<String> classNames, double ari, int[][] table) {
+public record LabelComparison(List<String> classNames, double ari, int[][] table, int[] outliers) {
+
+    /** A comparison without outliers. */
+    public LabelComparison(List<String> classNames, double ari, int[][] table) {
+        this(classNames, ari, table, new int[classNames.size()]);
+    }
 
     public LabelComparison {
         classNames = List.copyOf(classNames);
+        if (outliers.length != classNames.size()) {
+            throw new IllegalArgumentException(outliers.length + " outlier counts for " + classNames.size()
+                    + " classes");
+        }
+        outliers = outliers.clone();
         if (classNames.isEmpty() || table.length == 0) {
             throw new IllegalArgumentException("a label comparison needs at least one class and one cluster");
         }
@@ -48,6 +62,42 @@ public record LabelComparison(List<String> classNames, double ari, int[][] table
 
     /**
      * Compares a solution with known classes.
+     *
+     * @param recommended  the recommended clusters over all samples, in input order, outliers marked
+     * @param classLabels  each sample's known class, in input order
+     * @throws IllegalArgumentException if the numbers of samples differ or a label is missing
+     */
+    public static LabelComparison of(org.treeproof.partition.Clustering recommended, String[] classLabels) {
+        LabelComparison all = of(recommended.withSingletons(), classLabels);
+        int[][] table = new int[recommended.k()][all.classNames().size()];
+        int[] outliers = new int[all.classNames().size()];
+        var index = new java.util.HashMap<String, Integer>();
+        for (int c = 0; c < all.classNames().size(); c++) {
+            index.put(all.classNames().get(c), c);
+        }
+        for (int i = 0; i < classLabels.length; i++) {
+            int c = index.get(classLabels[i]);
+            if (recommended.isOutlier(i)) {
+                outliers[c]++;
+            } else {
+                table[recommended.label(i)][c]++;
+            }
+        }
+        return new LabelComparison(all.classNames(), all.ari(), table, outliers);
+    }
+
+    /** Whether some samples are outliers. */
+    public boolean hasOutliers() {
+        return java.util.Arrays.stream(outliers).sum() > 0;
+    }
+
+    @Override
+    public int[] outliers() {
+        return outliers.clone();
+    }
+
+    /**
+     * Compares a partition (every sample in a group) with known classes.
      *
      * @param recommended  the recommended solution over all samples, in input order
      * @param classLabels  each sample's known class, in input order
@@ -94,7 +144,7 @@ public record LabelComparison(List<String> classNames, double ari, int[][] table
     @Override
     public boolean equals(Object o) {
         return o instanceof LabelComparison l && l.classNames.equals(classNames) && Double.compare(l.ari, ari) == 0
-                && java.util.Arrays.deepEquals(l.table, table);
+                && java.util.Arrays.deepEquals(l.table, table) && java.util.Arrays.equals(l.outliers, outliers);
     }
 
     @Override

@@ -121,15 +121,6 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
         return Optional.ofNullable(explanation);
     }
 
-    /**
-     * The recommended solution over all samples, in input order, as clusters.csv gives it: the recommendation's
-     * clusters, each outlier a group of its own (one cluster plus any far samples when the verdict is unsupported).
-     * This is what {@link LabelComparison#of} compares.
-     */
-    public static Partition recommendedPartition(Recommendation recommendation) {
-        return recommendation.clustering().withSingletons();
-    }
-
     /** The evidence table of a linkage. */
     public EvidenceTable table(Linkage linkage) {
         return evidence.stream().filter(t -> t.linkage() == linkage).findFirst()

@@ -67,7 +67,7 @@ class HtmlReportTest {
         for (int i = 0; i < n; i++) {
             truth[i] = "class " + (i % 3);
         }
-        var labels = LabelComparison.of(ReportModel.recommendedPartition(s.recommendation()), truth);
+        var labels = LabelComparison.of(s.recommendation().clustering(), truth);
         ReportModel m = ReportModel.of(s.evidence(), s.recommendation(), s.run(), labels);
         Document d = parse(HtmlReport.of(m, List.of()).render());
         assertEquals(List.of("decision", "evidence", "linkages", "flags", "labels", "reproducibility", "caution",
@@ -225,7 +225,7 @@ class HtmlReportTest {
         for (int i = 0; i < n; i++) {
             classes[i] = i % 2 == 0 ? script : "\"A\" & 'B'";
         }
-        var labels = LabelComparison.of(ReportModel.recommendedPartition(s.recommendation()), classes);
+        var labels = LabelComparison.of(s.recommendation().clustering(), classes);
         ReportModel m = ReportModel.of(s.evidence(), s.recommendation(), hostile, labels);
         String html = HtmlReport.of(m, images(m)).render();
         assertFalse(html.contains("<script"), "an unescaped script tag");

@@ -43,7 +43,7 @@ class LabelComparisonTest {
         for (int i = 0; i < n; i++) {
             truth[i] = "group " + (char) ('A' + i % 3); // Studies.threeGroups puts sample i in group i % 3
         }
-        var l = LabelComparison.of(ReportModel.recommendedPartition(s.recommendation()), truth);
+        var l = LabelComparison.of(s.recommendation().clustering(), truth);
         assertEquals(1.0, l.ari(), 0);
         for (int r = 0; r < 3; r++) {
             int[] row = l.table()[r];

@@ -183,7 +183,6 @@ class ReportModelTest {
         assertFalse(m.flaggedSamples().isEmpty(), "the samples between two groups are flagged");
         assertEquals(m.clusters().stream().filter(c -> c.status() != JaccardStability.Status.STABLE).toList(),
                 m.flaggedClusters());
-        assertEquals(rec.clustering().withSingletons(), ReportModel.recommendedPartition(rec));
     }
 
     @Test
@@ -213,8 +212,21 @@ class ReportModelTest {
         assertTrue(rec.clustering().isOutlier(60) && rec.clustering().isOutlier(61));
         ReportModel m = s.model();
         assertEquals(List.of(30, 30), m.clusters().stream().map(c -> c.size()).toList());
-        var p = ReportModel.recommendedPartition(rec);
-        assertEquals(4, p.clusterCount(), "two clusters and two far samples, each a group of its own");
+        // known classes: the two groups and the far pair; the comparison has the 2 clusters and an outlier row
+        // (this once stopped the run: the comparison counted the far samples as clusters of their own)
+        String[] classes = new String[n];
+        for (int i = 0; i < n; i++) {
+            classes[i] = i < 30 ? "a" : i < 60 ? "b" : "far";
+        }
+        var labels = LabelComparison.of(rec.clustering(), classes);
+        assertEquals(2, labels.clusters());
+        org.junit.jupiter.api.Assertions.assertArrayEquals(new int[] {0, 0, 2}, labels.outliers());
+        assertEquals(labels, ReportModel.of(s.evidence(), rec, s.run(), labels).labelComparison().orElseThrow());
+        // the index counts each far sample as a group of its own: the partition {a}, {b}, {x}, {y} against the
+        // classes {a}, {b}, {x, y} (Hubert & Arabie 1985): sum C(n_ij) = 2 C(30) = 870, rows 870, columns
+        // 870 + C(2) = 871, C(62) = 1891; expected 870 * 871 / 1891 = 400.73; maximum 870.5;
+        // ARI = (870 - 400.73) / (870.5 - 400.73) = 0.99894
+        assertEquals((870 - 870.0 * 871 / 1891) / (870.5 - 870.0 * 871 / 1891), labels.ari(), 1e-12);
         assertTrue(rec.flaggedSamples().stream().noneMatch(f -> f.sample() >= 60));
         var outliers = rec.reasons().stream().filter(r -> r instanceof org.treeproof.study.Reason.Outliers)
                 .map(r -> (org.treeproof.study.Reason.Outliers) r).findFirst().orElseThrow();
@@ -226,9 +238,9 @@ class ReportModelTest {
     @Test
     void unsupportedRecommendsOneGroupOfAllSamples() {
         Studies.Study s = Studies.noise();
-        var p = ReportModel.recommendedPartition(s.recommendation());
-        assertEquals(1, p.clusterCount());
-        assertEquals(s.evidence().samples(), p.size());
+        var c = s.recommendation().clustering();
+        assertEquals(1, c.k());
+        assertEquals(s.evidence().samples(), c.size());
     }
 
     @Test
