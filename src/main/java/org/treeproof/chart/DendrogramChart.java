@@ -161,8 +161,9 @@ public final class DendrogramChart {
             entries.add(Key.Entry.line(Look.RULE, Look.DASHED, "cut at height " + Ticks.compact(in.cutHeight())));
         }
         if (supportShown > 0) {
-            entries.add(Key.Entry.sample("0.87", "share of replicates that find the group below a fork again"
-                    + " (at the highest forks, where there is room)"));
+            entries.add(Key.Entry.sample("0.87", "share of replicates whose tree has the group below a fork"
+                    + " exactly, no sample more or less (at the highest forks, where there is room); a cluster's"
+                    + " Jaccard counts near matches too"));
         }
         if (auShown > 0) {
             entries.add(Key.Entry.sample("\u25A0", "AU p-value of the group below the fork at least "

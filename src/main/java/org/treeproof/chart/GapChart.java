@@ -67,13 +67,13 @@ public final class GapChart {
         st.setXAxisDecimalPattern("#0");
         if (in.chosenK() > 0) {
             int c = in.chosenK();
-            XYSeries mark = chart.addSeries("chosen k = " + c, new double[] {c}, new double[] {gap[c - 1]});
+            XYSeries mark = chart.addSeries("gap rule's k = " + c, new double[] {c}, new double[] {gap[c - 1]});
             mark.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             mark.setMarker(SeriesMarkers.DIAMOND);
             // ink, not a series colour: another colour would read as another linkage
             mark.setMarkerColor(Look.INK);
             chart.addAnnotation(new AnnotationLine(c, true, false));
-            chart.addAnnotation(XCharts.besideRule("chosen k = " + c, c, kMax, PLOT_WIDTH_GUESS,
+            chart.addAnnotation(XCharts.besideRule("gap rule's k = " + c, c, kMax, PLOT_WIDTH_GUESS,
                     hi + pad * 0.4));
         }
         st.setMarkerSize(9);

@@ -20,9 +20,9 @@ import java.util.Objects;
 public final class JaccardChart {
     public static final int WIDTH = 900;
     public static final int HEIGHT = 580;
-    /** Below this a cluster "falls apart" (Hennig's dissolution threshold, from the score). */
+    /** At or below this a cluster is dissolved (Hennig's dissolution threshold, from the score). */
     public static final double LOW = org.treeproof.score.JaccardStability.DISSOLVED_AT;
-    /** At or above this a cluster "holds up" (Hennig's stable band, from the score). */
+    /** At or above this a cluster is stable (Hennig's stable band, from the score). */
     public static final double HIGH = org.treeproof.score.JaccardStability.STABLE_FROM;
 
     private static final Color[] BAND_FILL = {new Color(0xE8E8E8), new Color(0xF4F4F4), Color.WHITE};
@@ -33,9 +33,14 @@ public final class JaccardChart {
         this.in = Objects.requireNonNull(input, "input");
     }
 
-    /** The words the chart uses for a mean Jaccard value: "falls apart", "uncertain" or "holds up". */
+    /**
+     * The band of a mean Jaccard value in the words of the score's statuses, as the tables print them: dissolved (at
+     * or below {@link #LOW}), doubtful, stable (from {@link #HIGH}).
+     */
     public static String band(double jaccard) {
-        return jaccard < LOW ? "falls apart" : jaccard < HIGH ? "uncertain" : "holds up";
+        return (jaccard <= LOW ? org.treeproof.score.JaccardStability.Status.DISSOLVED : jaccard < HIGH
+                ? org.treeproof.score.JaccardStability.Status.DOUBTFUL
+                : org.treeproof.score.JaccardStability.Status.STABLE).label();
     }
 
     /** Writes {@code baseName.png} and {@code baseName.svg} into {@code dir}; returns the file names. */
@@ -52,9 +57,9 @@ public final class JaccardChart {
         Axes axes = new Axes(plot, 0, k, 0, 1);
 
         double[][] bands = {{0, LOW}, {LOW, HIGH}, {HIGH, 1}};
-        String[] words = {"falls apart", "uncertain", "holds up"};
-        String[] ranges = {"below " + Ticks.number(LOW, 1), Ticks.number(LOW, 1) + " to " + Ticks.number(HIGH, 2),
-                Ticks.number(HIGH, 2) + " and above"};
+        String[] words = {band(LOW), band((LOW + HIGH) / 2), band(HIGH)};
+        String[] ranges = {Ticks.number(LOW, 1) + " or less", "above " + Ticks.number(LOW, 1) + ", below "
+                + Ticks.number(HIGH, 2), Ticks.number(HIGH, 2) + " and above"};
         for (int b = 0; b < 3; b++) {
             g.setColor(BAND_FILL[b]);
             g.fill(new Rectangle2D.Double(plot.getX(), axes.y(bands[b][1]), plot.getWidth(),

@@ -74,7 +74,7 @@ public final class LinkageComparisonChart {
         }
         g.setFont(Look.font(Look.NOTE_SIZE));
         g.setColor(Look.MUTED);
-        Look.textLeft(g, "All three run from \u22121 to 1; higher is better. Each linkage is shown at its own best k.",
+        Look.textLeft(g, "Higher is better in each panel. Each linkage is shown at its own best k.",
                 rowsLeft, top + panelHeight + 52);
 
         double mx = rowsLeft + 3 * (panelWidth + panelGap) + 40;

@@ -72,11 +72,11 @@ final class StudyChartInputs {
         String title = solution == null
                 ? "Tree of " + n + " samples, " + linkage + " linkage: no split into clusters is supported"
                 : "Tree of " + n + " samples, " + linkage + " linkage, cut into " + rec.k() + " clusters";
-        String heightLabel = "Merge height (" + evidence.settings().metric().id() + " distance, " + linkage
-                + " linkage)";
+        String heightLabel = "Merge height (" + linkage + " linkage on " + evidence.settings().metric().id()
+                + " distances)";
         return new Plan("dendrogram", title, "", (dir, base) -> {
             var in = new DendrogramInput(title, chartTree(chosen.tree()), evidence.sampleIds().toArray(String[]::new),
-                    solution == null ? new int[n] : rec.clustering().labels(),
+                    rec.clustering().labels(),
                     solution == null ? Double.NaN : rec.cutHeight().chosen(), chosen.branchSupport(),
                     BranchPValueCharts.auPerMerge(chosen), heightLabel);
             var chart = new DendrogramChart(in);

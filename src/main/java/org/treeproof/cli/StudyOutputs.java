@@ -97,13 +97,14 @@ final class StudyOutputs {
                     t.pBelow() || t.pValue() < 0.001 ? "< 0.001" : String.format(Locale.ROOT, "= %.3f", t.pValue())));
         }
         return List.of(String.format(Locale.ROOT, "Note: %d of the %d features tested %s values in separated "
-                + "modes on their own (Hartigan's dip test, family-wise level %s over the features tested): %s%s. "
+                + "modes on their own (the dip test of Hartigan and Hartigan, Ann. Statist. 13 (1985) 70-84, "
+                + "family-wise level %s over the features tested): %s%s. "
                 + "Z-scores divide each feature by its standard deviation, which for such a feature includes the "
                 + "distance between its modes, so groups that lie on a few features can be diluted by the others; "
                 + "with features in one unit, --scale none keeps those distances.", flags.size(), result.tested(),
                 flags.size() == 1 ? "has" : "have",
                 java.math.BigDecimal.valueOf(org.treeproof.data.MultimodalFeatures.ALPHA).toPlainString(),
-                String.join(", ", named), flags.size() > 3 ? ", ..." : ""));
+                String.join(", ", named), flags.size() > 3 ? String.format(Locale.ROOT, " and %d more", flags.size() - 3) : ""));
     }
 
     /** One warning when features have a long tail on one side (the three most skewed named, then a count). */

@@ -119,8 +119,9 @@ final class ExplainProse {
                 named.add(feature(t, c, t.featureAtRank(c, r)));
             }
             int sig = t.significant(c, Q_LEVEL);
-            out.add(f("Cluster %d (%d samples) is set apart most by %s; %d of %d features have q ≤ %s.", c,
-                    t.clusterSize(c), Prose.and(named), sig, t.features().size(), Numbers.plain(Q_LEVEL)));
+            out.add(f("Cluster %d (%d samples) is set apart most by %s; %d of %d features %s q ≤ %s.", c,
+                    t.clusterSize(c), Prose.and(named), sig, t.features().size(), sig == 1 ? "has" : "have",
+                    Numbers.plain(Q_LEVEL)));
         }
         return out;
     }

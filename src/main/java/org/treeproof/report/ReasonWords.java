@@ -56,8 +56,8 @@ public final class ReasonWords implements Reason.Visitor<String> {
             case NO_CLUSTER_DISSOLVES -> f("no cluster dissolves (every mean Jaccard above %s)",
                     Numbers.plain(rule.dissolvedJaccard()));
             case EVERY_CLUSTER_COHESIVE -> "every cluster is cohesive (its members' mean silhouette width above 0)";
-            case AT_MOST_ONE_DOUBTFUL -> f("at most one cluster is only doubtful (mean Jaccard between %s and %s), the "
-                    + "others stable", Numbers.plain(rule.dissolvedJaccard()), Numbers.plain(rule.stableJaccard()));
+            case AT_MOST_ONE_DOUBTFUL -> f("at most one cluster is only doubtful (mean Jaccard between %s and %s) while "
+                    + "the others are stable", Numbers.plain(rule.dissolvedJaccard()), Numbers.plain(rule.stableJaccard()));
             case EVERY_CLUSTER_STABLE -> f("every cluster is stable (mean Jaccard at least %s)",
                     Numbers.plain(rule.stableJaccard()));
             case REPRODUCED -> f("replicates reproduce the solution (mean ARI at least %s)",
@@ -72,8 +72,8 @@ public final class ReasonWords implements Reason.Visitor<String> {
         StructureTest t = r.test();
         String largest = f("the largest test statistic (stability plus separation, standardised alike for the data "
                 + "and the null sets) among every linkage and k is %s", Numbers.fixed(t.statistic(), 2));
-        String ps = f("Monte Carlo p = %s over %d null data sets; %s from a normal fit to their maxima",
-                Numbers.p(t.pValue()), t.nullSets(), fitted(t.pValueFitted()));
+        String ps = f("Monte Carlo p = %s over %d null data sets, which decides; %s from a normal fit to their maxima, "
+                + "an approximation reported beside it", Numbers.p(t.pValue()), t.nullSets(), fitted(t.pValueFitted()));
         if (!r.found()) {
             if (t.reachedBy() == 0) {
                 return f("No solution can beat the null data with %d null data sets: %s, beyond every null set, but "
@@ -82,8 +82,9 @@ public final class ReasonWords implements Reason.Visitor<String> {
                         Numbers.p(t.smallestPValue()), Numbers.plain(r.alpha()), ps,
                         StructureTest.setsNeededFor(r.alpha()));
             }
-            return f("The data hold no cluster structure beyond what data without clusters give: %s, which %d of the "
-                    + "%d null data sets reach (%s).", largest, t.reachedBy(), t.nullSets(), ps);
+            return f("No cluster structure was detected beyond what data without clusters give: %s, which %d of the "
+                    + "%d null data sets reach (%s). This is not evidence that the data hold no groups.", largest,
+                    t.reachedBy(), t.nullSets(), ps);
         }
         if (!r.clustersFound()) {
             return f("The data depart from the null data without clusters: %s (%s). But no solution with clusters "
@@ -91,7 +92,10 @@ public final class ReasonWords implements Reason.Visitor<String> {
                     + "skewed or bounded features, a continuum, scattered far samples or, under z-scores, groups on "
                     + "a few of many features diluted by the scaling (see --scale) can cause it.", largest, ps);
         }
-        return f("The data hold cluster structure beyond noise: %s (%s).", largest, ps);
+        return f("The data depart from null data without clusters (a unimodal law with the data's own spread): %s "
+                + "(%s%s).", largest, ps, t.pValue() <= t.smallestPValue() + 1e-12
+                        ? f("; %s is the smallest Monte Carlo p-value %d null data sets allow", Numbers.p(t.pValue()),
+                                t.nullSets()) : "");
     }
 
     private static String fitted(double p) {
@@ -131,8 +135,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
         parts.add(f("smallest cluster Jaccard %s", Numbers.fixed(e.worstJaccard(), 2)));
         String s = String.join("; ", parts) + ".";
         if (!a.failed().isEmpty()) {
-            s += " It falls short of full support: it fails the condition that " + Prose.and(a.failed().stream()
-                    .map(this::condition).toList()) + ".";
+            s += " It falls short of full support: " + fails(a.failed()) + ".";
         }
         var weak = new ArrayList<String>();
         for (ClusterEvidence c : e.clusters()) {
@@ -147,6 +150,19 @@ public final class ReasonWords implements Reason.Visitor<String> {
         return s;
     }
 
+    /**
+     * "it fails the condition that A" for one condition; for several, each in its own clause ("it fails the conditions
+     * that A; that B; and that C"), since a condition's own wording may hold commas.
+     */
+    private String fails(List<Condition> failed) {
+        if (failed.size() == 1) {
+            return "it fails the condition that " + condition(failed.get(0));
+        }
+        var that = failed.stream().map(c -> "that " + condition(c)).toList();
+        return "it fails the conditions " + String.join("; ", that.subList(0, that.size() - 1)) + "; and "
+                + that.get(that.size() - 1);
+    }
+
     @Override
     public String bestFailed(Reason.BestFailed r) {
         Assessment a = r.assessment();
@@ -156,8 +172,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
                         Numbers.p(f.pAdjusted()), Numbers.fixed(f.worstJaccard(), 2))
                 : f("mean ARI %s, smallest cluster Jaccard %s, silhouette %s", Numbers.fixed(f.meanAri(), 2),
                         Numbers.fixed(f.worstJaccard(), 2), Numbers.fixed(f.silhouette(), 2));
-        String failed = a.failed().isEmpty() ? "" : "; it fails the condition that " + Prose.and(a.failed().stream()
-                .map(this::condition).toList());
+        String failed = a.failed().isEmpty() ? "" : "; " + fails(a.failed());
         return f("With %s linkage the strongest solution is k = %d (%s)%s.", Names.linkage(a.linkage()), a.k(),
                 figures, failed);
     }
@@ -169,10 +184,12 @@ public final class ReasonWords implements Reason.Visitor<String> {
                 + "table) include %s; the clusters' sizes and members leave %s out.", r.afterCut() == r.count() ? "All"
                 : Integer.toString(r.afterCut()), r.afterCut() == 1 ? "was" : "were", r.afterCut() == 1 ? "it" : "them",
                 r.afterCut() == 1 ? "it" : "them");
-        return f("%d sample%s %s set aside as outlier%s, not clusters: on branches of fewer than %d samples, or joining "
-                + "the tree (or their cluster) far above its first split into two large branches; they are listed in "
-                + "clusters.csv and left out of k.%s", r.count(), r.count() == 1 ? "" : "s", r.count() == 1 ? "is" : "are",
-                r.count() == 1 ? "" : "s", r.minClusterSize(), after);
+        boolean one = r.count() == 1;
+        return f("%d sample%s %s set aside as %s, not %s: on branches of fewer than %d samples, or joining the tree (or "
+                + "%s cluster) far above its first split into two large branches; %s listed in clusters.csv and left "
+                + "out of k.%s", r.count(), one ? "" : "s", one ? "is" : "are", one ? "an outlier" : "outliers",
+                one ? "a cluster" : "clusters", r.minClusterSize(), one ? "its" : "their", one ? "it is" : "they are",
+                after);
     }
 
     @Override
@@ -195,8 +212,13 @@ public final class ReasonWords implements Reason.Visitor<String> {
             }
         }
         if (r.shares().size() == 1) {
-            String only = f("k = %d is the only %s solution on %s linkage, so no other k competes replicate by "
-                    + "replicate", r.recommendedK(), r.verdict().id(), Names.linkage(r.linkage()));
+            String only = r.verdict() == Verdict.SUPPORTED
+                    ? f("k = %d is the only supported level on %s linkage (a supported cut that lasts over less than "
+                            + "half the relative range of heights of the longest-lasting one is a passing state, not a "
+                            + "level), so no other k competes replicate by replicate", r.recommendedK(),
+                            Names.linkage(r.linkage()))
+                    : f("k = %d is the only %s solution on %s linkage, so no other k competes replicate by replicate",
+                            r.recommendedK(), r.verdict().id(), Names.linkage(r.linkage()));
             return r.verdict() == Verdict.SUPPORTED
                     ? f("%s; %s of replicates reproduce it (ARI with that cut at least %s).", only,
                             Numbers.percent(recommended), Numbers.plain(r.reproducedAt()))
@@ -217,8 +239,8 @@ public final class ReasonWords implements Reason.Visitor<String> {
 
     @Override
     public String levels(Reason.Levels r) {
-        return f("Nested structure: k = %s are each supported; being cuts of one tree, the larger numbers split the "
-                + "clusters of the smaller. The finest is recommended; the coarser say how its clusters group.",
+        return f("Supported levels: k = %s. Being cuts of one tree they nest, which by itself is no evidence of groups "
+                + "within groups; the finest is recommended, and the coarser show how its clusters merge.",
                 Prose.and(r.levels().stream().map(String::valueOf).toList()));
     }
 
@@ -259,12 +281,15 @@ public final class ReasonWords implements Reason.Visitor<String> {
             int k = e.getKey();
             String verdict = r.linkage().stream().filter(a -> a.k() == k).findFirst()
                     .map(a -> a.verdict() == Verdict.SUPPORTED ? "" : f(", %s there%s", a.verdict().id(),
-                            a.failed().isEmpty() ? "" : ": it fails the condition that " + condition(a.failed().get(0))))
+                            a.failed().isEmpty() ? "" : ": " + fails(a.failed().subList(0, 1))))
                     .orElse("");
             parts.add(f("%s %s k = %d%s", Prose.and(e.getValue()), e.getValue().size() == 1 ? "picks" : "pick", k,
                     verdict));
         }
-        return parts.isEmpty() ? f("Every criterion taken alone agrees with k = %d.", r.recommendedK())
+        // the gap statistic (no criterion constant) has a reason of its own, so it is only left out of "every"
+        boolean gapDisagrees = r.disagreeing().stream().anyMatch(c -> c.criterion() == null);
+        return parts.isEmpty() ? f("Every criterion %staken alone agrees with k = %d.", gapDisagrees
+                ? "other than the gap statistic " : "", r.recommendedK())
                 : "Taken alone, " + String.join("; ", parts) + ".";
     }
 

@@ -140,9 +140,11 @@ class ChartRenderTest {
         for (int c = 0; c < 3; c++) {
             assertTrue(RenderChecks.count(img, ChartColors.cluster(c)) > 1000);
         }
-        assertEquals("holds up", JaccardChart.band(0.75));
-        assertEquals("uncertain", JaccardChart.band(0.5));
-        assertEquals("falls apart", JaccardChart.band(0.4999));
+        // Hennig (2007): stable from 0.75, dissolved at 0.5 or less, as JaccardStability's statuses
+        assertEquals("stable", JaccardChart.band(0.75));
+        assertEquals("doubtful", JaccardChart.band(0.5001));
+        assertEquals("doubtful", JaccardChart.band(0.7499));
+        assertEquals("dissolved", JaccardChart.band(0.5));
     }
 
     @Test

@@ -146,7 +146,8 @@ class InputSideIT {
         assertEquals(0, r.exit(), r.err());
         String steps = summary("modes").path("input").path("preparation").toString();
         assertTrue(steps.contains("Note: 1 of the 4 features tested has values in separated modes on their own "
-                + "(Hartigan's dip test, family-wise level 0.01 over the features tested): f1 (dip "), steps);
+                + "(the dip test of Hartigan and Hartigan, Ann. Statist. 13 (1985) 70-84, family-wise level 0.01 over "
+                + "the features tested): f1 (dip "), steps);
         assertTrue(steps.contains("--scale none"), steps);
         assertTrue(Files.readString(tmp.resolve("modes").resolve("methods.md")).contains("separated modes"));
         // without z-scores nothing divides f1 by its spread: no note

@@ -148,13 +148,15 @@ class MethodsParagraphTest {
         assertTrue(none.contains("not evidence of stable, cohesive clusters"), none);
         assertFalse(none.contains("hold cluster structure"), none);
         String some = words.word(new org.treeproof.study.Reason.Structure(t, 0.05, true));
-        assertTrue(some.startsWith("The data hold cluster structure beyond noise"), some);
+        assertTrue(some.startsWith("The data depart from null data without clusters (a unimodal law"), some);
+        assertTrue(some.contains("0.050 is the smallest Monte Carlo p-value 19 null data sets allow"), some);
         // not rejected (9 of 19 null maxima reach 1.2: p = 10 / 20 = 0.5): no structure, whatever the rule found
         double[] maxima = new double[19];
         java.util.Arrays.fill(maxima, 0, 9, 2.0);
         var weak = new org.treeproof.study.StructureTest(1.2, 0.5, 0.4, 19, 10, maxima);
         String no = words.word(new org.treeproof.study.Reason.Structure(weak, 0.05, false));
-        assertTrue(no.startsWith("The data hold no cluster structure beyond"), no);
+        assertTrue(no.startsWith("No cluster structure was detected beyond"), no);
+        assertTrue(no.endsWith("This is not evidence that the data hold no groups."), no);
     }
 
     @Test

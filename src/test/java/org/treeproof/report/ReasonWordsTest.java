@@ -42,6 +42,11 @@ class ReasonWordsTest {
         var reason = new Reason.Criteria(List.of(), 4, List.of(at(4, Verdict.SUPPORTED, List.of())));
         assertEquals("Every criterion taken alone agrees with k = 4.",
                 new ReasonWords(DecisionRule.DEFAULT).criteria(reason));
+        // the gap statistic disagreeing (it has a sentence of its own) is not called agreement
+        var gapOnly = new Reason.Criteria(List.of(new CriterionChoice(null, "gap statistic", 3, "rule")), 4,
+                List.of(at(4, Verdict.SUPPORTED, List.of())));
+        assertEquals("Every criterion other than the gap statistic taken alone agrees with k = 4.",
+                new ReasonWords(DecisionRule.DEFAULT).criteria(gapOnly));
     }
 
     @Test
