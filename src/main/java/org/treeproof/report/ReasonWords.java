@@ -213,10 +213,9 @@ public final class ReasonWords implements Reason.Visitor<String> {
         }
         if (r.shares().size() == 1) {
             String only = r.verdict() == Verdict.SUPPORTED
-                    ? f("k = %d is the only supported level on %s linkage (a supported cut that lasts over less than "
-                            + "half the relative range of heights of the longest-lasting one is a passing state, not a "
-                            + "level), so no other k competes replicate by replicate", r.recommendedK(),
-                            Names.linkage(r.linkage()))
+                    ? f("k = %d is the only supported level on %s linkage (supported cuts that last only briefly, "
+                            + "passing states of the tree, are not levels), so no other k competes replicate by "
+                            + "replicate", r.recommendedK(), Names.linkage(r.linkage()))
                     : f("k = %d is the only %s solution on %s linkage, so no other k competes replicate by replicate",
                             r.recommendedK(), r.verdict().id(), Names.linkage(r.linkage()));
             return r.verdict() == Verdict.SUPPORTED
