@@ -140,6 +140,15 @@ final class AssessCommand implements Callable<Integer> {
         SampleVariety.require(input, studyInput, settings);
         settings.checkAgainst(studyInput.samples(), studyInput.hasData(), study.maxKGiven());
         org.treeproof.study.Magnitudes.requireWithinLimit(studyInput);
+        if (loaded.isDistanceTable()) {
+            for (var link : settings.linkages()) {
+                if (link.requiresEuclidean()) {
+                    // as the tree command says: the table's metric is not known here
+                    System.err.println("treeproof: note: " + link.id() + " linkage assumes the given distances are "
+                            + "Euclidean");
+                }
+            }
+        }
         String[] classes = labels == null ? null
                 : LabelsReader.read(labels, inputOptions.delimiter().orElse(null), loaded.sampleIds());
         var covariateKinds = explain.kinds();

@@ -69,7 +69,11 @@ final class StudyOutputs {
         var steps = new ArrayList<String>(loaded.preparation().map(r -> r.steps())
                 .orElse(List.of(String.format(Locale.ROOT, "Read a distance table of %d samples.", loaded.samples()))));
         steps.addAll(loneFeatureWarnings(loaded));
-        steps.addAll(skewWarning(loaded));
+        // 0/1 data are drawn for the null at each feature's frequency of ones, not symmetric about a centre, and a
+        // log transform leaves them as they are: the skew warning does not apply to them
+        if (!evidence.settings().metric().binaryOnly()) {
+            steps.addAll(skewWarning(loaded));
+        }
         steps.addAll(multimodalNote(loaded));
         return steps;
     }

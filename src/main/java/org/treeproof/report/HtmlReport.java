@@ -80,9 +80,9 @@ public final class HtmlReport {
                 .open("style").markup(ReportStyle.CSS).close("style").newline().close("head").newline()
                 .open("body").newline();
         h.open("header").element("h1", "Cluster evidence: " + run.inputFile());
-        h.element("p", "meta", f("%d samples · %s · %s · %s %s · generated %s", run.samples(),
-                model.hasData() ? run.features() + " features" : "distances given", Names.metricProse(
-                        model.settings().metric()), run.toolName(), run.toolVersion(), run.generatedAt()));
+        h.element("p", "meta", f("%d samples · %s · %s %s · generated %s", run.samples(),
+                model.hasData() ? run.features() + " features · " + Names.metricProse(model.settings().metric())
+                        : "a distance table given", run.toolName(), run.toolVersion(), run.generatedAt()));
         nav(h);
         h.close("header").newline();
         var tables = new HtmlTables(model, page, sampleRows);

@@ -101,8 +101,10 @@ public final class MethodsParagraph {
                             run.samples(), run.features(), steps));
             out.add(f("Dissimilarities between samples were %s.", Names.metricProse(s.metric())));
         } else {
-            out.add(f("The input was a matrix of dissimilarities between %d samples%s.", run.samples(),
-                    run.preparation().isEmpty() ? ", used as given" : ". " + steps));
+            // each step ends with its own full stop
+            out.add(run.preparation().isEmpty()
+                    ? f("The input was a matrix of dissimilarities between %d samples, used as given.", run.samples())
+                    : f("The input was a matrix of dissimilarities between %d samples. %s", run.samples(), steps));
         }
         out.add(f("Trees were built with %s linkage by the algorithms of %s, and each tree was cut into k = 2 to %d "
                 + "clusters.%s", Prose.and(s.linkages().stream().map(Names::linkageProse).toList()), narrative(c,

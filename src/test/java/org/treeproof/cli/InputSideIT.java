@@ -221,5 +221,27 @@ class InputSideIT {
         assertFalse(s.has("nullReplicates"), s.toString());
         String report = Files.readString(tmp.resolve("dist").resolve("report.html"), StandardCharsets.UTF_8);
         assertTrue(report.contains("not computed: distances only"), "report settings say why");
+        // the table's metric is the user's: not called Euclidean, and Ward's assumption is said
+        assertEquals("precomputed", s.path("metric").asText());
+        assertFalse(report.contains("Euclidean distances"), "the header names no metric for a distance table");
+        assertTrue(r.err().contains("note: ward linkage assumes the given distances are Euclidean"), r.err());
+        assertFalse(Files.readString(tmp.resolve("dist").resolve("methods.md")).contains(".."), "no double stop");
+    }
+
+    @Test
+    void zeroOneDataGetNoSkewWarning() throws Exception {
+        // f1 is 1 in 5 of 120 samples (skewness about 4.4), f2 and f3 in about half: the null of 0/1 data draws each
+        // feature at its frequency of ones, so the warning about symmetric nulls and --log2 does not apply
+        var sb = new StringBuilder("id,f1,f2,f3\n");
+        var rng = new java.util.SplittableRandom(4);
+        for (int i = 0; i < 120; i++) {
+            sb.append(String.format(java.util.Locale.ROOT, "s%d,%d,%d,%d%n", i, i % 24 == 0 ? 1 : 0, rng.nextInt(2),
+                    rng.nextInt(2)));
+        }
+        Path data = Files.writeString(tmp.resolve("binary.csv"), sb.toString());
+        Jar.Result r = assess(data.toString(), "--metric", "jaccard", "--out", "binary", "--replicates", "10",
+                "--null-sets", "0", "--reference-sets", "0", "--max-k", "4");
+        assertEquals(0, r.exit(), r.err());
+        assertFalse(summary("binary").path("input").path("preparation").toString().contains("long tail"));
     }
 }
