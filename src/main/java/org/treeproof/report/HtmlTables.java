@@ -73,7 +73,10 @@ final class HtmlTables {
                 h.close("td");
                 page.num(Integer.toString(r.outliers()))
                         .num(Numbers.scaled(r.cutHeight().chosen()) + (r.tieDependent()
-                        ? NBSP + "†" : "")).num(Numbers.scaled(r.cutHeight().low()) + NBSP + "to "
+                        ? NBSP + "†" : "")).num(!t.monotone() || r.cutHeight().low() > r.cutHeight().high()
+                                // a tree with inversions: the state after n - k merges, which no height need give
+                                ? "no" + NBSP + "single height"
+                                : Numbers.scaled(r.cutHeight().low()) + NBSP + "to "
                                 + Numbers.scaled(r.cutHeight().high()))
                         .num(interval(r.ariMean(), r.ariLow(), r.ariHigh()))
                         .num(interval(r.nullAriMean(), r.nullAriLow(), r.nullAriHigh()))

@@ -188,6 +188,22 @@ class HtmlReportTest {
     }
 
     @Test
+    void aTreeWithInversionsGivesNoRangeOfHeights() {
+        // centroid linkage on three Gaussian groups: merging two close samples moves their centroid nearer to a
+        // third, whose merge is then lower (an inversion), so the state after n - k merges is no cut by height and
+        // the low end of the "range" may lie above its high end
+        var settings = org.treeproof.study.StudySettings.builder().linkages(List.of(org.treeproof.tree.Linkage.CENTROID))
+                .maxK(5).replicates(10).referenceSets(0).nullSets(0).seed(3).build();
+        Studies.Study s = Studies.run(Studies.threeGroups(15, 21, i -> "s" + i), settings);
+        ReportModel m = s.model();
+        assertFalse(m.table(org.treeproof.tree.Linkage.CENTROID).monotone(), "the centroid tree has inversions");
+        Document d = parse(HtmlReport.of(m, List.of()).render());
+        for (Element row : d.select("#evidence table.evidence tbody tr")) {
+            assertEquals("no single height", row.select("td").get(4).text().replace('\u00A0', ' '));
+        }
+    }
+
+    @Test
     void missingValuesShowADashWithAFootnoteAndNeverNaN() {
         for (Studies.Study s : List.of(Studies.separated(), Studies.noise(), Studies.distancesOnly(),
                 Studies.tentative())) {
