@@ -68,14 +68,28 @@ final class StudyOutputs {
     List<String> preparationSteps() {
         var steps = new ArrayList<String>(loaded.preparation().map(r -> r.steps())
                 .orElse(List.of(String.format(Locale.ROOT, "Read a distance table of %d samples.", loaded.samples()))));
-        steps.addAll(loneFeatureWarnings(loaded));
+        return steps;
+    }
+
+    private List<String> cautions;
+
+    /** What the preparation found that bears on the result: warnings and notes, one sentence group each. */
+    List<String> preparationCautions() {
+        if (cautions == null) {
+            cautions = List.copyOf(findCautions());
+        }
+        return cautions;
+    }
+
+    private List<String> findCautions() {
+        var out = new ArrayList<String>(loneFeatureWarnings(loaded));
         // 0/1 data are drawn for the null at each feature's frequency of ones, not symmetric about a centre, and a
         // log transform leaves them as they are: the skew warning does not apply to them
         if (!evidence.settings().metric().binaryOnly()) {
-            steps.addAll(skewWarning(loaded));
+            out.addAll(skewWarning(loaded));
         }
-        steps.addAll(multimodalNote(loaded));
-        return steps;
+        out.addAll(multimodalNote(loaded));
+        return out;
     }
 
     /**
@@ -166,14 +180,16 @@ final class StudyOutputs {
 
     SummaryJson summary(LabelComparison labels) {
         var provenance = new SummaryJson.Provenance("treeproof", Main.toolVersion(), loaded.source().path(),
-                loaded.source().sha256(), preparationSteps(), inputOptions(), labelsSummary(labels));
+                loaded.source().sha256(), preparationSteps(), preparationCautions(), inputOptions(),
+                labelsSummary(labels));
         return new SummaryJson(evidence, rec, provenance, new org.treeproof.report.ReasonWords(rec.rule())::word,
                 explanation, org.treeproof.report.ReasonWords::covariate);
     }
 
     RunInfo runInfo() {
         return new RunInfo("treeproof", Main.toolVersion(), loaded.source().path(), loaded.source().sha256(),
-                evidence.samples(), evidence.features(), preparationSteps(), evidence.settings().metric().id(),
+                evidence.samples(), evidence.features(), preparationSteps(), preparationCautions(),
+                evidence.settings().metric().id(),
                 ShellWords.join(commandLine), evidence.settings().seed(), threads, seconds,
                 DateTimeFormatter.ISO_OFFSET_DATE_TIME.format(ZonedDateTime.now().withNano(0)));
     }

@@ -45,12 +45,20 @@ public final class SummaryJson {
      * @param inputPath   the input file as given
      * @param sha256      the SHA-256 of the input file's bytes
      * @param preparation the preparation steps, as sentences, in order
+     * @param cautions    what the preparation found that bears on the result (warnings and notes), as sentences
      * @param inputOptions the effective input options (name → value), in a stable order
      * @param labels      comparison with known labels, or {@code null}
      */
     public record Provenance(String toolName, String toolVersion, String inputPath, String sha256,
-            List<String> preparation, List<Option> inputOptions, LabelsSummary labels) {
+            List<String> preparation, List<String> cautions, List<Option> inputOptions, LabelsSummary labels) {
+        /** A provenance whose preparation gave no caution. */
+        public Provenance(String toolName, String toolVersion, String inputPath, String sha256,
+                List<String> preparation, List<Option> inputOptions, LabelsSummary labels) {
+            this(toolName, toolVersion, inputPath, sha256, preparation, List.of(), inputOptions, labels);
+        }
+
         public Provenance {
+            cautions = List.copyOf(cautions);
             preparation = List.copyOf(preparation);
             inputOptions = List.copyOf(inputOptions);
         }
@@ -138,6 +146,11 @@ public final class SummaryJson {
         g.writeNumberField("features", evidence.features());
         g.writeArrayFieldStart("preparation");
         for (String s : provenance.preparation()) {
+            g.writeString(s);
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("cautions");
+        for (String s : provenance.cautions()) {
             g.writeString(s);
         }
         g.writeEndArray();

@@ -131,8 +131,16 @@ public final class HtmlReport {
         String cls = "verdict verdict-" + d.verdict().id();
         h.open("div", "class", cls, "role", "status").element("strong", d.verdict().id()).text(d.headline())
                 .close("div");
-        // the caution stands beside the claim as well as in the closing section
+        // the caution stands beside the claim as well as in the closing section, and so do the preparation's
         h.element("p", "caution", model.caution());
+        if (!model.run().cautions().isEmpty()) {
+            h.element("h3", "What the preparation found");
+            h.open("ul", "class", "cautions");
+            for (String c : model.run().cautions()) {
+                h.element("li", c);
+            }
+            h.close("ul");
+        }
         h.open("dl", "class", "facts");
         fact(h, "Number of clusters (k)", Integer.toString(d.k()));
         fact(h, d.hasClusters() ? "Linkage" : "Tree shown", Names.linkage(d.linkage()) + " linkage");

@@ -64,6 +64,14 @@ public final class MethodsParagraph {
         sb.append("# Result\n\n").append(result()).append("\n\n");
         model.explained().ifPresent(x -> sb.append(explained(x)));
         sb.append("## Caution\n\n").append(md(model.caution())).append("\n\n");
+        if (!model.run().cautions().isEmpty()) {
+            // what the preparation found is for the analyst, not the paper: listed, outside the paragraphs
+            sb.append("## What the preparation found\n\n");
+            for (String c : model.run().cautions()) {
+                sb.append("- ").append(md(c)).append('\n');
+            }
+            sb.append('\n');
+        }
         sb.append("## References\n\n");
         List<Reference> refs = new ArrayList<>(cited);
         // alphabetical as a reader expects (Şenbabaoğlu among the S, Müllner before Murtagh), not by code point

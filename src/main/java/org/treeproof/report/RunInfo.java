@@ -17,6 +17,8 @@ import java.util.regex.Pattern;
  * @param samples     samples in the study
  * @param features    features of the prepared data (0 when only distances were given)
  * @param preparation the preparation steps in order, as plain sentences ("log2(x+1) applied")
+ * @param cautions    what the preparation found that bears on the result (warnings and notes, as sentences); shown
+ *                    beside the decision and listed in methods.md after the paragraph, not in it
  * @param metric      the id of the dissimilarity ({@code Metric.id()})
  * @param commandLine the exact command line
  * @param seed        the master seed
@@ -25,8 +27,16 @@ import java.util.regex.Pattern;
  * @param generatedAt when the report was made, as text (e.g. ISO-8601)
  */
 public record RunInfo(String toolName, String toolVersion, String inputFile, String inputSha256, int samples,
-        int features, List<String> preparation, String metric, String commandLine, long seed, int threads,
-        double wallSeconds, String generatedAt) {
+        int features, List<String> preparation, List<String> cautions, String metric, String commandLine, long seed,
+        int threads, double wallSeconds, String generatedAt) {
+
+    /** A run whose preparation gave no caution. */
+    public RunInfo(String toolName, String toolVersion, String inputFile, String inputSha256, int samples,
+            int features, List<String> preparation, String metric, String commandLine, long seed, int threads,
+            double wallSeconds, String generatedAt) {
+        this(toolName, toolVersion, inputFile, inputSha256, samples, features, preparation, List.of(), metric,
+                commandLine, seed, threads, wallSeconds, generatedAt);
+    }
 
     private static final Pattern SHA256 = Pattern.compile("[0-9a-fA-F]{64}");
 
@@ -39,6 +49,7 @@ public record RunInfo(String toolName, String toolVersion, String inputFile, Str
         Objects.requireNonNull(commandLine, "commandLine");
         Objects.requireNonNull(generatedAt, "generatedAt");
         preparation = List.copyOf(preparation);
+        cautions = List.copyOf(cautions);
         if (toolName.isBlank() || toolVersion.isBlank()) {
             throw new IllegalArgumentException("the tool's name and version must not be blank");
         }

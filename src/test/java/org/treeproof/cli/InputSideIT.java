@@ -121,14 +121,19 @@ class InputSideIT {
         String[] quick = {"--replicates", "10", "--null-sets", "0", "--reference-sets", "0", "--max-k", "4"};
         Jar.Result r = assess(concat(new String[] {data.toString(), "--out", "skewed"}, quick));
         assertEquals(0, r.exit(), r.err());
-        String steps = summary("skewed").path("input").path("preparation").toString();
+        String steps = summary("skewed").path("input").path("cautions").toString();
         assertTrue(steps.contains("Warning: 1 of 3 features have a long tail on one side (skewness beyond 2: f1 "), steps);
         assertTrue(steps.contains("--log2"), steps);
-        assertTrue(Files.readString(tmp.resolve("skewed").resolve("methods.md")).contains("long tail on one side"));
+        String md = Files.readString(tmp.resolve("skewed").resolve("methods.md"));
+        // listed after the paragraphs for the analyst, not inside the paragraph meant for a paper
+        assertTrue(md.indexOf("long tail on one side") > md.indexOf("## What the preparation found"), md);
+        assertTrue(md.indexOf("## What the preparation found") > md.indexOf("# Result"), md);
+        assertFalse(summary("skewed").path("input").path("preparation").toString().contains("long tail"));
+        assertTrue(Files.readString(tmp.resolve("skewed").resolve("report.html")).contains("What the preparation found"));
         // the same table with --log2: f1 becomes log2(1 + exp(2 z)), about a softplus of z, no longer skewed beyond 2
         r = assess(concat(new String[] {data.toString(), "--out", "logged", "--log2"}, quick));
         assertEquals(0, r.exit(), r.err());
-        assertFalse(summary("logged").path("input").path("preparation").toString().contains("long tail"));
+        assertFalse(summary("logged").path("input").path("cautions").toString().contains("long tail"));
     }
 
     @Test
@@ -144,7 +149,7 @@ class InputSideIT {
         String[] quick = {"--replicates", "10", "--null-sets", "0", "--reference-sets", "0", "--max-k", "4"};
         Jar.Result r = assess(concat(new String[] {data.toString(), "--out", "modes"}, quick));
         assertEquals(0, r.exit(), r.err());
-        String steps = summary("modes").path("input").path("preparation").toString();
+        String steps = summary("modes").path("input").path("cautions").toString();
         assertTrue(steps.contains("Note: 1 of the 4 features tested has values in separated modes on their own "
                 + "(the dip test of Hartigan and Hartigan, Ann. Statist. 13 (1985) 70-84, family-wise level 0.01 over "
                 + "the features tested): f1 (dip "), steps);
@@ -153,7 +158,7 @@ class InputSideIT {
         // without z-scores nothing divides f1 by its spread: no note
         r = assess(concat(new String[] {data.toString(), "--out", "unscaled", "--scale", "none"}, quick));
         assertEquals(0, r.exit(), r.err());
-        assertFalse(summary("unscaled").path("input").path("preparation").toString().contains("separated modes"));
+        assertFalse(summary("unscaled").path("input").path("cautions").toString().contains("separated modes"));
     }
 
     private static String[] concat(String[] a, String[] b) {
@@ -242,6 +247,6 @@ class InputSideIT {
         Jar.Result r = assess(data.toString(), "--metric", "jaccard", "--out", "binary", "--replicates", "10",
                 "--null-sets", "0", "--reference-sets", "0", "--max-k", "4");
         assertEquals(0, r.exit(), r.err());
-        assertFalse(summary("binary").path("input").path("preparation").toString().contains("long tail"));
+        assertFalse(summary("binary").path("input").path("cautions").toString().contains("long tail"));
     }
 }

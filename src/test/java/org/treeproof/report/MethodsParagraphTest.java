@@ -236,6 +236,25 @@ class MethodsParagraphTest {
     }
 
     @Test
+    void whatThePreparationFoundIsListedAfterTheParagraphsAndBesideTheVerdict() {
+        Studies.Study s = Studies.separated();
+        RunInfo r = s.run();
+        String note = "Note: 1 of the 4 features tested has values in separated modes on their own.";
+        RunInfo withCaution = new RunInfo(r.toolName(), r.toolVersion(), r.inputFile(), r.inputSha256(), r.samples(),
+                r.features(), r.preparation(), List.of(note), r.metric(), r.commandLine(), r.seed(), r.threads(),
+                r.wallSeconds(), r.generatedAt());
+        ReportModel m = ReportModel.of(s.evidence(), s.recommendation(), withCaution);
+        String md = MethodsParagraph.of(m).render();
+        int section = md.indexOf("## What the preparation found\n\n- " + note);
+        assertTrue(section > md.indexOf("## Caution") && section < md.indexOf("## References"), md);
+        assertEquals(md.indexOf(note), section + "## What the preparation found\n\n- ".length(), "only there");
+        var d = org.jsoup.Jsoup.parse(HtmlReport.of(m, List.of()).render());
+        assertEquals(List.of(note), d.getElementById("decision").select("ul.cautions li").eachText());
+        // without cautions, neither part appears
+        assertFalse(MethodsParagraph.of(s.model()).render().contains("What the preparation found"));
+    }
+
+    @Test
     void markupInPreparationStepsIsEscaped() {
         Studies.Study s = Studies.separated();
         RunInfo r = s.run();
