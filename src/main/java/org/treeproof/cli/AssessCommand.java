@@ -173,8 +173,15 @@ final class AssessCommand implements Callable<Integer> {
         try (Engine.Run run = chosen.start(nThreads);
                 var progress = new ProgressReporter(System.err, quiet || noProgress)) {
             if (resume && !quiet) {
-                System.err.println("treeproof: resuming with " + checkpoint.resumedReplicates()
-                        + " replicates kept from the interrupted run");
+                System.err.println(checkpoint.resumed()
+                        ? "treeproof: resuming with " + checkpoint.resumedReplicates()
+                                + " replicates kept from the interrupted run"
+                        : "treeproof: --resume: no interrupted run of this study was found beside --out; starting "
+                                + "afresh");
+            }
+            if (checkpoint.discardedEarlierWork() && !quiet) {
+                System.err.println("treeproof: note: the work an interrupted run kept beside --out was discarded "
+                        + "(run the same command with --resume to continue such a run)");
             }
             if (!run.description().isEmpty() && !quiet) {
                 System.err.println("treeproof: replicates run on " + run.description());

@@ -48,14 +48,30 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
     /** Records on disk: those loaded on resume and those appended since; read by an interrupt notice. */
     private volatile long recordsWritten;
 
+    /** Whether earlier work was loaded ({@code --resume} and a checkpoint of this study was found). */
+    private final boolean loaded;
+    /** Whether an earlier run's checkpoint was found and discarded (no {@code --resume}). */
+    private boolean discarded;
+
     private CheckpointFile(Path dir, boolean load) throws IOException {
         this.dir = dir;
+        this.loaded = load;
         keptReplicates = load ? readReplicates(dir.resolve(fileOf(Stage.REPLICATES))) : List.of();
         for (Stage s : List.of(Stage.NULL_SETS, Stage.GAP_SETS, Stage.MULTISCALE)) {
             keptRows.put(s, load ? readRows(dir.resolve(fileOf(s))) : List.of());
         }
         replicatesWritten = keptReplicates.size();
         recordsWritten = replicatesWritten + keptRows.values().stream().mapToLong(List::size).sum();
+    }
+
+    /** Whether an earlier run of this study was found and its work loaded. */
+    public boolean resumed() {
+        return loaded;
+    }
+
+    /** Whether an earlier run's checkpoint was found and discarded because {@code --resume} was not given. */
+    public boolean discardedEarlierWork() {
+        return discarded;
     }
 
     /** How many finished pieces of work (replicates, null sets, reference sets) the checkpoint holds. */
@@ -97,7 +113,9 @@ public final class CheckpointFile implements Checkpoint, AutoCloseable {
             OutputDirectory.deleteQuietly(dir);
             Files.createDirectories(dir);
             Files.writeString(dir.resolve(FINGERPRINT), fingerprint + "\n", StandardCharsets.UTF_8);
-            return new CheckpointFile(dir, false);
+            var fresh = new CheckpointFile(dir, false);
+            fresh.discarded = found;
+            return fresh;
         } catch (IOException e) {
             throw new InputException("--out " + out + ": cannot keep a checkpoint beside it (" + OutputGuard.describe(e)
                     + ")");

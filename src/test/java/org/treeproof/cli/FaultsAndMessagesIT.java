@@ -65,6 +65,21 @@ class FaultsAndMessagesIT {
     }
 
     @Test
+    void keptWorkDiscardedOrNotFoundIsSaid() throws Exception {
+        Files.copy(BASIC, tmp.resolve("data.csv"));
+        Jar.Result none = Jar.run(tmp, assess("data.csv", "r", "--resume"));
+        assertEquals(0, none.exit(), none.err());
+        assertTrue(none.err().contains("--resume: no interrupted run of this study was found beside --out; starting "
+                + "afresh"), none.err());
+        Jar.Result r = Jar.run(tmp, List.of("-Dtreeproof.faultNoSpace=results"), assess("data.csv", "again"));
+        assertEquals(2, r.exit(), r.err());
+        Jar.Result fresh = Jar.run(tmp, assess("data.csv", "again"));
+        assertEquals(0, fresh.exit(), fresh.err());
+        assertTrue(fresh.err().contains("note: the work an interrupted run kept beside --out was discarded"),
+                fresh.err());
+    }
+
+    @Test
     void aFullDiskWhileKeepingTheCheckpointSaysHowMuchWasKept() throws Exception {
         Files.copy(BASIC, tmp.resolve("data.csv"));
         Jar.Result r = Jar.run(tmp, List.of("-Dtreeproof.faultNoSpace=checkpoint:7"), assess("data.csv", "r"));
