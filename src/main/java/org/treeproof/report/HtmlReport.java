@@ -158,7 +158,7 @@ public final class HtmlReport {
         fact(h, "Gap statistic's choice", t.hasGap() ? "k = " + t.gapChoice() : "not computed");
         h.close("dl");
         h.element("h3", "Why");
-        h.open("ul");
+        h.open("ul", "class", "reasons");
         for (String r : d.reasons()) {
             h.element("li", r);
         }

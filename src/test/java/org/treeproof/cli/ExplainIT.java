@@ -170,7 +170,7 @@ class ExplainIT {
         }
         assertTrue(inReasons, s.get("recommendation").get("reasons").toString());
         Document html = Jsoup.parse(dir.resolve("report.html").toFile(), "UTF-8");
-        assertTrue(html.select("#decision li").first().text().contains("largely follow the covariate 'batch'"),
+        assertTrue(html.select("#decision ul.reasons li").first().text().contains("largely follow the covariate 'batch'"),
                 html.select("#decision").text());
         assertFalse(Files.exists(dir.resolve("sensitivity.csv")));
     }

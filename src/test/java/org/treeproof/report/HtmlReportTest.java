@@ -49,7 +49,7 @@ class HtmlReportTest {
             assertTrue(decision.selectFirst(".verdict").text().startsWith(m.decision().verdict().id()));
             assertEquals(Integer.toString(m.decision().k()), decision.select("dl.facts dd").first().text());
             assertEquals(m.decision().criteria().size(), decision.select("table.criteria tbody tr").size());
-            assertEquals(m.decision().reasons(), decision.select("ul li").eachText());
+            assertEquals(m.decision().reasons(), decision.select("ul.reasons li").eachText());
             // the caution beside the verdict, as in the closing section
             assertEquals(m.caution(), decision.selectFirst("p.caution").text());
             assertEquals(m.caution(), d.getElementById("caution").selectFirst("p.caution").text());
