@@ -76,7 +76,7 @@ final class TreeCommand implements Callable<Integer> {
         DoubleSupplier cophenetic;
         if (loaded.isDistanceTable()) {
             CondensedDistances d = loaded.distances().orElseThrow();
-            metricId = "precomputed";
+            metricId = org.treeproof.distance.Metric.PRECOMPUTED;
             if (link.requiresEuclidean()) {
                 System.err.println("treeproof: note: " + link.id() + " linkage assumes the given distances are Euclidean");
             }

@@ -97,6 +97,9 @@ public enum Metric {
         }
     };
 
+    /** The name outputs give the dissimilarity of a distance table read as given: its own, unknown to treeproof. */
+    public static final String PRECOMPUTED = "precomputed";
+
     private final String id;
     private final List<String> aliases;
     private final boolean euclidean;

@@ -159,8 +159,9 @@ public final class SummaryJson {
 
     private void writeSettings(JsonGenerator g, StudySettings s) throws IOException {
         g.writeObjectFieldStart("settings");
-        // a distance table's metric is the user's, unknown here: "precomputed", as the tree command says
-        g.writeStringField("metric", evidence.features() == 0 ? "precomputed" : s.metric().id());
+        // a distance table's metric is the user's, unknown here, as the tree command says
+        g.writeStringField("metric", evidence.features() == 0 ? org.treeproof.distance.Metric.PRECOMPUTED
+                : s.metric().id());
         g.writeArrayFieldStart("linkages");
         for (Linkage l : s.linkages()) {
             g.writeString(l.id());

@@ -206,7 +206,7 @@ final class ModelFactory {
         out.add(new ReportModel.Setting("Linkages compared",
                 String.join(", ", s.linkages().stream().map(Linkage::id).toList())));
         out.add(new ReportModel.Setting("Dissimilarity (metric)", data ? s.metric().id()
-                : "precomputed: the distance table's own, not known to treeproof"));
+                : org.treeproof.distance.Metric.PRECOMPUTED + ": the distance table's own, not known to treeproof"));
         out.add(new ReportModel.Setting("Numbers of clusters assessed", "2 to " + s.maxK()));
         out.add(new ReportModel.Setting("Stability replicates", Integer.toString(s.replicates())));
         out.add(new ReportModel.Setting("Resampling of samples", s.resampling().id()));
