@@ -76,6 +76,33 @@ final class BranchPValueReport {
                 Numbers.plain(MultiscaleFit.MAX_SE));
     }
 
+    /**
+     * The result's sentence on the recommended clusters' branches: each cluster's AU p-value (or why it has none),
+     * then the clusters flagged for a low one ({@link ClusterBranch#lowAu()}); empty when branch p-values were not
+     * computed or there are no clusters.
+     */
+    static String result(List<ClusterBranch> branches) {
+        if (branches.isEmpty()) {
+            return "";
+        }
+        var each = new java.util.ArrayList<String>();
+        for (ClusterBranch b : branches) {
+            MultiscaleFit.Result r = b.fit();
+            each.add(f("cluster %d %s", b.cluster(), r == null ? "none (a single sample)" : r.fitted()
+                    ? Numbers.fixed(r.au(), 3) + " ± " + Numbers.fixed(r.auSE(), 3) : "none (" + r.status().label() + ")"));
+        }
+        String out = f("AU p-values of the recommended clusters' branches: %s.", Prose.and(each));
+        List<ClusterBranch> low = branches.stream().filter(ClusterBranch::lowAu).toList();
+        if (!low.isEmpty()) {
+            out += f(" Cluster%s %s %s flagged: below an AU p-value of %s the multiscale bootstrap of features does not "
+                    + "reject, at the %s level, that %s branch is absent.", low.size() == 1 ? "" : "s",
+                    Prose.and(low.stream().map(b -> Integer.toString(b.cluster())).toList()),
+                    low.size() == 1 ? "is" : "are", Numbers.plain(ClusterBranch.LOW_AU),
+                    Numbers.percent(1 - ClusterBranch.LOW_AU), low.size() == 1 ? "its" : "each one's");
+        }
+        return out;
+    }
+
     /** The effective settings of the multiscale bootstrap. */
     static List<ReportModel.Setting> settings(StudySettings s) {
         BranchPValueSettings b = s.branchPValues();

@@ -240,6 +240,10 @@ public final class MethodsParagraph {
                         + "of the replicates.", ce.id(), ce.size(), ce.status().label(), Numbers.fixed(ce.jaccard(), 2),
                         Numbers.percent(ce.dissolvedShare()), Numbers.percent(ce.recoveredShare())));
             }
+            String branches = BranchPValueReport.result(model.clusterBranches());
+            if (!branches.isEmpty()) {
+                out.add(branches);
+            }
             int flagged = model.flaggedSamples().size();
             if (flagged > 0) {
                 out.add(f("%d sample%s flagged for low stability or a negative silhouette.", flagged,

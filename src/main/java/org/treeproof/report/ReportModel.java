@@ -142,11 +142,6 @@ public record ReportModel(RunInfo run, StudySettings settings, DecisionRule rule
         return clusters.stream().filter(c -> c.status() != JaccardStability.Status.STABLE).toList();
     }
 
-    /** The recommended clusters whose branch has a low AU p-value ({@link ClusterBranch#lowAu()}). */
-    public List<ClusterBranch> lowAuClusters() {
-        return clusterBranches.stream().filter(ClusterBranch::lowAu).toList();
-    }
-
     /** Whether stability was calibrated against null data. */
     public boolean nullCalibrated() {
         return decision.structureTest() != null;

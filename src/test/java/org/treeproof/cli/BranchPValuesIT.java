@@ -22,7 +22,7 @@ import org.junit.jupiter.api.io.TempDir;
 class BranchPValuesIT {
     private static final ObjectMapper JSON = new ObjectMapper();
     private static final Path TABLE = Path.of("demo-data", "nested-strains.csv").toAbsolutePath();
-    private static final String[] SMALL = {"--log2", "--no-progress", "--replicates", "20", "--null-sets", "0",
+    private static final String[] SMALL = {"--log2", "--no-progress", "--replicates", "20", "--null-sets", "19",
         "--reference-sets", "0", "--max-k", "6", "--branch-pvalues", "--branch-replicates", "20"};
 
     @TempDir
@@ -73,11 +73,23 @@ class BranchPValuesIT {
                     le.get("byK").get(0).get("deltaArea").asDouble(), 0, "at k = 2 the change is the area");
         }
         assertTrue(fitted > 0);
-        if (s.get("recommendation").get("k").asInt() > 1) {
+        // the four planted strains are supported, so the recommended clusters' branches are reported
+        assertEquals(4, s.get("recommendation").get("k").asInt(), s.get("recommendation").toString());
+        {
             assertEquals(s.get("recommendation").get("k").asInt(),
                     s.get("recommendation").get("clusterBranches").size());
             String html = Files.readString(tmp.resolve("out/report.html"));
             assertTrue(html.contains("table class=\"branches\""), "the report lists the clusters' branches");
+            // methods.md's result gives every cluster's AU p-value as summary.json has it, and names the low ones
+            String md = Files.readString(tmp.resolve("out/methods.md"));
+            assertTrue(md.contains("AU p-values of the recommended clusters' branches: "), md);
+            for (JsonNode b : s.get("recommendation").get("clusterBranches")) {
+                String au = b.get("au").isNull() ? "none (" : String.format(java.util.Locale.ROOT, "%.3f ± %.3f",
+                        b.get("au").asDouble(), b.get("auSE").asDouble());
+                assertTrue(md.contains("cluster " + b.get("id").asInt() + " " + au), b + " in\n" + md);
+                assertEquals(b.get("lowAu").asBoolean(), md.matches("(?s).*Clusters? [0-9, and]*\\b"
+                        + b.get("id").asInt() + "\\b[0-9, and]* (is|are) flagged: below an AU p-value.*"), b + "\n" + md);
+            }
         }
         assertTrue(Files.size(tmp.resolve("out/charts/consensus-cdf.png")) > 0);
         assertTrue(Files.readString(tmp.resolve("out/methods.md")).contains("approximately unbiased (AU) p-value"));
