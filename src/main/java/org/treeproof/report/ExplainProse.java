@@ -84,11 +84,15 @@ final class ExplainProse {
         }
         SensitivityResult s = e.sensitivity();
         if (s != null) {
+            List<SensitivityResult.Row> skipped = s.rows().stream().filter(r -> !r.ran()).toList();
             out.add(f("To see whether other reasonable analyses find the same clusters, the %s linkage was rerun at "
-                    + "k = %d under %d alternative analyses, each changing one choice (scaling, log2, the number of most "
+                    + "k = %d under %d alternative analys%s, each changing one choice (scaling, log2, the number of most "
                     + "variable features, or the dissimilarity), and compared with the recommended solution by the "
                     + "adjusted Rand index and, per cluster, the Jaccard similarity of its best match (found again at "
-                    + "%s or more).", s.linkage(), s.k(), s.rows().size(), Numbers.plain(s.survives())));
+                    + "%s or more).%s", s.linkage(), s.k(), s.ran().size(), s.ran().size() == 1 ? "is" : "es",
+                    Numbers.plain(s.survives()), skipped.isEmpty() ? "" : f(" %s tried and could not run on these data: %s.",
+                            skipped.size() == 1 ? "One more alternative was" : skipped.size() + " more alternatives were",
+                            String.join("; ", skipped.stream().map(r -> r.name() + " (" + r.note() + ")").toList()))));
         }
         return out;
     }
