@@ -91,8 +91,9 @@ final class ExplainHtml {
         }
         h.element("p", ExplainProse.covariates(rs) + f(" A covariate is flagged when its q-value is at most %s and its "
                 + "effect is large: Cramér's V at least %s (categorical) or epsilon-squared at least %s (numeric). "
-                + "Clusters that follow a batch, a site or a processing date are the classic artefact: check the "
-                + "flagged covariates before reading the clusters as groups.", Numbers.plain(CovariateRule.MAX_Q),
+                + "Clusters that follow a batch, a site or a processing date are the classic artefact; clusters that "
+                + "follow a known property of the samples recover it. Decide which each flagged covariate is before "
+                + "reading the clusters as groups.", Numbers.plain(CovariateRule.MAX_Q),
                 Numbers.plain(CovariateRule.MIN_CRAMERS_V), Numbers.plain(CovariateRule.MIN_EPSILON_SQUARED)));
         page.table("covariates", "Each covariate against the recommended clusters (outliers and missing values left out)",
                 "Covariate", "Kind", "Test", "#Samples", "#Statistic", "#p", "#q", "Effect", "#Value", "Flagged");

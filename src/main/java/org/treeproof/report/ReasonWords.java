@@ -39,8 +39,9 @@ public final class ReasonWords implements Reason.Visitor<String> {
     public static String covariate(org.treeproof.explain.CovariateFlag flag) {
         String q = flag.qValue() < 0.001 ? "q < 0.001" : String.format(java.util.Locale.ROOT, "q = %.3f", flag.qValue());
         return String.format(java.util.Locale.ROOT, "The clusters largely follow the covariate '%s' (%s %.2f, %s): "
-                + "they may reflect how the samples were collected or processed rather than a difference between "
-                + "them; check this before reading the clusters as groups.", flag.covariate(), flag.effectName(),
+                + "if it records how the samples were collected or processed (a batch, a site, a date), the clusters "
+                + "may reflect that rather than a difference between the samples; if it is a known property of the "
+                + "samples, the clusters recover it. Decide which before reading the clusters as groups.", flag.covariate(), flag.effectName(),
                 flag.effect(), q);
     }
 
