@@ -158,6 +158,9 @@ final class AssessCommand implements Callable<Integer> {
         if (explain.sensitivity && loaded.isDistanceTable()) {
             throw new InputException("--sensitivity reruns other preparations of a data table; a distance table has none");
         }
+        if (explain.featureTest != null && loaded.isDistanceTable()) {
+            throw new InputException("--feature-test compares features between clusters; a distance table has none");
+        }
         MemoryEstimate.of(studyInput.samples(), loaded.features(), settings, nThreads, studyInput.hasData())
                 .requireFits(Runtime.getRuntime().maxMemory(), studyInput.samples());
 
