@@ -38,32 +38,46 @@ public final class StabilityChart {
         double[] x = XCharts.asDoubles(in.k());
         double yMin = 0;
         IntervalSeries ref = in.reference();
+        // a series may lack some k (no cut into that many clusters of the smallest size): each run of consecutive
+        // k with values is drawn on its own, so no line bridges a k that has no value
         if (ref != null) {
-            XCharts.band(chart, "reference band", x, ref.low(), ref.high(),
-                    ChartColors.withAlpha(ChartColors.REFERENCE, 0.28));
-            for (double v : ref.low()) {
-                yMin = Math.min(yMin, v);
+            for (int[] r : ref.runs()) {
+                XCharts.band(chart, "reference band " + r[0], part(x, r), part(ref.low(), r), part(ref.high(), r),
+                        ChartColors.withAlpha(ChartColors.REFERENCE, 0.28));
             }
+            yMin = Math.min(yMin, lowest(ref.low()));
         }
         List<IntervalSeries> series = in.linkages();
         for (int i = 0; i < series.size(); i++) {
             IntervalSeries s = series.get(i);
-            XCharts.band(chart, s.name() + " band", x, s.low(), s.high(),
-                    ChartColors.withAlpha(ChartColors.linkage(s.name(), i), 0.15));
-            for (double v : s.low()) {
-                yMin = Math.min(yMin, v);
+            for (int[] r : s.runs()) {
+                XCharts.band(chart, s.name() + " band " + r[0], part(x, r), part(s.low(), r), part(s.high(), r),
+                        ChartColors.withAlpha(ChartColors.linkage(s.name(), i), 0.15));
             }
+            yMin = Math.min(yMin, lowest(s.low()));
         }
         if (ref != null) {
-            XYSeries line = XCharts.line(chart, "no-structure reference", x, ref.mean(), ChartColors.REFERENCE, 2f);
-            line.setLineStyle(new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
-                    new float[] {7f, 5f}, 0f));
+            boolean first = true;
+            for (int[] r : ref.runs()) {
+                XYSeries line = XCharts.line(chart, first ? "no-structure reference" : "no-structure reference " + r[0],
+                        part(x, r), part(ref.mean(), r), ChartColors.REFERENCE, 2f);
+                line.setLineStyle(new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                        new float[] {7f, 5f}, 0f));
+                line.setShowInLegend(first);
+                first = false;
+            }
         }
         for (int i = 0; i < series.size(); i++) {
             IntervalSeries s = series.get(i);
             boolean chosen = s.name().equals(in.chosenLinkage());
-            XCharts.line(chart, chosen ? s.name() + " (chosen)" : s.name(), x, s.mean(),
-                    ChartColors.linkage(s.name(), i), chosen ? 3.2f : 2f);
+            String name = chosen ? s.name() + " (chosen)" : s.name();
+            boolean first = true;
+            for (int[] r : s.runs()) {
+                XYSeries line = XCharts.line(chart, first ? name : name + " " + r[0], part(x, r), part(s.mean(), r),
+                        ChartColors.linkage(s.name(), i), chosen ? 3.2f : 2f);
+                line.setShowInLegend(first);
+                first = false;
+            }
         }
         var st = chart.getStyler();
         st.setYAxisMin(Math.floor(yMin * 10) / 10);
@@ -87,5 +101,21 @@ public final class StabilityChart {
             rule.setLineStyle(Look.DASHED);
         }
         return chart;
+    }
+
+    /** The values of {@code a} in the run {from, to}. */
+    private static double[] part(double[] a, int[] run) {
+        return java.util.Arrays.copyOfRange(a, run[0], run[1] + 1);
+    }
+
+    /** The smallest value that is a number; +infinity when none is. */
+    private static double lowest(double[] a) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double v : a) {
+            if (!Double.isNaN(v)) {
+                m = Math.min(m, v);
+            }
+        }
+        return m;
     }
 }

@@ -109,16 +109,33 @@ final class StudyChartInputs {
                 ? "Stability over " + replicates + " replicates: no number of clusters is supported"
                 : "Stability over " + replicates + " replicates; chosen: " + linkage + " linkage, k = " + rec.k();
         LinkageEvidence nullSource = nullSource();
-        String note = nullSource == null ? "no null data were drawn, so no band for data without clusters"
-                : evidence.linkages().size() > 1 ? "the grey band is the null data's stability under "
-                        + nullSource.linkage().id() + " linkage" : "";
+        // the numbers of clusters any linkage was assessed at: a linkage without a cut into k clusters of the
+        // smallest size has no value at k, and the chart leaves a gap there
+        int[] k = evidence.linkages().stream().flatMap(le -> le.byK().stream()).mapToInt(KEvidence::k).distinct()
+                .sorted().toArray();
+        var notes = new ArrayList<String>();
+        if (nullSource == null) {
+            notes.add("no null data were drawn, so no band for data without clusters");
+        } else if (evidence.linkages().size() > 1) {
+            notes.add("the grey band is the null data's stability under " + nullSource.linkage().id() + " linkage");
+        }
+        for (LinkageEvidence le : evidence.linkages()) {
+            List<String> absent = java.util.Arrays.stream(k).filter(x -> le.byK().stream().noneMatch(e -> e.k() == x))
+                    .mapToObj(Integer::toString).toList();
+            if (!absent.isEmpty()) {
+                notes.add(le.linkage().id() + " linkage has no cut into k = "
+                        + String.join(", ", absent) + " clusters of at least " + evidence.settings().minClusterSize(
+                                evidence.samples()) + " samples");
+            }
+        }
+        String note = String.join("; ", notes);
         return new Plan("stability", title, note, (dir, base) -> {
-            int[] k = chosen.byK().stream().mapToInt(KEvidence::k).toArray();
             var series = new ArrayList<IntervalSeries>();
             for (LinkageEvidence le : evidence.linkages()) {
-                series.add(interval(le.linkage().id(), le.byK().stream().map(x -> x.stability().ari()).toList()));
+                series.add(onAxis(k, le, interval(le.linkage().id(), le.byK().stream().map(x -> x.stability().ari())
+                        .toList())));
             }
-            IntervalSeries reference = nullSource == null ? null : nullInterval(nullSource);
+            IntervalSeries reference = nullSource == null ? null : onAxis(k, nullSource, nullInterval(nullSource));
             var in = new StabilityInput(title, k, series, reference, solution == null ? 0 : rec.k(),
                     solution == null ? null : linkage);
             return new Drawn(new StabilityChart(in).write(dir, base), StabilityChart.WIDTH, StabilityChart.HEIGHT);
@@ -133,9 +150,8 @@ final class StudyChartInputs {
                     : "no gap statistic: it was not computed (no reference sets)");
         }
         String title = "Gap statistic, " + linkage + " linkage (" + gap.referenceSets() + " reference sets)";
-        String note = gap.ruleMet() ? "" : "the gap rule was not met up to k = " + gap.maxK()
-                + ", so the largest k is marked; the data may hold more clusters than were examined";
-        return new Plan("gap", title, note, (dir, base) -> {
+        // the report's caption says when the rule was never met (report.Figures owns that sentence)
+        return new Plan("gap", title, "", (dir, base) -> {
             var in = new GapInput(title, gap.gap(), gap.se(), gap.chosenK(), linkage);
             return new Drawn(new GapChart(in).write(dir, base), GapChart.WIDTH, GapChart.HEIGHT);
         });
@@ -303,6 +319,26 @@ final class StudyChartInputs {
             high[i] = s.get(i).high();
         }
         return bracket(name, mean, low, high);
+    }
+
+    /** {@code s}, one value per k of {@code le.byK()}, placed on the axis {@code k} with NaN where {@code le} lacks k. */
+    private static IntervalSeries onAxis(int[] k, LinkageEvidence le, IntervalSeries s) {
+        double[] mean = new double[k.length];
+        double[] low = new double[k.length];
+        double[] high = new double[k.length];
+        java.util.Arrays.fill(mean, Double.NaN);
+        java.util.Arrays.fill(low, Double.NaN);
+        java.util.Arrays.fill(high, Double.NaN);
+        double[] m = s.mean();
+        double[] lo = s.low();
+        double[] hi = s.high();
+        for (int i = 0; i < le.byK().size(); i++) {
+            int at = java.util.Arrays.binarySearch(k, le.byK().get(i).k());
+            mean[at] = m[i];
+            low[at] = lo[i];
+            high[at] = hi[i];
+        }
+        return new IntervalSeries(s.name(), mean, low, high);
     }
 
     private static IntervalSeries nullInterval(LinkageEvidence le) {

@@ -204,6 +204,7 @@ final class StudyOutputs {
         ReportModel model = ReportModel.of(evidence, rec, runInfo(), labels, explanation);
         dir.write("methods.md", MethodsParagraph.of(model).render().getBytes(StandardCharsets.UTF_8));
         List<EmbeddedImage> images = new ArrayList<>();
+        var chartNotes = new java.util.HashMap<String, String>();
         try {
             Path charts = dir.file("charts/.keep").getParent();
             Files.deleteIfExists(charts.resolve(".keep"));
@@ -213,6 +214,7 @@ final class StudyOutputs {
                 figures.addAll(ExplainCharts.drawAll(explanation, charts));
             }
             for (Figure f : figures) {
+                chartNotes.put(f.id(), f.note());
                 String png = f.files().stream().filter(n -> n.endsWith(".png")).findFirst().orElse(null);
                 if (png != null && model.figure(f.id()).isPresent()) {
                     images.add(new EmbeddedImage(f.id(), "image/png", Files.readAllBytes(charts.resolve(png))));
@@ -221,7 +223,7 @@ final class StudyOutputs {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the charts", e);
         }
-        dir.write("report.html", HtmlReport.of(model, images).render().getBytes(StandardCharsets.UTF_8));
+        dir.write("report.html", HtmlReport.of(model, images, chartNotes).render().getBytes(StandardCharsets.UTF_8));
     }
 
     /** features.csv, and covariates.csv and sensitivity.csv when they were asked for and there were clusters. */

@@ -32,6 +32,7 @@ public final class HtmlReport {
 
     private final ReportModel model;
     private final Map<String, EmbeddedImage> images;
+    private final Map<String, String> chartNotes = new java.util.HashMap<>();
     private final int sampleRows;
 
     private HtmlReport(ReportModel model, Map<String, EmbeddedImage> images, int sampleRows) {
@@ -47,7 +48,21 @@ public final class HtmlReport {
      * @throws IllegalArgumentException if an image is for a figure the model does not show, or two are for one
      */
     public static HtmlReport of(ReportModel model, List<EmbeddedImage> images) {
-        return of(model, images, SAMPLE_ROWS);
+        return of(model, images, Map.of());
+    }
+
+    /**
+     * The renderer of one model with its drawn charts and what each chart noted while it was drawn (a band's source,
+     * a k without a value, why it was not drawn), added to the figure's caption.
+     *
+     * @param images     at most one image per figure of the model; a figure without one is described, not drawn
+     * @param chartNotes by figure id, the chart's note (blank for none)
+     * @throws IllegalArgumentException if an image is for a figure the model does not show, or two are for one
+     */
+    public static HtmlReport of(ReportModel model, List<EmbeddedImage> images, Map<String, String> chartNotes) {
+        HtmlReport r = of(model, images, SAMPLE_ROWS);
+        r.chartNotes.putAll(chartNotes);
+        return r;
     }
 
     static HtmlReport of(ReportModel model, List<EmbeddedImage> images, int sampleRows) {
@@ -70,7 +85,7 @@ public final class HtmlReport {
 
     /** The page. */
     public String render() {
-        Page page = new Page(images);
+        Page page = new Page(images, chartNotes);
         Html h = page.html;
         RunInfo run = model.run();
         h.markup("<!DOCTYPE html>\n").open("html", "lang", "en").newline().open("head").newline()

@@ -9,11 +9,17 @@ import java.util.Map;
 final class Page {
     final Html html = new Html();
     private final Map<String, EmbeddedImage> images;
+    private final Map<String, String> chartNotes;
     private int figureNumber;
     private boolean missingInTable;
 
     Page(Map<String, EmbeddedImage> images) {
+        this(images, Map.of());
+    }
+
+    Page(Map<String, EmbeddedImage> images, Map<String, String> chartNotes) {
         this.images = images;
+        this.chartNotes = chartNotes;
     }
 
     /** A numeric cell; notes when it shows the dash for a missing value. */
@@ -70,8 +76,11 @@ final class Page {
             html.open("img", "src", img.dataUri(), "alt", f.title());
         }
         html.open("figcaption").element("strong", "Figure " + figureNumber + ". " + f.title() + ". ").text(f.caption());
-        if (img == null) {
-            html.text(" (Chart not embedded; see " + f.path() + ".)");
+        String note = chartNotes.getOrDefault(f.id(), "").strip();
+        if (img != null && !note.isEmpty()) {
+            html.text(" Note: " + note + ".");
+        } else if (img == null) {
+            html.text(note.isEmpty() ? " (Chart not embedded; see " + f.path() + ".)" : " (Not drawn: " + note + ".)");
         }
         html.close("figcaption").close("figure").newline();
     }

@@ -59,6 +59,22 @@ class ChartEdgeCaseTest {
     }
 
     @Test
+    void aLinkageWithoutSomeKLeavesAGap(@TempDir Path tmp) throws Exception {
+        // average linkage has no cut at k = 4 and 6 (no cut into that many clusters of the smallest size); the chart
+        // is still drawn on the axis of every k assessed (it was refused, and left out of the report, before)
+        double nan = Double.NaN;
+        IntervalSeries average = new IntervalSeries("average", new double[] {0.8, 0.7, nan, 0.6, nan},
+                new double[] {0.7, 0.6, nan, 0.5, nan}, new double[] {0.9, 0.8, nan, 0.7, nan});
+        IntervalSeries ward = new IntervalSeries("ward", new double[] {0.9, 0.8, 0.7, 0.6, 0.5},
+                new double[] {0.8, 0.7, 0.6, 0.5, 0.4}, new double[] {0.95, 0.9, 0.8, 0.7, 0.6});
+        assertEquals(List.of(List.of(0, 1), List.of(3, 3)), average.runs().stream()
+                .map(r -> List.of(r[0], r[1])).toList());
+        RenderChecks.check(new StabilityChart(new StabilityInput("Stability", new int[] {2, 3, 4, 5, 6},
+                List.of(average, ward), average, 3, "average"))::write, tmp, "gaps", StabilityChart.WIDTH,
+                StabilityChart.HEIGHT, true);
+    }
+
+    @Test
     void oneFeatureWithoutTreeAndMissingValues(@TempDir Path tmp) throws Exception {
         ChartTree t = ChartTree.leftFirst(3, new int[] {0, 3}, new int[] {1, 2}, new double[] {1, 2});
         DataHeatmapChart h = new DataHeatmapChart(new DataHeatmapInput("Data", 3, 1, new double[] {1, Double.NaN, 3},

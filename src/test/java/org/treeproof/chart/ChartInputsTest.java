@@ -76,6 +76,10 @@ class ChartInputsTest {
                 new double[] {0.4, 0.3}, new double[] {0.9}));
         assertThrows(IllegalArgumentException.class, () -> new IntervalSeries("x", new double[] {Double.NaN},
                 new double[] {0.4}, new double[] {0.9}));
+        // a position with no value has no mean and no interval
+        new IntervalSeries("x", new double[] {Double.NaN}, new double[] {Double.NaN}, new double[] {Double.NaN});
+        assertThrows(IllegalArgumentException.class, () -> new IntervalSeries("x", new double[] {0.5},
+                new double[] {Double.NaN}, new double[] {0.9}));
         new StabilityInput("t", k, List.of(a), null, 3, "average");
         assertThrows(IllegalArgumentException.class, () -> new StabilityInput("t", new int[] {2, 3}, List.of(a), null,
                 0, null));

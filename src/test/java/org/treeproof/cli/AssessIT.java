@@ -95,6 +95,33 @@ class AssessIT {
     }
 
     @Test
+    void aLinkageWithoutSomeKStillHasItsStabilityChart() throws Exception {
+        // src/test/resources/cli/noise-120x6.csv (made by reference/data/cli_noise.py): average linkage has no cut
+        // into 10 clusters of at least 5 samples. The stability chart was refused and the report pointed to a
+        // charts/stability.png that did not exist; now every k assessed is on its axis and the caption says why
+        // average linkage has no value at k = 10
+        Path table = Path.of("src", "test", "resources", "cli", "noise-120x6.csv").toAbsolutePath();
+        Jar.Result r = Jar.run(tmp, "assess", table.toString(), "--out", "noise", "--no-progress");
+        assertEquals(0, r.exit(), r.err());
+        JsonNode s = JSON.readTree(tmp.resolve("noise/summary.json").toFile());
+        int averageKs = 0;
+        for (JsonNode le : s.get("linkages")) {
+            if (le.get("linkage").asText().equals("average")) {
+                averageKs = le.get("byK").size();
+            }
+        }
+        assertEquals(8, averageKs, "the data no longer exercise a linkage without k = 10");
+        assertTrue(Files.size(tmp.resolve("noise/charts/stability.png")) > 0);
+        org.jsoup.nodes.Document html = org.jsoup.Jsoup.parse(tmp.resolve("noise/report.html").toFile(), "UTF-8");
+        assertTrue(html.select("#figure-stability img").size() == 1, "the stability chart is embedded");
+        assertTrue(html.selectFirst("#figure-stability figcaption").text()
+                .contains("average linkage has no cut into k = 10 clusters of at least 5 samples"));
+        for (org.jsoup.nodes.Element figure : html.select("figure.absent")) {
+            assertTrue(figure.text().contains("Not drawn:"), "an absent figure says why: " + figure.text());
+        }
+    }
+
+    @Test
     void nestedDemoShowsBothLevels() throws Exception {
         JsonNode rec = assess("nested-strains.csv", "nested").get("recommendation");
         var levels = new java.util.ArrayList<Integer>();

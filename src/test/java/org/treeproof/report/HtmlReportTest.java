@@ -112,6 +112,19 @@ class HtmlReportTest {
     }
 
     @Test
+    void aChartsNoteJoinsItsCaptionAndANotDrawnChartSaysWhy() {
+        ReportModel m = Studies.separated().model();
+        List<EmbeddedImage> given = images(m).stream().filter(i -> !i.figureId().equals("gap")).toList();
+        Document d = parse(HtmlReport.of(m, given, java.util.Map.of("stability", "the grey band is the null's",
+                "gap", "the chart refused the values (x)")).render());
+        assertTrue(d.selectFirst("#figure-stability figcaption").text().endsWith("Note: the grey band is the null's."),
+                d.selectFirst("#figure-stability").text());
+        String gap = d.selectFirst("#figure-gap figcaption").text();
+        assertTrue(gap.endsWith("(Not drawn: the chart refused the values (x).)") && !gap.contains("charts/gap.png"),
+                gap);
+    }
+
+    @Test
     void imagesForFiguresTheModelDoesNotShowAreRefused() {
         ReportModel noise = Studies.noise().model();
         var silhouette = new EmbeddedImage("silhouette", "image/png", Fixtures.png(1));
