@@ -404,16 +404,10 @@ public final class SummaryJson {
             g.writeEndObject();
         }
         g.writeEndArray();
-        g.writeArrayFieldStart("flaggedClusters");
-        for (ClusterEvidence c : r.flaggedClusters()) {
-            g.writeStartObject();
-            g.writeNumberField("id", c.id());
-            g.writeNumberField("size", c.size());
-            number(g, "jaccard", c.jaccard());
-            g.writeStringField("status", c.status().label());
-            g.writeEndObject();
-        }
-        g.writeEndArray();
+        // the recommended clusters as clusters.csv has them (samples set aside as far after the cut left out), and
+        // those below the stable band
+        writeClusters(g, "clusters", r.clusters());
+        writeClusters(g, "flaggedClusters", r.flaggedClusters());
         BranchPValueJson.writeClusterBranches(g, evidence, r);
         g.writeArrayFieldStart("flaggedSamples");
         for (Recommendation.SampleFlag f : r.flaggedSamples()) {
@@ -485,6 +479,20 @@ public final class SummaryJson {
         number(g, "high", h.high());
         number(g, "chosen", h.chosen());
         g.writeEndObject();
+    }
+
+    private static void writeClusters(JsonGenerator g, String field, List<ClusterEvidence> clusters)
+            throws IOException {
+        g.writeArrayFieldStart(field);
+        for (ClusterEvidence c : clusters) {
+            g.writeStartObject();
+            g.writeNumberField("id", c.id());
+            g.writeNumberField("size", c.size());
+            number(g, "jaccard", c.jaccard());
+            g.writeStringField("status", c.status().label());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
     }
 
     private static void number(JsonGenerator g, String field, double v) throws IOException {

@@ -79,9 +79,7 @@ final class ModelFactory {
             tables.add(table(le));
         }
         Decision decision = decision(explanation);
-        List<ClusterEvidence> clusters = rec.k() > 1 ? ClusterEvidence.sizedBy(
-                linkageEvidence(rec.linkage()).at(rec.k()).clusters(), rec.clustering())
-                : List.of();
+        List<ClusterEvidence> clusters = rec.clusters();
         var notes = new ArrayList<String>();
         notes.addAll(dataNotes());
         var figures = new ArrayList<>(Figures.of(evidence, rec, notes));

@@ -15,7 +15,8 @@ import org.treeproof.tree.Linkage;
  *                        levels when more than one)
  * @param reasons         typed reasons: which evidence carried the decision and which disagreed
  * @param criteria        each criterion's own choice of k for the recommended linkage
- * @param flaggedClusters clusters of the recommended solution below Hennig's stable band
+ * @param clusters        the recommended clusters with their sizes in the final solution (samples set aside as far
+ *                        after the cut left out) and their stability; empty when the verdict is unsupported
  * @param flaggedSamples  samples with low stability or negative silhouette in the recommended solution
  * @param linkages        per linkage: its own best k and key figures
  * @param agreement       ARI between the linkages' own solutions, {@code [a][b]} in the order of {@code linkages}
@@ -32,7 +33,7 @@ import org.treeproof.tree.Linkage;
  *                        increasing k (empty without null data)
  */
 public record Recommendation(Linkage linkage, int k, CutHeight cutHeight, Verdict verdict, List<Integer> levels,
-        List<Reason> reasons, List<CriterionChoice> criteria, List<ClusterEvidence> flaggedClusters,
+        List<Reason> reasons, List<CriterionChoice> criteria, List<ClusterEvidence> clusters,
         List<SampleFlag> flaggedSamples, List<LinkageSummary> linkages, double[][] agreement, DecisionRule rule,
         List<Assessment> assessments, StructureTest structureTest, Clustering clustering, int minClusterSize,
         List<KShare> votes) {
@@ -41,7 +42,7 @@ public record Recommendation(Linkage linkage, int k, CutHeight cutHeight, Verdic
         levels = List.copyOf(levels);
         reasons = List.copyOf(reasons);
         criteria = List.copyOf(criteria);
-        flaggedClusters = List.copyOf(flaggedClusters);
+        clusters = List.copyOf(clusters);
         flaggedSamples = List.copyOf(flaggedSamples);
         linkages = List.copyOf(linkages);
         assessments = List.copyOf(assessments);
@@ -63,6 +64,11 @@ public record Recommendation(Linkage linkage, int k, CutHeight cutHeight, Verdic
             a[i] = agreement[i].clone();
         }
         return a;
+    }
+
+    /** The recommended clusters below Hennig's stable band, with their sizes in the final solution. */
+    public List<ClusterEvidence> flaggedClusters() {
+        return clusters.stream().filter(c -> c.status() != org.treeproof.score.JaccardStability.Status.STABLE).toList();
     }
 
     /** The assessment of one solution, or {@code null} when that linkage has no cut at k. */

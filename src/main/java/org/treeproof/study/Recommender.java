@@ -151,7 +151,7 @@ public final class Recommender {
                     summaries.stream().filter(s -> s.linkage() != le.linkage()).toList()));
         }
         return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict(), levels, reasons, criteria,
-                flaggedClusters(e, solution), flaggedSamples(e, solution), summaries, agreement, rule, assessments, test, solution,
+                ClusterEvidence.sizedBy(e.clusters(), solution), flaggedSamples(e, solution), summaries, agreement, rule, assessments, test, solution,
                 evidence.minClusterSize(), votes);
     }
 
@@ -353,12 +353,6 @@ public final class Recommender {
                     ? "smallest k with Gap(k) >= Gap(k+1) - s(k+1)" : "rule not met up to the largest k; largest k shown"));
         }
         return out;
-    }
-
-    /** The recommended clusters that are not stable, with their sizes in the final solution. */
-    private static List<ClusterEvidence> flaggedClusters(KEvidence e, Clustering solution) {
-        return ClusterEvidence.sizedBy(e.clusters(), solution).stream()
-                .filter(c -> c.status() != JaccardStability.Status.STABLE).toList();
     }
 
     /** The flagged samples of the recommended clusters, leaving out every outlier of the final solution. */

@@ -186,7 +186,7 @@ class ReportModelTest {
     }
 
     @Test
-    void farSamplesSetAsideAfterTheCutLeaveTheirClusterEverywhere() {
+    void farSamplesSetAsideAfterTheCutLeaveTheirClusterEverywhere() throws Exception {
         // Two groups of 30, 10 apart on each of 4 features, and two samples 25 out on the first feature beside the
         // first group. Ward merges each far sample into the first group (cost about 1.4 x 25) long before the groups
         // merge (about 5.5 x 20), so the cut at k = 2 holds them; they join that cluster far above its own first
@@ -212,6 +212,15 @@ class ReportModelTest {
         assertTrue(rec.clustering().isOutlier(60) && rec.clustering().isOutlier(61));
         ReportModel m = s.model();
         assertEquals(List.of(30, 30), m.clusters().stream().map(c -> c.size()).toList());
+        // summary.json's recommendation carries the same sizes (its per-k figures are those of the cut, 32 and 30
+        // with the far pair; a script reading only those got other clusters than clusters.csv)
+        var provenance = new org.treeproof.io.SummaryJson.Provenance("treeproof", "test", "far.csv", "0".repeat(64),
+                List.of(), List.of(), null);
+        var json = new com.fasterxml.jackson.databind.ObjectMapper().readTree(new org.treeproof.io.SummaryJson(
+                s.evidence(), rec, provenance, new ReasonWords(rec.rule())::word).toBytes());
+        var sizes = new java.util.ArrayList<Integer>();
+        json.get("recommendation").get("clusters").forEach(c -> sizes.add(c.get("size").asInt()));
+        assertEquals(List.of(30, 30), sizes);
         // known classes: the two groups and the far pair; the comparison has the 2 clusters and an outlier row
         // (this once stopped the run: the comparison counted the far samples as clusters of their own)
         String[] classes = new String[n];
@@ -265,7 +274,7 @@ class ReportModelTest {
                 f.cophenetic()), a.verdict(), a.met(), a.failed());
         reasons.add(new org.treeproof.study.Reason.BestFailed(odd));
         var changed = new Recommendation(r.linkage(), r.k(), r.cutHeight(), r.verdict(), r.levels(), reasons,
-                r.criteria(), r.flaggedClusters(), r.flaggedSamples(), r.linkages(), r.agreement(), r.rule(),
+                r.criteria(), r.clusters(), r.flaggedSamples(), r.linkages(), r.agreement(), r.rule(),
                 r.assessments(), r.structureTest(), r.clustering(), r.minClusterSize(), r.votes());
         List<String> shown = ReportModel.of(s.evidence(), changed, s.run()).decision().reasons();
         String last = shown.get(shown.size() - 1);
