@@ -144,8 +144,7 @@ final class AssessCommand implements Callable<Integer> {
             for (var link : settings.linkages()) {
                 if (link.requiresEuclidean()) {
                     // as the tree command says: the table's metric is not known here
-                    System.err.println("treeproof: note: " + link.id() + " linkage assumes the given distances are "
-                            + "Euclidean");
+                    System.err.println("treeproof: note: " + StudyOutputs.euclideanAssumed(link));
                 }
             }
         }

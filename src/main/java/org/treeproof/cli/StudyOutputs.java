@@ -89,7 +89,23 @@ final class StudyOutputs {
             out.addAll(skewWarning(loaded));
         }
         out.addAll(multimodalNote(loaded));
+        if (loaded.isDistanceTable()) {
+            for (var link : evidence.settings().linkages()) {
+                if (link.requiresEuclidean()) {
+                    out.add("Note: " + euclideanAssumed(link) + ".");
+                }
+            }
+        }
         return out;
+    }
+
+    /**
+     * The note for a linkage that assumes Euclidean distances run on a distance table (whose dissimilarity treeproof
+     * cannot know); the one wording that the terminal, {@code tree} and the cautions of {@code assess} use.
+     */
+    static String euclideanAssumed(org.treeproof.tree.Linkage link) {
+        return link.id() + " linkage assumes the given distances are Euclidean (its merge cost is a within-cluster sum "
+                + "of squares); with another dissimilarity its heights have no such meaning";
     }
 
     /**
@@ -136,10 +152,11 @@ final class StudyOutputs {
         for (int i = 0; i < Math.min(3, flags.size()); i++) {
             named.add(String.format(Locale.ROOT, "%s %.1f", flags.get(i).feature(), flags.get(i).skewness()));
         }
-        return List.of(String.format(Locale.ROOT, "Warning: %d of %d features have a long tail on one side "
+        return List.of(String.format(Locale.ROOT, "Warning: %d of %d features %s a long tail on one side "
                 + "(skewness beyond %.0f: %s%s). The null data are symmetric, so pieces of such a tail can pass for "
                 + "clusters; for intensities, abundances or counts, a log transform (--log2) before scaling is the "
-                + "usual remedy.", flags.size(), features, org.treeproof.data.SkewedFeatures.LIMIT,
+                + "usual remedy.", flags.size(), features, flags.size() == 1 ? "has" : "have",
+                org.treeproof.data.SkewedFeatures.LIMIT,
                 String.join(", ", named), flags.size() > 3 ? ", ..." : ""));
     }
 

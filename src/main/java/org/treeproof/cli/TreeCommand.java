@@ -78,7 +78,7 @@ final class TreeCommand implements Callable<Integer> {
             CondensedDistances d = loaded.distances().orElseThrow();
             metricId = org.treeproof.distance.Metric.PRECOMPUTED;
             if (link.requiresEuclidean()) {
-                System.err.println("treeproof: note: " + link.id() + " linkage assumes the given distances are Euclidean");
+                System.err.println("treeproof: note: " + StudyOutputs.euclideanAssumed(link));
             }
             org.treeproof.study.Magnitudes.requireWithinLimit(loaded.sampleIds(), d);
             checkCuts(d.size());

@@ -188,9 +188,11 @@ final class HtmlTables {
             h.element("p", f("No sample is flagged: every sample stays with its cluster in at least %s of the replicates "
                     + "that hold it, and none has a negative silhouette.", Numbers.percent(model.rule().unstableSample())));
         } else {
-            page.table("samples", f("%d flagged sample%s: staying with their cluster in fewer than %s of the replicates "
-                    + "that hold them, or closer on average to another cluster (negative silhouette)", flags.size(),
-                    flags.size() == 1 ? "" : "s", Numbers.percent(model.rule().unstableSample())), "Sample",
+            boolean one = flags.size() == 1;
+            page.table("samples", f("%d flagged sample%s: staying with %s cluster in fewer than %s of the replicates "
+                    + "that hold %s, or closer on average to another cluster (negative silhouette)", flags.size(),
+                    one ? "" : "s", one ? "its" : "their", Numbers.percent(model.rule().unstableSample()),
+                    one ? "it" : "them"), "Sample",
                     "#Cluster", "#Stays with its cluster (share of replicates)", "#Silhouette", "Why");
             for (Recommendation.SampleFlag s : flags.subList(0, Math.min(sampleRows, flags.size()))) {
                 h.open("tr");

@@ -122,7 +122,7 @@ class InputSideIT {
         Jar.Result r = assess(concat(new String[] {data.toString(), "--out", "skewed"}, quick));
         assertEquals(0, r.exit(), r.err());
         String steps = summary("skewed").path("input").path("cautions").toString();
-        assertTrue(steps.contains("Warning: 1 of 3 features have a long tail on one side (skewness beyond 2: f1 "), steps);
+        assertTrue(steps.contains("Warning: 1 of 3 features has a long tail on one side (skewness beyond 2: f1 "), steps);
         assertTrue(steps.contains("--log2"), steps);
         String md = Files.readString(tmp.resolve("skewed").resolve("methods.md"));
         // listed after the paragraphs for the analyst, not inside the paragraph meant for a paper
@@ -230,7 +230,13 @@ class InputSideIT {
         assertEquals("precomputed", s.path("metric").asText());
         assertFalse(report.contains("Euclidean distances"), "the header names no metric for a distance table");
         assertTrue(r.err().contains("note: ward linkage assumes the given distances are Euclidean"), r.err());
-        assertFalse(Files.readString(tmp.resolve("dist").resolve("methods.md")).contains(".."), "no double stop");
+        // and said where a reader of the results sees it, not only on the terminal
+        String methods = Files.readString(tmp.resolve("dist").resolve("methods.md"));
+        assertTrue(methods.contains("ward linkage assumes the given distances are Euclidean"), methods);
+        assertTrue(report.contains("ward linkage assumes the given distances are Euclidean"), "in the report");
+        assertTrue(summary("dist").path("input").path("cautions").toString()
+                .contains("ward linkage assumes the given distances are Euclidean"));
+        assertFalse(methods.contains(".."), "no double stop");
     }
 
     @Test
