@@ -40,6 +40,12 @@ final class ExplainProse {
     static final Reference KRUSKAL_WALLIS = new Reference("Kruskal & Wallis, 1952", "Kruskal, W. H. & Wallis, W. A. "
             + "(1952). Use of ranks in one-criterion variance analysis. Journal of the American Statistical "
             + "Association, 47, 583–621.", "10.1080/01621459.1952.10483441");
+    /** Entry quoted from memory of the paper; no DOI known. */
+    static final Reference TOMCZAK = new Reference("Tomczak & Tomczak, 2014", "Tomczak, M. & Tomczak, E. (2014). The "
+            + "need to report effect size estimates revisited. An overview of some recommended measures of effect size. "
+            + "Trends in Sport Sciences, 21, 19–25.", "");
+    static final Reference CRAMER = new Reference("Cramér, 1946", "Cramér, H. (1946). Mathematical Methods of "
+            + "Statistics. Princeton University Press (section 21.9). ISBN 0-691-08004-6.", "");
     static final Reference FISHER = new Reference("Fisher, 1922", "Fisher, R. A. (1922). On the interpretation of χ² "
             + "from contingency tables, and the calculation of P. Journal of the Royal Statistical Society, 85, 87–94.",
             "10.2307/2340521");
@@ -75,11 +81,11 @@ final class ExplainProse {
         if (e.covariates() != null && !e.covariates().isEmpty()) {
             out.add(f("Each covariate was tested against the clusters: a categorical one by Pearson's chi-square test "
                     + "(Fisher's exact test (%s) for a 2 × 2 table, or a Monte Carlo test with %d permutations for a larger "
-                    + "one, when an expected count was below 5) with Cramér's V as the effect; a numeric one by the "
-                    + "Kruskal-Wallis test (%s) with epsilon-squared (Tomczak & Tomczak, 2014) as the effect; q-values "
-                    + "are Benjamini-Hochberg over the covariates. A covariate was flagged when q ≤ %s and Cramér's V ≥ "
+                    + "one, when an expected count was below 5) with Cramér's V (%s) as the effect; a numeric one by the "
+                    + "Kruskal-Wallis test (%s) with epsilon-squared (%s) as the effect; q-values "
+                    + "are Benjamini-Hochberg (%s) over the covariates. A covariate was flagged when q ≤ %s and Cramér's V ≥ "
                     + "%s or epsilon-squared ≥ %s.", cite(cited, FISHER), CovariateAssociation.PERMUTATIONS,
-                    cite(cited, KRUSKAL_WALLIS), Numbers.plain(CovariateRule.MAX_Q),
+                    cite(cited, CRAMER), cite(cited, KRUSKAL_WALLIS), cite(cited, TOMCZAK), cite(cited, BENJAMINI_HOCHBERG), Numbers.plain(CovariateRule.MAX_Q),
                     Numbers.plain(CovariateRule.MIN_CRAMERS_V), Numbers.plain(CovariateRule.MIN_EPSILON_SQUARED)));
         }
         SensitivityResult s = e.sensitivity();

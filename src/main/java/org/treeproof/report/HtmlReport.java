@@ -212,10 +212,19 @@ public final class HtmlReport {
     private static void references(Html h, ReportModel model) {
         HtmlTables.openSection(h, "references");
         h.open("ol", "class", "references");
+        // the works behind every score the report's tables show; the null data's and the gap statistic's only when
+        // they were computed (a study on distances alone has neither)
         var refs = new java.util.ArrayList<>(List.of(Reference.CALINSKI_HARABASZ, Reference.DAVIES_BOULDIN,
                 Reference.DUNN, Reference.GOMEZ, Reference.HENNIG, Reference.HOPE, Reference.HUBERT_ARABIE, Reference.KAUFMAN_ROUSSEEUW,
                 Reference.LIU, Reference.MONTI, Reference.MULLNER, Reference.MURTAGH_LEGENDRE, Reference.ROUSSEEUW,
                 Reference.ROUSSEEUW_CROUX, Reference.SENBABAOGLU, Reference.TIBSHIRANI, Reference.WARD, Reference.WESTFALL_YOUNG));
+        if (!model.nullCalibrated()) {
+            refs.removeAll(List.of(Reference.GOMEZ, Reference.HOPE, Reference.LIU, Reference.ROUSSEEUW_CROUX,
+                    Reference.WESTFALL_YOUNG));
+        }
+        if (!model.gapComputed()) {
+            refs.remove(Reference.TIBSHIRANI);
+        }
         model.explained().ifPresent(x -> refs.addAll(ExplainProse.references(x)));
         for (Reference r : refs) {
             if (r.doi().isEmpty()) {

@@ -133,10 +133,10 @@ public final class MethodsParagraph {
                 cite(c, Reference.HENNIG)));
         int m = model.decision().minClusterSize();
         out.add(f("Only branches of at least %d samples counted as clusters, in the full-data trees and in every "
-                + "replicate and null data set; samples on smaller branches were set aside as outliers, left out of k "
+                + "replicate%s; samples on smaller branches were set aside as outliers, left out of k "
                 + "and of the fit measures, and counted as clusters of their own in the ARI and consensus. A replicate "
                 + "was cut into as many clusters as the full-data solution had with at least that many (scaled to the "
-                + "replicate's size) of their samples drawn.", m));
+                + "replicate's size) of their samples drawn.", m, model.nullCalibrated() ? " and null data set" : ""));
         String branches = BranchPValueReport.methods(s, c);
         if (!branches.isEmpty()) {
             out.add(branches);

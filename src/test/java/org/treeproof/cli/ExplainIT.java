@@ -146,6 +146,21 @@ class ExplainIT {
                     .matcher(methods).find(), methods);
         }
         assertTrue(methods.contains("Benjamini & Hochberg, 1995"));
+        // every work cited in the text has its entry under References (epsilon-squared's and Cramér's V's sources
+        // were cited, or named, without one): each "(Author[ & Author| et al.], year)" citation is matched to an
+        // entry starting with that first author's surname
+        String text = methods.substring(0, methods.indexOf("## References"));
+        String refs = methods.substring(methods.indexOf("## References"));
+        var cite = java.util.regex.Pattern.compile("([A-ZÀ-Ž][\\p{L}-]+)(?: & [\\p{L}-]+| et al\\.)?, (\\d{4})")
+                .matcher(text);
+        int citations = 0;
+        while (cite.find()) {
+            citations++;
+            assertTrue(refs.contains("- " + cite.group(1) + ", ") && refs.contains("(" + cite.group(2) + ")"),
+                    "no entry for " + cite.group() + " in\n" + refs);
+        }
+        assertTrue(citations >= 5, "citations found: " + citations);
+        assertTrue(refs.contains("- Tomczak, M.") && refs.contains("- Cramér, H."), refs);
     }
 
     @Test

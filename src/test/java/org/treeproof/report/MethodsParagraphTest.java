@@ -201,6 +201,14 @@ class MethodsParagraphTest {
         assertFalse(md.contains("Tibshirani"));
         assertFalse(md.contains("Calinski"));
         assertFalse(md.contains("Ward"));
+        assertFalse(md.contains("null data set;"), "no null data sets were drawn");
+        // the report lists neither the null data's nor the gap statistic's works when neither was computed
+        String refs = HtmlReport.of(Studies.distancesOnly().model(), List.of()).render();
+        refs = refs.substring(refs.indexOf("class=\"references\""));
+        for (String absent : List.of("Tibshirani, R.", "Westfall, P.", "Liu, Y.", "Hope, A.", "Rousseeuw, P. J. & Croux")) {
+            assertFalse(refs.contains(absent), absent);
+        }
+        assertTrue(refs.contains("Hubert, L.") && refs.contains("Hennig, C."), refs);
     }
 
     @Test
