@@ -162,7 +162,8 @@ public final class HtmlReport {
         if (d.hasClusters()) {
             fact(h, "Cut height (distance units)", ModelFactory.capital(Prose.cut(model.recommendedRow().orElseThrow(),
                     model.table(d.linkage()))));
-            fact(h, "Supported levels", d.levels().size() > 1 ? "k = " + Prose.and(d.levels().stream()
+            fact(h, "Supported levels", d.levels().isEmpty() ? "none: the recommendation is tentative"
+                    : d.levels().size() > 1 ? "k = " + Prose.and(d.levels().stream()
                     .map(String::valueOf).toList()) + " (nested cuts of one tree)"
                     : "k = " + d.k() + " only");
         } else {

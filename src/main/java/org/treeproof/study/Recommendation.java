@@ -12,7 +12,7 @@ import org.treeproof.tree.Linkage;
  * @param cutHeight       the heights that give the solution on the linkage's tree and the chosen one
  * @param verdict         how well the evidence supports the solution
  * @param levels          the supported numbers of clusters of the recommended linkage, in increasing order (nested
- *                        levels when more than one)
+ *                        levels when more than one); empty when the verdict is tentative or unsupported
  * @param reasons         typed reasons: which evidence carried the decision and which disagreed
  * @param criteria        each criterion's own choice of k for the recommended linkage
  * @param clusters        the recommended clusters with their sizes in the final solution (samples set aside as far

@@ -117,7 +117,8 @@ public final class Recommender {
         }
         LinkageEvidence le = all.get(winnerLinkage);
         KEvidence e = le.at(winner.k());
-        List<Integer> levels = levels(le, assessments, winner);
+        // a tentative winner is no supported level (none of the linkage's solutions is supported)
+        List<Integer> levels = winner.verdict() == Verdict.SUPPORTED ? levels(le, assessments, winner) : List.of();
         List<Recommendation.CriterionChoice> criteria = criteria(le);
         List<Recommendation.KShare> votes = votes(le, winner.verdict(), assessments);
         reasons.add(new Reason.Chosen(winner, e));

@@ -259,6 +259,10 @@ class ReportModelTest {
         assertTrue(m.decision().headline().contains("tentatively"));
         assertTrue(m.caution().contains("hypotheses"));
         assertTrue(m.caution().contains("segments of a continuum"), m.caution());
+        // a tentative solution is no supported level (the report said "Supported levels: k = 3 only")
+        assertEquals(List.of(), Studies.tentative().recommendation().levels());
+        String html = HtmlReport.of(m, List.of()).render();
+        assertTrue(html.contains("none: the recommendation is tentative"), "the decision's facts");
     }
 
     @Test
