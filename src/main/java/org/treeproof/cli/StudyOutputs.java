@@ -41,9 +41,11 @@ final class StudyOutputs {
     private final int threads;
     private final double seconds;
     private final Explanation explanation;
+    private final boolean samplesInColumns;
 
     StudyOutputs(LoadedInput loaded, Evidence evidence, Recommendation rec, String[] classes, Path labelsFile,
-            String[] commandLine, int threads, double seconds, Explanation explanation) {
+            String[] commandLine, int threads, double seconds, Explanation explanation, boolean samplesInColumns) {
+        this.samplesInColumns = samplesInColumns;
         this.loaded = loaded;
         this.evidence = evidence;
         this.rec = rec;
@@ -187,10 +189,11 @@ final class StudyOutputs {
         o.add(new SummaryJson.Option("inputKind", loaded.isDistanceTable() ? "distances" : "data"));
         loaded.preparation().ifPresent(r -> {
             Preparation p = r.settings();
+            o.add(new SummaryJson.Option("samplesInColumns", samplesInColumns));
             o.add(new SummaryJson.Option("missing", p.missing().userName()));
-            o.add(new SummaryJson.Option("log2", String.valueOf(p.log2())));
+            o.add(new SummaryJson.Option("log2", p.log2()));
             o.add(new SummaryJson.Option("scale", p.scale().userName()));
-            o.add(new SummaryJson.Option("topVariable", String.valueOf(p.topVariable())));
+            o.add(new SummaryJson.Option("topVariable", p.topVariable()));
         });
         return o;
     }

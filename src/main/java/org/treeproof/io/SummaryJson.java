@@ -64,8 +64,14 @@ public final class SummaryJson {
         }
     }
 
-    /** One effective option, written as a string. */
-    public record Option(String name, String value) {
+    /** One effective option, written as a JSON string, boolean or number as its value is. */
+    public record Option(String name, Object value) {
+        public Option {
+            java.util.Objects.requireNonNull(name, "name");
+            if (!(value instanceof String || value instanceof Boolean || value instanceof Integer)) {
+                throw new IllegalArgumentException("option " + name + ": a string, boolean or int, not " + value);
+            }
+        }
     }
 
     /** The recommended solution against known labels. */
@@ -189,7 +195,13 @@ public final class SummaryJson {
         BranchPValueJson.writeSettings(g, s.branchPValues());
         g.writeNumberField("minClusterSize", evidence.minClusterSize());
         for (Option o : provenance.inputOptions()) {
-            g.writeStringField(o.name(), o.value());
+            if (o.value() instanceof Boolean b) {
+                g.writeBooleanField(o.name(), b);
+            } else if (o.value() instanceof Integer i) {
+                g.writeNumberField(o.name(), i);
+            } else {
+                g.writeStringField(o.name(), (String) o.value());
+            }
         }
         g.writeObjectFieldStart("decisionRule");
         var r = recommendation.rule();

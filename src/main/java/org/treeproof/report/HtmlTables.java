@@ -283,7 +283,6 @@ final class HtmlTables {
             h.close("ol");
         }
         h.close("td").close("tr");
-        row("Seed", Long.toString(run.seed()));
         row("Threads", Integer.toString(run.threads()));
         row("Wall time", Numbers.seconds(run.wallSeconds()));
         row("Report generated", run.generatedAt());

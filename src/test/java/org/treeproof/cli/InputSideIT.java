@@ -75,6 +75,11 @@ class InputSideIT {
             JsonNode s = summary(metric).path("settings");
             assertEquals("feature-frequency", s.path("gapReference").asText());
             assertEquals("none", s.path("scale").asText());
+            // the input options are typed as given (log2 and topVariable were the strings "false" and "0") and the
+            // table's orientation is recorded
+            assertTrue(s.path("log2").isBoolean() && !s.path("log2").asBoolean(), s.toString());
+            assertTrue(s.path("topVariable").isInt() && s.path("topVariable").asInt() == 0, s.toString());
+            assertTrue(s.path("samplesInColumns").isBoolean() && !s.path("samplesInColumns").asBoolean(), s.toString());
             assertEquals(50, s.path("referenceSets").asInt());
             assertEquals(19, s.path("nullSets").asInt());
             assertEquals("[\"average\",\"complete\"]", s.path("linkages").toString());
