@@ -164,6 +164,12 @@ public final class ReasonWords implements Reason.Visitor<String> {
                 + that.get(that.size() - 1);
     }
 
+    /** The first failed condition, and how many more: a clause for a list of criteria's choices. */
+    private String failsBriefly(List<Condition> failed) {
+        return failed.size() == 1 ? fails(failed) : f("it fails %d conditions, among them that %s", failed.size(),
+                condition(failed.get(0)));
+    }
+
     @Override
     public String bestFailed(Reason.BestFailed r) {
         Assessment a = r.assessment();
@@ -281,7 +287,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
             int k = e.getKey();
             String verdict = r.linkage().stream().filter(a -> a.k() == k).findFirst()
                     .map(a -> a.verdict() == Verdict.SUPPORTED ? "" : f(", %s there%s", a.verdict().id(),
-                            a.failed().isEmpty() ? "" : ": " + fails(a.failed().subList(0, 1))))
+                            a.failed().isEmpty() ? "" : ": " + failsBriefly(a.failed())))
                     .orElse("");
             parts.add(f("%s %s k = %d%s", Prose.and(e.getValue()), e.getValue().size() == 1 ? "picks" : "pick", k,
                     verdict));

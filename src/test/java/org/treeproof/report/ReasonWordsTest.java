@@ -24,7 +24,7 @@ class ReasonWordsTest {
     void criteriaThatPickTheSameKShareOneClause() {
         var linkage = List.of(at(2, Verdict.SUPPORTED, List.of()),
                 at(3, Verdict.TENTATIVE, List.of(Condition.EVERY_CLUSTER_STABLE)),
-                at(5, Verdict.UNSUPPORTED, List.of(Condition.NO_CLUSTER_DISSOLVES)));
+                at(5, Verdict.UNSUPPORTED, List.of(Condition.NO_CLUSTER_DISSOLVES, Condition.EVERY_CLUSTER_STABLE)));
         var reason = new Reason.Criteria(List.of(
                 new CriterionChoice(Criterion.EXCESS, "excess over the null", 3, "largest"),
                 new CriterionChoice(Criterion.MEAN_ARI, "stability (mean ARI)", 3, "largest"),
@@ -33,7 +33,8 @@ class ReasonWordsTest {
         String text = new ReasonWords(DecisionRule.DEFAULT).criteria(reason);
         assertEquals("Taken alone, excess over the null, stability (mean ARI) and PAC pick k = 3, tentative there: it "
                 + "fails the condition that every cluster is stable (mean Jaccard at least 0.75); Dunn picks k = 5, "
-                + "unsupported there: it fails the condition that no cluster dissolves (every mean Jaccard above 0.5).",
+                + "unsupported there: it fails 2 conditions, among them that no cluster dissolves (every mean Jaccard "
+                + "above 0.5).",
                 text);
     }
 
