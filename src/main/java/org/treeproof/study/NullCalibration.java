@@ -26,7 +26,8 @@ import org.treeproof.score.ReplicateSummary;
  *
  * <p><b>Null sets without a cut at k.</b> In the excess, a null set whose tree has no cut into k clusters of the
  * minimum size counts at that k as mean ARI 0 and silhouette 0 (no reproducible and no separated solution); our
- * convention.
+ * convention. When no null set has the cut, the excess is not defined (NaN): the null's mean and SD would both be
+ * 0, and the observed value divided by the SD floor is a number of hundreds that measures nothing.
  *
  * <p><b>Standardising.</b> SDs below {@link #SD_FLOOR} are raised to it, so that null sets that agree to the
  * third decimal do not turn a difference in the fourth into a large excess; the floor is our choice (the
@@ -102,8 +103,8 @@ final class NullCalibration {
                 double[] s = filled(nullSil[l][k]);
                 ReplicateSummary as = ReplicateSummary.of(a);
                 ReplicateSummary ss = ReplicateSummary.of(s);
-                double full = excess(obsAri[l][k], obsSil[l][k], ariMean[l][k], ariSd[l][k], silMean[l][k],
-                        silSd[l][k]);
+                double full = finite(nullAri[l][k]).length == 0 ? Double.NaN : excess(obsAri[l][k], obsSil[l][k],
+                        ariMean[l][k], ariSd[l][k], silMean[l][k], silSd[l][k]);
                 cells[l][k] = new NullStability(sets, replicatesPerSet, ariMean[l][k], ariSd[l][k], as.low(),
                         as.high(), mean(finite(nullPac[l][k])), silMean[l][k], silSd[l][k], ss.low(), ss.high(), full,
                         testExcess[l][k], monteCarlo(testExcess[l][k], nullMax));

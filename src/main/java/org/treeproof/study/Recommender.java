@@ -55,14 +55,15 @@ public final class Recommender {
         var assessments = new ArrayList<Assessment>();
         Assessment[] perLinkage = new Assessment[all.size()];
         Assessment[] strongest = new Assessment[all.size()];
+        for (LinkageEvidence le : all) {
+            for (KEvidence e : le.byK()) {
+                assessments.add(rule.assess(facts(le, e)));
+            }
+        }
         for (int l = 0; l < all.size(); l++) {
             LinkageEvidence le = all.get(l);
-            var own = new ArrayList<Assessment>();
-            for (KEvidence e : le.byK()) {
-                own.add(rule.assess(facts(le, e)));
-            }
-            assessments.addAll(own);
-            java.util.Set<Integer> passing = passingStates(le, own);
+            var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
+            java.util.Set<Integer> passing = passingStates(le, assessments);
             for (Assessment a : own) {
                 if (!passing.contains(a.k()) && (strongest[l] == null || rule.order().compare(a, strongest[l]) < 0)) {
                     strongest[l] = a;
@@ -164,7 +165,7 @@ public final class Recommender {
      */
     private static List<Integer> levels(LinkageEvidence le, List<Assessment> assessments, Assessment winner) {
         var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
-        java.util.Set<Integer> passing = passingStates(le, own);
+        java.util.Set<Integer> passing = passingStates(le, assessments);
         var out = new ArrayList<Integer>();
         for (Assessment a : own) {
             if (a.verdict() == Verdict.SUPPORTED && !passing.contains(a.k()) || a.k() == winner.k()) {
@@ -176,21 +177,37 @@ public final class Recommender {
 
     /**
      * The supported solutions of one linkage that are passing states of the agglomeration: they exist over a range
-     * of cut heights less than half as long, relative to the height, as the longest-persisting supported one, such
-     * as one family split while the other is not yet. They neither compete for the recommendation nor count as
-     * levels. Empty when no supported solution persists at all (a tree whose every such range is empty).
+     * of cut heights less than half as long, relative to the height, as the longest-persisting supported one, and
+     * either a finer solution of the same linkage is supported too (one family split while the other is not yet, on
+     * the way to both split), or no other linkage supports that number of clusters. The finest supported solution
+     * that another linkage supports at the same k is not a passing state: a small real group beside a large one
+     * exists over a short range of Ward heights (merging it costs little) without being on the way anywhere, and
+     * average and complete linkage, whose heights do not grow with cluster size, find it too; a brief split that
+     * only one linkage supports is its own agglomeration's passing state. They neither compete for the
+     * recommendation nor count as levels. Empty when no supported solution persists at all (a tree whose every such
+     * range is empty).
+     *
+     * @param all the assessments of every linkage
      */
-    private static java.util.Set<Integer> passingStates(LinkageEvidence le, List<Assessment> own) {
+    private static java.util.Set<Integer> passingStates(LinkageEvidence le, List<Assessment> all) {
         double widest = 0;
-        for (Assessment a : own) {
-            if (a.verdict() == Verdict.SUPPORTED) {
+        int finest = 0;
+        for (Assessment a : all) {
+            if (a.linkage() == le.linkage() && a.verdict() == Verdict.SUPPORTED) {
                 widest = Math.max(widest, persistence(le.at(a.k())));
+                finest = Math.max(finest, a.k());
             }
         }
         var out = new java.util.HashSet<Integer>();
         if (widest > 0) {
-            for (Assessment a : own) {
-                if (a.verdict() == Verdict.SUPPORTED && persistence(le.at(a.k())) < 0.5 * widest) {
+            for (Assessment a : all) {
+                if (a.linkage() != le.linkage() || a.verdict() != Verdict.SUPPORTED
+                        || persistence(le.at(a.k())) >= 0.5 * widest) {
+                    continue;
+                }
+                boolean corroborated = all.stream().anyMatch(o -> o.linkage() != le.linkage() && o.k() == a.k()
+                        && o.verdict() == Verdict.SUPPORTED);
+                if (a.k() < finest || !corroborated) {
                     out.add(a.k());
                 }
             }
@@ -269,7 +286,7 @@ public final class Recommender {
             return List.of();
         }
         var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
-        java.util.Set<Integer> passing = passingStates(le, own);
+        java.util.Set<Integer> passing = passingStates(le, assessments);
         var candidates = new java.util.HashSet<Integer>();
         for (Assessment a : own) {
             if (a.verdict() == verdict && !passing.contains(a.k())) {

@@ -82,6 +82,7 @@ public final class SyntheticSets {
         sets.add(fiveUnevenGroups(d + 16_001));
         sets.add(smallRealGroup(d + 6001));
         sets.add(imbalancedGroups(d + 7001));
+        sets.add(lopsidedGroups(d + 17_001));
         sets.add(nestedGroups(d + 8001));
         sets.add(countsInRows(d + 9001));
         sets.add(parallelBands(d + 10001));
@@ -419,6 +420,32 @@ public final class SyntheticSets {
             }
         }
         return rows("imbalanced-groups", shuffled(rng, x, cls), cls);
+    }
+
+    /**
+     * Groups of 400, 40 and 12 samples in 10 features, the two small ones 6 units from the large one (4.24 on each of
+     * their own two features) and 8.5 from each other. Ward merges a small group into a large one cheaply, so the cut
+     * into 3 clusters lasts only a short range of heights although the group of 12 is real.
+     */
+    static Set lopsidedGroups(long seed) {
+        var rng = new SplittableRandom(seed);
+        int[] sizes = {400, 40, 12};
+        int p = 10;
+        double shift = 6 / Math.sqrt(2);
+        double[][] x = new double[sum(sizes)][];
+        String[] cls = new String[x.length];
+        int i = 0;
+        for (int g = 0; g < sizes.length; g++) {
+            for (int r = 0; r < sizes[g]; r++, i++) {
+                x[i] = gaussians(rng, p);
+                if (g > 0) {
+                    x[i][2 * (g - 1)] += shift;
+                    x[i][2 * (g - 1) + 1] += shift;
+                }
+                cls[i] = "group-" + (g + 1);
+            }
+        }
+        return rows("lopsided-groups", shuffled(rng, x, cls), cls);
     }
 
     /**

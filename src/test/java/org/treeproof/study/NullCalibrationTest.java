@@ -83,6 +83,21 @@ class NullCalibrationTest {
     }
 
     @Test
+    void noNullSetWithTheCutLeavesTheExcessUndefined() {
+        // no null set has a cut at this k (their trees shed small branches): the null's mean and SD are 0, and the
+        // excess was the observed 0.2 + 0.1 over the SD floor of 0.001, 300 "SDs", which measured nothing
+        double nan = Double.NaN;
+        NullCalibration.Result r = NullCalibration.of(new double[][] {{0.2}}, new double[][] {{0.2}},
+                new double[][] {{0.1}}, new double[][][] {{{nan, nan, nan}}}, new double[][][] {{{nan, nan, nan}}},
+                new double[][][] {{{nan, nan, nan}}}, 5);
+        assertEquals(Double.NaN, r.cells()[0][0].excess(), 0);
+        // the test is unchanged: the observed statistic is 0 (standardised among itself alone), and no null set
+        // reaches anything, so p = 1/(1 + 3)
+        assertEquals(0, r.cells()[0][0].testExcess(), 0);
+        assertEquals(0.25, r.cells()[0][0].pValueAdjusted(), 0);
+    }
+
+    @Test
     void theMonteCarloPValueCountsTiesAsReaching() {
         assertEquals(2.0 / 3, NullCalibration.monteCarlo(1.0, new double[] {1.0, 0.5}), 1e-15);
         assertEquals(1.0 / 3, NullCalibration.monteCarlo(1.5, new double[] {1.0, 0.5}), 1e-15);
