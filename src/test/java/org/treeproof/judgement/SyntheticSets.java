@@ -403,35 +403,21 @@ public final class SyntheticSets {
 
     /** Three well separated groups of 140, 45 and 15 samples (shift 5 on own feature pairs, p = 6). */
     static Set imbalancedGroups(long seed) {
-        var rng = new SplittableRandom(seed);
-        int[] sizes = {140, 45, 15};
-        int p = 6;
-        double[][] x = new double[sum(sizes)][];
-        String[] cls = new String[x.length];
-        int i = 0;
-        for (int g = 0; g < sizes.length; g++) {
-            for (int r = 0; r < sizes[g]; r++, i++) {
-                x[i] = gaussians(rng, p);
-                if (g > 0) {
-                    x[i][2 * (g - 1)] += 5;
-                    x[i][2 * (g - 1) + 1] += 5;
-                }
-                cls[i] = "group-" + (g + 1);
-            }
-        }
-        return rows("imbalanced-groups", shuffled(rng, x, cls), cls);
+        return pairShifted("imbalanced-groups", seed, new int[] {140, 45, 15}, 6, 5);
     }
 
     /**
      * Groups of 400, 40 and 12 samples in 10 features, the two small ones 6 units from the large one (4.24 on each of
      * their own two features) and 8.5 from each other. Ward merges a small group into a large one cheaply, so the cut
-     * into 3 clusters lasts only a short range of heights although the group of 12 is real.
+     * into 3 clusters can last only a short range of heights although the group of 12 is real.
      */
     static Set lopsidedGroups(long seed) {
+        return pairShifted("lopsided-groups", seed, new int[] {400, 40, 12}, 10, 6 / Math.sqrt(2));
+    }
+
+    /** Gaussian groups of the given sizes; group g > 1 shifted by {@code shift} on features 2g - 3 and 2g - 2. */
+    private static Set pairShifted(String name, long seed, int[] sizes, int p, double shift) {
         var rng = new SplittableRandom(seed);
-        int[] sizes = {400, 40, 12};
-        int p = 10;
-        double shift = 6 / Math.sqrt(2);
         double[][] x = new double[sum(sizes)][];
         String[] cls = new String[x.length];
         int i = 0;
@@ -445,7 +431,7 @@ public final class SyntheticSets {
                 cls[i] = "group-" + (g + 1);
             }
         }
-        return rows("lopsided-groups", shuffled(rng, x, cls), cls);
+        return rows(name, shuffled(rng, x, cls), cls);
     }
 
     /**
