@@ -63,7 +63,7 @@ public final class Recommender {
         for (int l = 0; l < all.size(); l++) {
             LinkageEvidence le = all.get(l);
             var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
-            java.util.Set<Integer> passing = passingStates(le, assessments);
+            java.util.Set<Integer> passing = passingStates(le, assessments, evidence);
             for (Assessment a : own) {
                 if (!passing.contains(a.k()) && (strongest[l] == null || rule.order().compare(a, strongest[l]) < 0)) {
                     strongest[l] = a;
@@ -163,9 +163,9 @@ public final class Recommender {
      * recommended k is always a level. On trees with inversions an empty height range never qualifies. The
      * persistence condition is our choice.
      */
-    private static List<Integer> levels(LinkageEvidence le, List<Assessment> assessments, Assessment winner) {
+    private List<Integer> levels(LinkageEvidence le, List<Assessment> assessments, Assessment winner) {
         var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
-        java.util.Set<Integer> passing = passingStates(le, assessments);
+        java.util.Set<Integer> passing = passingStates(le, assessments, evidence);
         var out = new ArrayList<Integer>();
         for (Assessment a : own) {
             if (a.verdict() == Verdict.SUPPORTED && !passing.contains(a.k()) || a.k() == winner.k()) {
@@ -189,7 +189,7 @@ public final class Recommender {
      *
      * @param all the assessments of every linkage
      */
-    private static java.util.Set<Integer> passingStates(LinkageEvidence le, List<Assessment> all) {
+    private static java.util.Set<Integer> passingStates(LinkageEvidence le, List<Assessment> all, Evidence evidence) {
         double widest = 0;
         int finest = 0;
         for (Assessment a : all) {
@@ -206,7 +206,8 @@ public final class Recommender {
                     continue;
                 }
                 boolean corroborated = all.stream().anyMatch(o -> o.linkage() != le.linkage() && o.k() == a.k()
-                        && o.verdict() == Verdict.SUPPORTED);
+                        && o.verdict() == Verdict.SUPPORTED && sameClusters(le.at(a.k()), evidence.linkages().stream()
+                                .filter(x -> x.linkage() == o.linkage()).findFirst().orElseThrow().at(o.k())));
                 if (a.k() < finest || !corroborated) {
                     out.add(a.k());
                 }
@@ -214,6 +215,18 @@ public final class Recommender {
         }
         return out;
     }
+
+    /**
+     * Whether two linkages' solutions are the same clusters up to a few samples: adjusted Rand index at least
+     * {@value #SAME_CLUSTERS_ARI}, each outlier a group of its own (our choice).
+     */
+    private static boolean sameClusters(KEvidence a, KEvidence b) {
+        return AdjustedRandIndex.of(a.clustering().withSingletons(), b.clustering().withSingletons()).compute()
+                .value() >= SAME_CLUSTERS_ARI;
+    }
+
+    /** The agreement at which two linkages' solutions count as the same clusters; our choice. */
+    static final double SAME_CLUSTERS_ARI = 0.9;
 
     /** The share of the height over which this state exists: (high - low) / high, 0 if empty. */
     private static double persistence(KEvidence e) {
@@ -286,7 +299,7 @@ public final class Recommender {
             return List.of();
         }
         var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
-        java.util.Set<Integer> passing = passingStates(le, assessments);
+        java.util.Set<Integer> passing = passingStates(le, assessments, evidence);
         var candidates = new java.util.HashSet<Integer>();
         for (Assessment a : own) {
             if (a.verdict() == verdict && !passing.contains(a.k())) {
