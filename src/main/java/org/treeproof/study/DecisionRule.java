@@ -60,8 +60,8 @@ import org.treeproof.score.JaccardStability;
  *       data hold no convincing cluster structure (beside any samples the tree sets aside as outliers).</li>
  *   <li>Levels: the k of the recommended linkage that are {@code supported} and persist over a range of cut
  *       heights at least half as long, relative to the height ({@code (high - low) / high}), as the
- *       longest-persisting supported one of that linkage, or are its finest supported k and supported by another
- *       linkage at the same k; the others are passing states of the agglomeration (one family split while the other
+ *       longest-persisting supported one of that linkage, or are its finest supported k while another linkage
+ *       supports the same clusters (ARI at least 0.9); the others are passing states of the agglomeration (one family split while the other
  *       is not yet) and are neither levels nor recommended. The exception keeps a small real group beside a large
  *       one, which exists over a short range of Ward heights (its merge costs little) and which average and
  *       complete linkage find too; a brief finest split only one linkage supports stays a passing state. The recommended k is

@@ -179,8 +179,8 @@ public final class Recommender {
      * The supported solutions of one linkage that are passing states of the agglomeration: they exist over a range
      * of cut heights less than half as long, relative to the height, as the longest-persisting supported one, and
      * either a finer solution of the same linkage is supported too (one family split while the other is not yet, on
-     * the way to both split), or no other linkage supports that number of clusters. The finest supported solution
-     * that another linkage supports at the same k is not a passing state: a small real group beside a large one
+     * the way to both split), or no other linkage supports the same clusters ({@link #sameClusters}). The finest
+     * supported solution that another linkage supports as the same clusters is not a passing state: a small real group beside a large one
      * exists over a short range of Ward heights (merging it costs little) without being on the way anywhere, and
      * average and complete linkage, whose heights do not grow with cluster size, find it too; a brief split that
      * only one linkage supports is its own agglomeration's passing state. They neither compete for the
