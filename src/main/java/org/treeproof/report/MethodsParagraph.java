@@ -134,9 +134,13 @@ public final class MethodsParagraph {
         int m = model.decision().minClusterSize();
         out.add(f("Only branches of at least %d samples counted as clusters, in the full-data trees and in every "
                 + "replicate%s; samples on smaller branches were set aside as outliers, left out of k "
-                + "and of the fit measures, and counted as clusters of their own in the ARI and consensus. A replicate "
-                + "was cut into as many clusters as the full-data solution had with at least that many (scaled to the "
-                + "replicate's size) of their samples drawn.", m, model.nullCalibrated() ? " and null data set" : ""));
+                + "and of the fit measures, and counted as clusters of their own in the ARI and consensus. In the "
+                + "recommended solution, small branches that joined their cluster (or, with no cluster, the tree) more "
+                + "than %s times higher than its first split into two such branches were also set aside as outliers. "
+                + "A replicate was cut into as many clusters as the full-data solution had with at least that many "
+                + "(scaled to the replicate's size) of their samples drawn.", m,
+                model.nullCalibrated() ? " and null data set" : "",
+                Numbers.plain(org.treeproof.study.Recommender.FAR_FACTOR)));
         String branches = BranchPValueReport.methods(s, c);
         if (!branches.isEmpty()) {
             out.add(branches);
@@ -200,13 +204,16 @@ public final class MethodsParagraph {
                     + "verdict; it was read only as a description (%s). Among the solutions the better verdict was "
                     + "preferred, then the larger excess over the null, the higher smallest cluster Jaccard and the "
                     + "higher cophenetic correlation, leaving out supported solutions that existed over less than half "
-                    + "the relative range of cut heights of the linkage's longest-lasting one. The first solution so "
+                    + "the relative range of cut heights of the linkage's longest-lasting one (passing states of the "
+                    + "tree), unless such a solution was its linkage's finest supported one and another linkage "
+                    + "supported the same clusters (adjusted Rand index at least %s). The first solution so "
                     + "ordered gave the linkage; when it was supported, the finest supported cut of that linkage's "
                     + "tree was recommended, its coarser supported cuts reported as levels of nested structure. When "
                     + "no solution was better than unsupported, the data were treated as one group (k = 1).",
                     Numbers.plain(r.alpha()),
                     cite(c, Reference.ROUSSEEUW), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
-                    Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW));
+                    Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW),
+                    Numbers.plain(org.treeproof.study.Recommender.SAME_CLUSTERS_ARI));
         }
         return f("Without null data no solution could be called more than tentative, which needed every cluster "
                 + "cohesive (its members' mean silhouette width above 0) and stable (mean Jaccard at least %s; %s), a mean ARI of at least %s and an average silhouette above "

@@ -252,7 +252,9 @@ final class ModelFactory {
         // chain of the judgement suite and a random walk are supported (RELIABILITY.md, "A continuum is the blind spot")
         String continuum = " Stable clusters can also be segments of a continuum (a gradient in time, dose or "
                 + "development): replicates and null data cannot tell a cut through a continuous path from a gap "
-                + "between groups, so look for the gaps in the tree and the heat map.";
+                + "between groups, so look for gaps between the clusters in the heat map (a tree is no guide: its merge "
+                + "heights can grow with cluster size and show a gap at every top merge). Reproducible clusters can also follow a "
+                + "processing batch, site or date: check them against such covariates (--covariates).";
         return switch (rec.verdict()) {
             case SUPPORTED -> base + continuum;
             case TENTATIVE -> base + continuum + " This solution is tentative: treat its clusters as hypotheses to test.";

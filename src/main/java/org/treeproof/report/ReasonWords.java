@@ -156,17 +156,23 @@ public final class ReasonWords implements Reason.Visitor<String> {
      * that A; that B; and that C"), since a condition's own wording may hold commas.
      */
     private String fails(List<Condition> failed) {
+        return fails("it", failed);
+    }
+
+    private String fails(String subject, List<Condition> failed) {
         if (failed.size() == 1) {
-            return "it fails the condition that " + condition(failed.get(0));
+            return subject + " fails the condition that " + condition(failed.get(0));
         }
         var that = failed.stream().map(c -> "that " + condition(c)).toList();
-        return "it fails the conditions " + String.join("; ", that.subList(0, that.size() - 1)) + "; and "
+        return subject + " fails the conditions " + String.join("; ", that.subList(0, that.size() - 1)) + "; and "
                 + that.get(that.size() - 1);
     }
 
     /** The first failed condition, and how many more: a clause for a list of criteria's choices. */
     private String failsBriefly(List<Condition> failed) {
-        return failed.size() == 1 ? fails(failed) : f("it fails %d conditions, among them that %s", failed.size(),
+        // "that solution", not "it": the clause follows criteria named in the plural
+        return failed.size() == 1 ? fails("that solution", failed) : f("that solution fails %d "
+                + "conditions, among them that %s", failed.size(),
                 condition(failed.get(0)));
     }
 
@@ -192,11 +198,16 @@ public final class ReasonWords implements Reason.Visitor<String> {
                 : Integer.toString(r.afterCut()), r.afterCut() == 1 ? "was" : "were", r.afterCut() == 1 ? "it" : "them",
                 r.afterCut() == 1 ? "it" : "them");
         boolean one = r.count() == 1;
+        // a tenth of the samples or more is no longer a few stray samples (our choice): the reader is told so
+        String many = 10 * r.count() >= r.samples() ? f(" That is %s of the samples, more than scattered outliers: "
+                + "they may be a group of their own that differs in spread rather than in location, or a sparse part "
+                + "of a continuum; look at them in the heat map before reading them as noise.",
+                Numbers.percent((double) r.count() / r.samples())) : "";
         return f("%d sample%s %s set aside as %s, not %s: on branches of fewer than %d samples, or joining the tree (or "
                 + "%s cluster) far above its first split into two large branches; %s listed in clusters.csv and left "
-                + "out of k.%s", r.count(), one ? "" : "s", one ? "is" : "are", one ? "an outlier" : "outliers",
+                + "out of k.%s%s", r.count(), one ? "" : "s", one ? "is" : "are", one ? "an outlier" : "outliers",
                 one ? "a cluster" : "clusters", r.minClusterSize(), one ? "its" : "their", one ? "it is" : "they are",
-                after);
+                after, many);
     }
 
     @Override

@@ -111,8 +111,9 @@ public sealed interface Reason {
      * @param minClusterSize the fewest samples a cluster holds
      * @param afterCut       how many of them were set aside after the assessed cut, as far from their cluster
      *                       ({@code Recommender}'s far samples): the cut's figures include them
+     * @param samples        the samples studied
      */
-    record Outliers(int count, int minClusterSize, int afterCut) implements Reason {
+    record Outliers(int count, int minClusterSize, int afterCut, int samples) implements Reason {
         @Override
         public <T> T accept(Visitor<T> v) {
             return v.outliers(this);

@@ -19,7 +19,7 @@ public final class Recommender {
      * Gaussian samples the shed branches join at about 1.3 times that height, a sample far from all others many
      * times higher.
      */
-    static final double FAR_FACTOR = 1.5;
+    public static final double FAR_FACTOR = 1.5;
 
     private final Evidence evidence;
     private final DecisionRule rule;
@@ -126,7 +126,7 @@ public final class Recommender {
         Clustering solution = farSamplesAside(le, e);
         if (solution.outlierCount() > 0) {
             reasons.add(new Reason.Outliers(solution.outlierCount(), evidence.minClusterSize(),
-                    solution.outlierCount() - e.outliers()));
+                    solution.outlierCount() - e.outliers(), evidence.samples()));
         }
         if (!votes.isEmpty()) {
             reasons.add(new Reason.Votes(le.linkage(), winner.verdict(), votes, e.k(), rule.stableJaccard()));
@@ -226,7 +226,7 @@ public final class Recommender {
     }
 
     /** The agreement at which two linkages' solutions count as the same clusters; our choice. */
-    static final double SAME_CLUSTERS_ARI = 0.9;
+    public static final double SAME_CLUSTERS_ARI = 0.9;
 
     /** The share of the height over which this state exists: (high - low) / high, 0 if empty. */
     private static double persistence(KEvidence e) {
@@ -252,7 +252,7 @@ public final class Recommender {
         LinkageEvidence le = evidence.linkages().get(l);
         Clustering one = SizedCuts.of(le.tree(), evidence.minClusterSize(), 2).oneClusterWithOutliers(FAR_FACTOR);
         if (one.outlierCount() > 0) {
-            reasons.add(new Reason.Outliers(one.outlierCount(), evidence.minClusterSize(), 0));
+            reasons.add(new Reason.Outliers(one.outlierCount(), evidence.minClusterSize(), 0, evidence.samples()));
         }
         int n = le.tree().leaves();
         double root = le.tree().height(n - 2);

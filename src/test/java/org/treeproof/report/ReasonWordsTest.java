@@ -21,6 +21,18 @@ class ReasonWordsTest {
     }
 
     @Test
+    void aLargeShareOfOutliersIsSaidToBeMoreThanStraySamples() {
+        var words = new ReasonWords(DecisionRule.DEFAULT);
+        // 72 of 200 (36%): a tester's broad group was set aside sample by sample and read as noise
+        String many = words.outliers(new Reason.Outliers(72, 5, 0, 200));
+        org.junit.jupiter.api.Assertions.assertTrue(many.contains("That is 36% of the samples, more than scattered "
+                + "outliers"), many);
+        // 9 of 190 (under a tenth): scattered far samples, no such sentence
+        String few = words.outliers(new Reason.Outliers(9, 5, 0, 190));
+        org.junit.jupiter.api.Assertions.assertFalse(few.contains("more than scattered"), few);
+    }
+
+    @Test
     void criteriaThatPickTheSameKShareOneClause() {
         var linkage = List.of(at(2, Verdict.SUPPORTED, List.of()),
                 at(3, Verdict.TENTATIVE, List.of(Condition.EVERY_CLUSTER_STABLE)),
@@ -31,9 +43,9 @@ class ReasonWordsTest {
                 new CriterionChoice(Criterion.DUNN, "Dunn", 5, "largest"),
                 new CriterionChoice(Criterion.PAC, "PAC", 3, "smallest")), 2, linkage);
         String text = new ReasonWords(DecisionRule.DEFAULT).criteria(reason);
-        assertEquals("Taken alone, excess over the null, stability (mean ARI) and PAC pick k = 3, tentative there: it "
-                + "fails the condition that every cluster is stable (mean Jaccard at least 0.75); Dunn picks k = 5, "
-                + "unsupported there: it fails 2 conditions, among them that no cluster dissolves (every mean Jaccard "
+        assertEquals("Taken alone, excess over the null, stability (mean ARI) and PAC pick k = 3, tentative there: that "
+                + "solution fails the condition that every cluster is stable (mean Jaccard at least 0.75); Dunn picks k = 5, "
+                + "unsupported there: that solution fails 2 conditions, among them that no cluster dissolves (every mean Jaccard "
                 + "above 0.5).",
                 text);
     }
