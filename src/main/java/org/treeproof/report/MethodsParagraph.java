@@ -205,15 +205,13 @@ public final class MethodsParagraph {
                     + "preferred, then the larger excess over the null, the higher smallest cluster Jaccard and the "
                     + "higher cophenetic correlation, leaving out supported solutions that existed over less than half "
                     + "the relative range of cut heights of the linkage's longest-lasting one (passing states of the "
-                    + "tree), unless such a solution was its linkage's finest supported one and another linkage "
-                    + "supported the same clusters (adjusted Rand index at least %s). The first solution so "
+                    + "tree). The first solution so "
                     + "ordered gave the linkage; when it was supported, the finest supported cut of that linkage's "
                     + "tree was recommended, its coarser supported cuts reported as levels of nested structure. When "
                     + "no solution was better than unsupported, the data were treated as one group (k = 1).",
                     Numbers.plain(r.alpha()),
                     cite(c, Reference.ROUSSEEUW), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
-                    Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW),
-                    Numbers.plain(org.treeproof.study.Recommender.SAME_CLUSTERS_ARI));
+                    Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW));
         }
         return f("Without null data no solution could be called more than tentative, which needed every cluster "
                 + "cohesive (its members' mean silhouette width above 0) and stable (mean Jaccard at least %s; %s), a mean ARI of at least %s and an average silhouette above "

@@ -60,11 +60,8 @@ import org.treeproof.score.JaccardStability;
  *       data hold no convincing cluster structure (beside any samples the tree sets aside as outliers).</li>
  *   <li>Levels: the k of the recommended linkage that are {@code supported} and persist over a range of cut
  *       heights at least half as long, relative to the height ({@code (high - low) / high}), as the
- *       longest-persisting supported one of that linkage, or are its finest supported k while another linkage
- *       supports the same clusters (ARI at least 0.9); the others are passing states of the agglomeration (one family split while the other
- *       is not yet) and are neither levels nor recommended. The exception keeps a small real group beside a large
- *       one, which exists over a short range of Ward heights (its merge costs little) and which average and
- *       complete linkage find too; a brief finest split only one linkage supports stays a passing state. The recommended k is
+ *       longest-persisting supported one of that linkage; the others are passing states of the agglomeration
+ *       (one family split while the other is not yet) and are neither levels nor recommended. The recommended k is
  *       always a level, and the finest one when the verdict is supported. Being cuts of one tree they are nested,
  *       so two or more describe nested structure. The persistence condition is our choice.</li>
  * </ol>

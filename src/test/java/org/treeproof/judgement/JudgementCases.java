@@ -94,8 +94,8 @@ public final class JudgementCases {
                     false)), "Groups of 140, 45 and 15, each shifted 5 units on its own pair of features: k = 3.")),
             Map.entry("lopsided-groups", new Expected(List.of(new Structure(Set.of(3), SUPPORTED, 10, 0.8,
                     false)), "Groups of 400, 40 and 12, the small ones 6 noise SDs from the large one and 8.5 from"
-                    + " each other: k = 3, the group of 12 included. Ward's cut into 3 lasts only briefly (merging 12"
-                    + " samples into 400 costs little), which does not make the group less real.")),
+                    + " each other: k = 3, the group of 12 included; a group far smaller than its neighbour is still a"
+                    + " group.")),
             Map.entry("nested-2x2-groups", new Expected(List.of(new Structure(Set.of(2, 4),
                     SUPPORTED_OR_TENTATIVE, 30, Double.NaN, false)), "Two families 8 units apart, each of two"
                     + " subgroups 3.5 units apart: both levels are real; k = 2 (families) or k = 4 (subgroups), with"

@@ -408,8 +408,7 @@ public final class SyntheticSets {
 
     /**
      * Groups of 400, 40 and 12 samples in 10 features, the two small ones 6 units from the large one (4.24 on each of
-     * their own two features) and 8.5 from each other. Ward merges a small group into a large one cheaply, so the cut
-     * into 3 clusters can last only a short range of heights although the group of 12 is real.
+     * their own two features) and 8.5 from each other.
      */
     static Set lopsidedGroups(long seed) {
         return pairShifted("lopsided-groups", seed, new int[] {400, 40, 12}, 10, 6 / Math.sqrt(2));
