@@ -55,15 +55,14 @@ public final class Recommender {
         var assessments = new ArrayList<Assessment>();
         Assessment[] perLinkage = new Assessment[all.size()];
         Assessment[] strongest = new Assessment[all.size()];
-        for (LinkageEvidence le : all) {
-            for (KEvidence e : le.byK()) {
-                assessments.add(rule.assess(facts(le, e)));
-            }
-        }
         for (int l = 0; l < all.size(); l++) {
             LinkageEvidence le = all.get(l);
-            var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
-            java.util.Set<Integer> passing = passingStates(le, assessments);
+            var own = new ArrayList<Assessment>();
+            for (KEvidence e : le.byK()) {
+                own.add(rule.assess(facts(le, e)));
+            }
+            assessments.addAll(own);
+            java.util.Set<Integer> passing = passingStates(le, own);
             for (Assessment a : own) {
                 if (!passing.contains(a.k()) && (strongest[l] == null || rule.order().compare(a, strongest[l]) < 0)) {
                     strongest[l] = a;
@@ -163,9 +162,9 @@ public final class Recommender {
      * recommended k is always a level. On trees with inversions an empty height range never qualifies. The
      * persistence condition is our choice.
      */
-    private List<Integer> levels(LinkageEvidence le, List<Assessment> assessments, Assessment winner) {
+    private static List<Integer> levels(LinkageEvidence le, List<Assessment> assessments, Assessment winner) {
         var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
-        java.util.Set<Integer> passing = passingStates(le, assessments);
+        java.util.Set<Integer> passing = passingStates(le, own);
         var out = new ArrayList<Integer>();
         for (Assessment a : own) {
             if (a.verdict() == Verdict.SUPPORTED && !passing.contains(a.k()) || a.k() == winner.k()) {
@@ -185,18 +184,17 @@ public final class Recommender {
      * supports the same clusters. It kept a real group of 12 beside 400 that Ward's tree holds only briefly, but
      * with few replicates it also kept a strain of 40 cut in two by both Ward and average linkage.
      */
-    private static java.util.Set<Integer> passingStates(LinkageEvidence le, List<Assessment> all) {
+    private static java.util.Set<Integer> passingStates(LinkageEvidence le, List<Assessment> own) {
         double widest = 0;
-        for (Assessment a : all) {
-            if (a.linkage() == le.linkage() && a.verdict() == Verdict.SUPPORTED) {
+        for (Assessment a : own) {
+            if (a.verdict() == Verdict.SUPPORTED) {
                 widest = Math.max(widest, persistence(le.at(a.k())));
             }
         }
         var out = new java.util.HashSet<Integer>();
         if (widest > 0) {
-            for (Assessment a : all) {
-                if (a.linkage() == le.linkage() && a.verdict() == Verdict.SUPPORTED
-                        && persistence(le.at(a.k())) < 0.5 * widest) {
+            for (Assessment a : own) {
+                if (a.verdict() == Verdict.SUPPORTED && persistence(le.at(a.k())) < 0.5 * widest) {
                     out.add(a.k());
                 }
             }
@@ -275,7 +273,7 @@ public final class Recommender {
             return List.of();
         }
         var own = assessments.stream().filter(a -> a.linkage() == le.linkage()).toList();
-        java.util.Set<Integer> passing = passingStates(le, assessments);
+        java.util.Set<Integer> passing = passingStates(le, own);
         var candidates = new java.util.HashSet<Integer>();
         for (Assessment a : own) {
             if (a.verdict() == verdict && !passing.contains(a.k())) {
