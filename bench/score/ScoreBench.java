@@ -12,6 +12,7 @@ import org.treeproof.score.DaviesBouldin;
 import org.treeproof.score.DunnIndex;
 import org.treeproof.score.JaccardStability;
 import org.treeproof.score.SampleStability;
+import org.treeproof.score.Separation;
 import org.treeproof.score.Silhouette;
 import org.treeproof.score.WithinClusterSumOfSquares;
 
@@ -77,8 +78,13 @@ public class ScoreBench {
                         + WithinClusterSumOfSquares.of(data, c).compute().total();
             }
             long t3 = cpu();
-            System.out.printf("round %d, per cut: silhouette %.2f ms, Dunn %.2f ms, CH+DB+W_k %.2f ms (%s)%n", round,
-                    (t1 - t0) / 9e6, (t2 - t1) / 9e6, (t3 - t2) / 9e6, sink > 0 ? "ok" : "?");
+            for (Partition c : cuts) {
+                sink += Separation.of(data, org.treeproof.partition.Clustering.of(c)).clusters().size();
+            }
+            long t4 = cpu();
+            System.out.printf("round %d, per cut: silhouette %.2f ms, Dunn %.2f ms, CH+DB+W_k %.2f ms, separation "
+                    + "(dip tests) %.2f ms (%s)%n", round, (t1 - t0) / 9e6, (t2 - t1) / 9e6, (t3 - t2) / 9e6,
+                    (t4 - t3) / 9e6, sink > 0 ? "ok" : "?");
         }
 
         int m = (int) Math.round(0.8 * n);

@@ -208,7 +208,7 @@ public final class DipTest {
     }
 
     /** The p-value of {@code dip} for a sample of size {@code n} from the table. */
-    static Result pValue(double dip, int n) {
+    public static Result pValue(double dip, int n) {
         return TABLE.pValue(dip, n);
     }
 

@@ -228,6 +228,30 @@ public enum Metric {
     }
 
     /**
+     * The rows as this metric compares them, in coordinates whose Euclidean geometry is the metric's where it has
+     * one: for {@link #COSINE}, {@link #PEARSON} and {@link #SPEARMAN} the rows the kernel multiplies (scaled to unit
+     * length; centred first; on average ranks first), between which the squared Euclidean distance is twice the
+     * metric's distance; for every other metric the data as they are (for Manhattan, Chebyshev, Jaccard and Hamming
+     * an approximation of their geometry).
+     *
+     * @throws InputException as for {@link #compute(DataMatrix, int)}
+     */
+    public DataMatrix embedding(DataMatrix data) {
+        Objects.requireNonNull(data, "data");
+        if (preparation == RowPreparation.AS_IS || preparation == RowPreparation.BINARY) {
+            return data;
+        }
+        RowSource rows = preparation.prepare(new RowSource.Columns(data, null), data, id).rows();
+        int m = rows.width();
+        double[] values = new double[rows.rows() * m];
+        double[] scratch = new double[rows.scratchLength()];
+        for (int r = 0; r < rows.rows(); r++) {
+            rows.load(r, values, r * m, scratch);
+        }
+        return new DataMatrix(data.sampleIds(), data.featureNames(), values);
+    }
+
+    /**
      * Distances between all samples over all features, as a matrix the caller owns and may give up to a linkage
      * that works in place: the same values as {@link #compute(DataMatrix, int)}, without a second copy.
      *

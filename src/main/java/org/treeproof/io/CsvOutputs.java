@@ -39,7 +39,7 @@ public final class CsvOutputs {
         }
         c.addAll(List.of("gap", "gapSE", "ariMean", "ariSD", "ariLow", "ariHigh", "pac", "nullAriMean", "nullAriSD", "nullPacMean",
             "nullSilhouetteMean", "nullSilhouetteSD", "excess", "pValueAdjusted", "smallestJaccard", "doubtfulClusters",
-            "dissolvedClusters", "outliers", "verdict"));
+            "dissolvedClusters", "separationP", "outliers", "verdict"));
         return List.copyOf(c);
     }
 
@@ -124,6 +124,7 @@ public final class CsvOutputs {
                 row.add(num(e.worstJaccard()));
                 row.add(String.valueOf(doubtful));
                 row.add(String.valueOf(dissolved));
+                row.add(num(e.separationP()));
                 row.add(String.valueOf(e.outliers()));
                 row.add(assessment.verdict().id());
                 rows.add(row);

@@ -300,6 +300,7 @@ public final class SummaryJson {
         }
         number(g, "gap", e.gap());
         number(g, "gapSE", e.gapSE());
+        separation(g, e.separation());
         g.writeObjectFieldStart("stability");
         ReplicateSummary a = e.stability().ari();
         g.writeNumberField("replicates", a.count());
@@ -518,5 +519,28 @@ public final class SummaryJson {
         } else {
             g.writeNull();
         }
+    }
+
+    /** Each cluster's dip test against its nearest cluster ({@code null} when not assessed). */
+    private static void separation(JsonGenerator g, org.treeproof.score.Separation.Result s) throws IOException {
+        if (s == null || !s.assessed()) {
+            g.writeNullField("separation");
+            return;
+        }
+        g.writeObjectFieldStart("separation");
+        number(g, "pValue", s.pValue());
+        g.writeArrayFieldStart("clusters");
+        for (var c : s.clusters()) {
+            g.writeStartObject();
+            g.writeNumberField("cluster", c.cluster() + 1);
+            g.writeNumberField("nearest", c.nearest() + 1);
+            g.writeNumberField("samples", c.samples());
+            number(g, "dip", c.dip());
+            number(g, "pValue", c.pValue());
+            g.writeBooleanField("pBelow", c.pBelow());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeEndObject();
     }
 }

@@ -24,6 +24,7 @@ import org.treeproof.study.Verdict;
  * @param nullSilhouette   mean over null data sets of the average silhouette of their own cut at this k
  * @param excess           null-standardised stability plus separation (the decision rule's ordering)
  * @param pValueAdjusted   max-statistic Monte Carlo p-value of the excess, adjusted for the choice of linkage and k
+ * @param separationP      the largest dip-test p-value of each cluster against its nearest (NaN when not assessed)
  * @param outliers         samples set aside as outliers in this solution
  * @param worstJaccard     the smallest mean Jaccard over the clusters
  * @param silhouette       average silhouette width
@@ -37,7 +38,7 @@ import org.treeproof.study.Verdict;
  */
 public record EvidenceRow(int k, CutHeight cutHeight, boolean tieDependent, double ariMean, double ariLow,
         double ariHigh, int replicates, double nullAriMean, double nullAriLow, double nullAriHigh, double pac,
-        double nullPac, double nullSilhouette, double excess, double pValueAdjusted, int outliers, double worstJaccard,
+        double nullPac, double nullSilhouette, double excess, double pValueAdjusted, double separationP, int outliers, double worstJaccard,
         double silhouette, double calinskiHarabasz, double daviesBouldin, double dunn, double gap, double gapSE,
         Verdict verdict, boolean recommended) {
 

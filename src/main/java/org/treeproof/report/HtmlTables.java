@@ -45,10 +45,12 @@ final class HtmlTables {
                 + "apart in others (consensus in (%s, %s]); the smallest Jaccard is the least stable cluster's mean "
                 + "best match. Null columns are the same measures on data without clusters. The excess over the null "
                 + "is the mean ARI and the silhouette, each standardised by the null data sets at the same linkage "
-                + "and k, added; its p-value is adjusted for the choice among every linkage and k. Cut heights are "
+                + "and k, added; its p-value is adjusted for the choice among every linkage and k. The separation p is "
+                + "the largest over the clusters of the dip test of each against its nearest (a dip in density "
+                + "between them; at most %s passes). Cut heights are "
                 + "in the units of the dissimilarity.", model.decision().minClusterSize(),
                 model.settings().replicates(), Numbers.plain(model.settings().pacLow()),
-                Numbers.plain(model.settings().pacHigh())));
+                Numbers.plain(model.settings().pacHigh()), Numbers.plain(model.rule().alpha())));
         boolean tie = false;
         for (EvidenceTable t : model.evidence()) {
             h.element("h3", f("%s linkage", ModelFactory.capital(Names.linkage(t.linkage()))));
@@ -57,7 +59,7 @@ final class HtmlTables {
                             : "; the tree has inversions, so each row is the state after the first n − k merges"),
                     "#k", "Verdict", "#Outliers", "#Cut height", "#Range giving k", "#Mean ARI [middle 95% of replicates]",
                     "#Null ARI [middle 95% of sets]", "#PAC", "#Null PAC", "#Smallest Jaccard", "#Silhouette",
-                    "#Null silhouette", "#Excess over null", "#Adjusted p", "#Calinski-Harabasz",
+                    "#Null silhouette", "#Excess over null", "#Adjusted p", "#Separation p", "#Calinski-Harabasz",
                     "#Davies-Bouldin", "#Dunn", "#Gap ± s_k");
             for (EvidenceRow r : t.rows()) {
                 h.open("tr", "class", r.recommended() ? "recommended" : null);
@@ -83,7 +85,7 @@ final class HtmlTables {
                         .num(Numbers.fixed(r.pac(), 3)).num(Numbers.fixed(r.nullPac(), 3))
                         .num(Numbers.fixed(r.worstJaccard(), 2)).num(Numbers.fixed(r.silhouette(), 3))
                         .num(Numbers.fixed(r.nullSilhouette(), 3)).num(Numbers.fixed(r.excess(), 1))
-                        .num(Numbers.p(r.pValueAdjusted()))
+                        .num(Numbers.p(r.pValueAdjusted())).num(Numbers.smallP(r.separationP()))
                         .num(Numbers.scaled(r.calinskiHarabasz())).num(Numbers.fixed(r.daviesBouldin(), 2))
                         .num(Numbers.fixed(r.dunn(), 3)).num(Double.isFinite(r.gap()) ? Numbers.fixed(r.gap(), 3)
                                 + " ±" + NBSP + Numbers.fixed(r.gapSE(), 3) : Numbers.MISSING);

@@ -197,10 +197,10 @@ public final class MethodsParagraph {
     private String rule(Set<Reference> c, DecisionRule r) {
         if (model.nullCalibrated()) {
             return f("A solution was called supported when it beat the null data (adjusted p ≤ %s), every cluster "
-                    + "was cohesive (its members' mean silhouette width above 0; %s) and every cluster was stable "
+                    + "was cohesive (its members' mean silhouette width above 0; %s)%s and every cluster was stable "
                     + "(mean Jaccard at least %s; %s); tentative when it beat the null data, every cluster was "
-                    + "cohesive and no cluster dissolved (every mean Jaccard above %s) but one cluster, and only "
-                    + "one, was doubtful; and unsupported otherwise. No threshold on the average silhouette entered the "
+                    + "cohesive%s and no cluster dissolved (every mean Jaccard above %s) but one cluster, and only "
+                    + "one, was doubtful; and unsupported otherwise.%s No threshold on the average silhouette entered the "
                     + "verdict; it was read only as a description (%s). Among the solutions the better verdict was "
                     + "preferred, then the larger excess over the null, the higher smallest cluster Jaccard and the "
                     + "higher cophenetic correlation, leaving out supported solutions that existed over less than half "
@@ -210,15 +210,39 @@ public final class MethodsParagraph {
                     + "tree was recommended, its coarser supported cuts reported as levels of nested structure. When "
                     + "no solution was better than unsupported, the data were treated as one group (k = 1).",
                     Numbers.plain(r.alpha()),
-                    cite(c, Reference.ROUSSEEUW), Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG),
-                    Numbers.plain(r.dissolvedJaccard()), cite(c, Reference.KAUFMAN_ROUSSEEUW));
+                    cite(c, Reference.ROUSSEEUW), model.hasData() ? ", every cluster was set apart from its nearest "
+                            + "cluster by a dip in density (described below)" : "", Numbers.plain(r.stableJaccard()),
+                    cite(c, Reference.HENNIG), model.hasData() ? " and separated" : "",
+                    Numbers.plain(r.dissolvedJaccard()), separation(c, r), cite(c, Reference.KAUFMAN_ROUSSEEUW));
         }
         return f("Without null data no solution could be called more than tentative, which needed every cluster "
-                + "cohesive (its members' mean silhouette width above 0) and stable (mean Jaccard at least %s; %s), a mean ARI of at least %s and an average silhouette above "
+                + "cohesive (its members' mean silhouette width above 0)%s and stable (mean Jaccard at least %s; %s), a mean ARI of at least %s and an average silhouette above "
                 + "%s, the reading of a reasonable structure of %s; among such solutions the higher mean ARI was "
-                + "preferred, then the higher smallest cluster Jaccard and the higher cophenetic correlation.",
+                + "preferred, then the higher smallest cluster Jaccard and the higher cophenetic correlation.%s",
+                model.hasData() ? ", set apart from its nearest cluster by a dip in density (described below)," : "",
                 Numbers.plain(r.stableJaccard()), cite(c, Reference.HENNIG), Numbers.plain(r.stableJaccard()),
-                Numbers.plain(r.reasonableSilhouette()), narrative(c, Reference.KAUFMAN_ROUSSEEUW));
+                Numbers.plain(r.reasonableSilhouette()), narrative(c, Reference.KAUFMAN_ROUSSEEUW), separation(c, r));
+    }
+
+    /**
+     * How the separation condition was tested ({@link org.treeproof.score.Separation}); for a distance table, that
+     * it could not be.
+     */
+    private String separation(Set<Reference> c, DecisionRule r) {
+        if (!model.hasData()) {
+            return " Whether the clusters were separated by a dip in density could not be tested: it needs the "
+                    + "feature table, and only distances were given.";
+        }
+        return f(" Separation was tested for each cluster against its nearest (closest centroids): the smaller of "
+                + "the two and the quarter of the larger nearest the smaller's centroid (at least as many samples as "
+                + "the smaller had) were placed on the line joining the two centroids (each sample's own centroid "
+                + "computed without it), the two sides weighed equally, and the dip test of unimodality (%s, its "
+                + "p-value read at the effective size of two equally weighed samples) had to reject one mode at "
+                + "p ≤ %s. This condition is meant to tell groups from "
+                + "pieces cut from a continuum (a chain, a gradient), which are stable and beat unimodal null data but "
+                + "have no dip between them. As the clusters come from the same data, these p-values screen for a gap "
+                + "rather than give exact error rates.",
+                cite(c, Reference.HARTIGAN), Numbers.plain(r.alpha()));
     }
 
     /**

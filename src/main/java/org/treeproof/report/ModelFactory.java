@@ -102,7 +102,7 @@ final class ModelFactory {
                     e.stability().ari().low(), e.stability().ari().high(), e.stability().ari().count(),
                     n == null ? nan : n.ariMean(), n == null ? nan : n.ariLow(), n == null ? nan : n.ariHigh(),
                     e.stability().pac(), n == null ? nan : n.pacMean(), n == null ? nan : n.silhouetteMean(),
-                    n == null ? nan : n.excess(), n == null ? nan : n.pValueAdjusted(), e.outliers(),
+                    n == null ? nan : n.excess(), n == null ? nan : n.pValueAdjusted(), e.separationP(), e.outliers(),
                     e.worstJaccard(), e.silhouette(), e.calinskiHarabasz(),
                     e.daviesBouldin(), e.dunn(), e.gap(), e.gapSE(), v, recommended));
         }
@@ -248,11 +248,13 @@ final class ModelFactory {
         String base = "Stability and fit are statistical evidence about this data set, not validation of subtypes. "
                 + "Clusters that steer clinical or other consequential decisions need review by people who know the "
                 + "domain and confirmation in independent data.";
-        // resampling and null data cannot tell a cut through a continuous path from a gap between groups: the curved
-        // chain of the judgement suite and a random walk are supported (RELIABILITY.md, "A continuum is the blind spot")
+        // resampling and null data cannot tell a cut through a continuous path from a gap between groups; the
+        // separation test looks along straight lines, which a bending or branching path can defeat (RELIABILITY.md,
+        // "Continua")
         String continuum = " Stable clusters can also be segments of a continuum (a gradient in time, dose or "
-                + "development): replicates and null data cannot tell a cut through a continuous path from a gap "
-                + "between groups, so look for gaps between the clusters in the heat map (a tree is no guide: its merge "
+                + "development): the separation test asks for a dip in density between each cluster and its nearest, "
+                + "but it looks along a straight line, which a path that bends or branches can defeat, so look for "
+                + "gaps between the clusters in the heat map (a tree is no guide: its merge "
                 + "heights can grow with cluster size and show a gap at every top merge). Reproducible clusters can also follow a "
                 + "processing batch, site or date: check them against such covariates (--covariates).";
         return switch (rec.verdict()) {

@@ -48,6 +48,11 @@ final class Numbers {
         return fixed(v, 3);
     }
 
+    /** A p-value with three decimals, or "< 0.001" below that; the missing mark when not a number. */
+    static String smallP(double v) {
+        return Double.isNaN(v) ? MISSING : v < 0.001 ? "< 0.001" : fixed(v, 3);
+    }
+
     /** A share as a whole percentage ("87%"). */
     static String percent(double share) {
         return Double.isFinite(share) ? fixed(100 * share, 0) + "%" : MISSING;

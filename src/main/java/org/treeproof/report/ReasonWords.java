@@ -57,6 +57,9 @@ public final class ReasonWords implements Reason.Visitor<String> {
             case NO_CLUSTER_DISSOLVES -> f("no cluster dissolves (every mean Jaccard above %s)",
                     Numbers.plain(rule.dissolvedJaccard()));
             case EVERY_CLUSTER_COHESIVE -> "every cluster is cohesive (its members' mean silhouette width above 0)";
+            case EVERY_CLUSTER_SEPARATED -> f("every cluster is set apart from its nearest cluster by a dip in density "
+                    + "(Hartigan's dip test on the line joining them, p at most %s)",
+                    Numbers.plain(rule.alpha()));
             case AT_MOST_ONE_DOUBTFUL -> f("at most one cluster is only doubtful (mean Jaccard between %s and %s) while "
                     + "the others are stable", Numbers.plain(rule.dissolvedJaccard()), Numbers.plain(rule.stableJaccard()));
             case EVERY_CLUSTER_STABLE -> f("every cluster is stable (mean Jaccard at least %s)",
@@ -89,7 +92,7 @@ public final class ReasonWords implements Reason.Visitor<String> {
         }
         if (!r.clustersFound()) {
             return f("The data depart from the null data without clusters: %s (%s). But no solution with clusters "
-                    + "meets the rule's conditions, so this departure is not evidence of stable, cohesive clusters; "
+                    + "meets the rule's conditions, so this departure is not evidence of stable, cohesive, separated clusters; "
                     + "skewed or bounded features, a continuum, scattered far samples or, under z-scores, groups on "
                     + "a few of many features diluted by the scaling (see --scale) can cause it.", largest, ps);
         }

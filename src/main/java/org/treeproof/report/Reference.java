@@ -86,6 +86,9 @@ public record Reference(String cite, String entry, String doi) {
     static final Reference WARD = new Reference("Ward, 1963",
             "Ward, J. H. (1963). Hierarchical grouping to optimize an objective function. Journal of the American "
                     + "Statistical Association, 58, 236–244.", "10.1080/01621459.1963.10500845");
+    static final Reference HARTIGAN = new Reference("Hartigan & Hartigan, 1985",
+            "Hartigan, J. A. & Hartigan, P. M. (1985). The dip test of unimodality. The Annals of Statistics, 13, "
+                    + "70–84.", "10.1214/aos/1176346577");
     static final Reference MURTAGH_LEGENDRE = new Reference("Murtagh & Legendre, 2014",
             "Murtagh, F. & Legendre, P. (2014). Ward's hierarchical agglomerative clustering method: which algorithms "
                     + "implement Ward's criterion? Journal of Classification, 31, 274–295.", "10.1007/s00357-014-9161-z");

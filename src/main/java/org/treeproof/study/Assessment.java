@@ -43,13 +43,20 @@ public record Assessment(Facts facts, Verdict verdict, List<Condition> met, List
      * @param excess       excess over the null from all replicates (NaN without null data)
      * @param pAdjusted    max-statistic adjusted Monte Carlo p-value (NaN without null data)
      * @param cophenetic   the linkage tree's cophenetic correlation
+     * @param separationP  the largest p-value of the dip tests of each cluster against its nearest
+     *                     ({@link org.treeproof.score.Separation}); NaN when not assessed (only distances given)
      */
     public record Facts(Linkage linkage, int k, int outliers, double meanAri, double worstJaccard,
             boolean noneDissolved, int doubtfulClusters, double silhouette, double leastClusterSilhouette,
-            boolean calibrated, double excess, double pAdjusted, double cophenetic) {
+            boolean calibrated, double excess, double pAdjusted, double cophenetic, double separationP) {
         /** Every cluster's Jaccard status is stable (Hennig's band, decided by the score): none other. */
         public boolean allStable() {
             return noneDissolved && doubtfulClusters == 0;
+        }
+
+        /** Whether the separation of the clusters was assessed (it needs the feature table). */
+        public boolean separationAssessed() {
+            return !Double.isNaN(separationP);
         }
     }
 }

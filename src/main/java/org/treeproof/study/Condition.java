@@ -19,6 +19,13 @@ public enum Condition {
      */
     EVERY_CLUSTER_COHESIVE("every-cluster-cohesive"),
     /**
+     * Every cluster is separated from its nearest cluster by a dip in density: Hartigan's dip test, on the line
+     * joining the two, rejects one mode at {@code alpha} ({@link org.treeproof.score.Separation}). Pieces cut from a
+     * continuum (a chain, a gradient, a branching path) are stable and beat a unimodal null, but have no gap
+     * between them. Applied only where the feature table is known.
+     */
+    EVERY_CLUSTER_SEPARATED("every-cluster-separated"),
+    /**
      * At most one cluster is only doubtful (between Hennig's dissolved and stable bands) and every other is stable:
      * a solution most of whose clusters the replicates recover only in part is not a tentative finding but an
      * unstable one.

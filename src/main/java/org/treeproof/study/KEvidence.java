@@ -2,6 +2,7 @@ package org.treeproof.study;
 
 import java.util.List;
 import org.treeproof.partition.Clustering;
+import org.treeproof.score.Separation;
 
 /**
  * The evidence for cutting one linkage's tree into k clusters. Per-sample arrays are in input order.
@@ -25,11 +26,13 @@ import org.treeproof.partition.Clustering;
  * @param sampleStability   per-sample share of replicates in which it stays with its cluster-mates
  * @param sampleConsensus   per-sample mean consensus with the other members of its cluster
  * @param replicateAri      per replicate, in replicate order, its adjusted Rand index with this solution
+ * @param separation        whether each cluster is set apart from its nearest by a dip in density
+ *                          ({@link Separation}); {@code null} without a feature table
  */
 public record KEvidence(int k, CutHeight cutHeight, boolean tieDependent, Clustering clustering, int branches,
         double silhouette, double calinskiHarabasz, double daviesBouldin, double dunn, double gap, double gapSE,
         Stability stability, List<ClusterEvidence> clusters, double[] sampleSilhouette, double[] sampleStability,
-        double[] sampleConsensus, double[] replicateAri) {
+        double[] sampleConsensus, double[] replicateAri, Separation.Result separation) {
 
     public KEvidence {
         clusters = List.copyOf(clusters);
@@ -42,6 +45,11 @@ public record KEvidence(int k, CutHeight cutHeight, boolean tieDependent, Cluste
     @Override
     public double[] replicateAri() {
         return replicateAri.clone();
+    }
+
+    /** The solution's separation p-value (the largest over its clusters); NaN when not assessed. */
+    public double separationP() {
+        return separation == null ? Double.NaN : separation.pValue();
     }
 
     /** The number of samples set aside as outliers. */

@@ -41,7 +41,7 @@ public final class Recommender {
         int doubtful = (int) e.clusters().stream().filter(c -> c.status() == JaccardStability.Status.DOUBTFUL).count();
         return new Assessment.Facts(le.linkage(), e.k(), e.outliers(), e.stability().ari().mean(), e.worstJaccard(),
                 noneDissolved, doubtful, e.silhouette(), leastClusterSilhouette(e), ns != null, ns == null ? Double.NaN : ns.excess(),
-                ns == null ? Double.NaN : ns.pValueAdjusted(), le.copheneticCorrelation());
+                ns == null ? Double.NaN : ns.pValueAdjusted(), le.copheneticCorrelation(), e.separationP());
     }
 
     /** The smallest mean silhouette width of one cluster's members; NaN when no width is defined. */

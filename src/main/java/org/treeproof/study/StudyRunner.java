@@ -20,6 +20,7 @@ import org.treeproof.score.GapResult;
 import org.treeproof.score.JaccardStability;
 import org.treeproof.score.ReplicateSummary;
 import org.treeproof.score.SampleStability;
+import org.treeproof.score.Separation;
 import org.treeproof.score.Silhouette;
 import org.treeproof.partition.Clustering;
 import org.treeproof.tree.SizedCut;
@@ -262,6 +263,7 @@ public final class StudyRunner {
             BranchPValues pvalues) {
         ConsensusMatrix consensus = tally.consensus(l);
         var byK = new ArrayList<KEvidence>();
+        DataMatrix geometry = data == null ? null : settings.metric().embedding(data);
         for (int k = 2; k <= settings.maxK(); k++) {
             SizedCut cut = ref.cut(k);
             if (cut == null) {
@@ -308,7 +310,8 @@ public final class StudyRunner {
             byK.add(new KEvidence(k, new CutHeight(cut.low(), cut.high(), cut.chosen()), cut.tieDependent(), c,
                     cut.branches(), sil.mean(), ch, db, dunn, gap == null ? Double.NaN : gap.gapAt(k),
                     gap == null ? Double.NaN : gap.seAt(k), new Stability(ari, pac, ns), clusters, sil.values(),
-                    sampleStability, sampleConsensus, replicateAri));
+                    sampleStability, sampleConsensus, replicateAri,
+                    geometry == null ? null : Separation.of(geometry, c)));
         }
         double cophenetic = ref.tree().copheneticCorrelation(d);
         return new LinkageEvidence(ref.linkage(), ref.tree(), cophenetic, gap, byK, tally.branchSupport(l), consensus,

@@ -180,7 +180,8 @@ class StudyChartsTest {
         Arrays.fill(nan, Double.NaN);
         KEvidence broken = new KEvidence(ke.k(), ke.cutHeight(), ke.tieDependent(), ke.clustering(), ke.branches(),
                 ke.silhouette(), ke.calinskiHarabasz(), ke.daviesBouldin(), ke.dunn(), ke.gap(), ke.gapSE(),
-                ke.stability(), ke.clusters(), nan, ke.sampleStability(), ke.sampleConsensus(), ke.replicateAri());
+                ke.stability(), ke.clusters(), nan, ke.sampleStability(), ke.sampleConsensus(), ke.replicateAri(),
+                ke.separation());
         var byK = new ArrayList<>(le.byK());
         byK.set(le.byK().indexOf(ke), broken);
         var linkages = new ArrayList<LinkageEvidence>();

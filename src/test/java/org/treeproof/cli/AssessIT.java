@@ -57,6 +57,22 @@ class AssessIT {
         assertEquals(3, clusters.stream().map(c -> c.get("cluster")).distinct().count());
         List<CSVRecord> scores = csv(dir.resolve("scores.csv"));
         assertEquals(3 * 9, scores.size());
+        // the separation test: scores.csv's separationP is summary.json's largest p over the clusters, and the
+        // recommended solution met it (the demo's strains lie far apart)
+        for (JsonNode l : s.get("linkages")) {
+            for (JsonNode e : l.get("byK")) {
+                JsonNode sep = e.get("separation");
+                double largest = 0;
+                for (JsonNode c : sep.get("clusters")) {
+                    largest = Math.max(largest, c.get("pValue").asDouble());
+                }
+                assertEquals(largest, sep.get("pValue").asDouble(), 0);
+                CSVRecord row = scores.stream().filter(r -> r.get("linkage").equals(l.get("linkage").asText())
+                        && r.get("k").equals(e.get("k").asText())).findFirst().orElseThrow();
+                assertEquals(largest, Double.parseDouble(row.get("separationP")), 0);
+            }
+        }
+        assertTrue(chosen(s).get("conditionsMet").toString().contains("every-cluster-separated"));
 
         // the report parses, holds every section and embeds every chart that was drawn
         Document html = Jsoup.parse(dir.resolve("report.html").toFile(), "UTF-8");

@@ -101,4 +101,27 @@ class MetricDefinitionTest {
             }
         }
     }
+
+    @Test
+    void theEmbeddingHasTheMetricsGeometry() {
+        // rows (1, 2, 3) and (1, 3, 2): Pearson r = 0.5 by hand (centred (-1, 0, 1) and (-1, 1, 0), dot 1, norms
+        // sqrt 2), so 1 - r = 0.5; centred and scaled to unit length they are (-1, 0, 1)/sqrt 2 and (-1, 1, 0)/sqrt 2,
+        // whose squared Euclidean distance (0, -1, 1)/sqrt 2 squared is 1 = 2 (1 - r)
+        var data = new DataMatrix(List.of("x", "y"), List.of("a", "b", "c"), new double[] {1, 2, 3, 1, 3, 2});
+        DataMatrix e = Metric.PEARSON.embedding(data);
+        double s = 1 / Math.sqrt(2);
+        double[] x = {-s, 0, s};
+        double[] y = {-s, s, 0};
+        for (int j = 0; j < 3; j++) {
+            assertEquals(x[j], e.get(0, j), 1e-15);
+            assertEquals(y[j], e.get(1, j), 1e-15);
+        }
+        // cosine: (3, 4) scaled to unit length is (0.6, 0.8)
+        DataMatrix c = Metric.COSINE.embedding(new DataMatrix(List.of("x"), List.of("a", "b"), new double[] {3, 4}));
+        assertEquals(0.6, c.get(0, 0), 1e-15);
+        assertEquals(0.8, c.get(0, 1), 1e-15);
+        // Euclidean and Manhattan compare the data as they are
+        assertTrue(Metric.EUCLIDEAN.embedding(data) == data);
+        assertTrue(Metric.MANHATTAN.embedding(data) == data);
+    }
 }

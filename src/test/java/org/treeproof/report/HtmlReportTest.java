@@ -11,6 +11,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Base64;
 import java.util.List;
+import java.util.Locale;
 import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
 import org.jsoup.nodes.Element;
@@ -193,8 +194,12 @@ class HtmlReportTest {
         assertPrinted(cells.get(11).text(), e.stability().nullModel().silhouetteMean(), "null silhouette");
         assertPrinted(cells.get(12).text(), e.stability().nullModel().excess(), "excess over the null");
         assertPrinted(cells.get(13).text(), e.stability().nullModel().pValueAdjusted(), "adjusted p");
-        assertPrinted(cells.get(16).text(), e.dunn(), "Dunn");
-        String[] gap = cells.get(17).text().replace('\u00A0', ' ').split(" ± ");
+        // the separation p: the largest dip-test p over the clusters, "< 0.001" below the third decimal
+        String sep = cells.get(14).text();
+        assertTrue(e.separationP() < 0.001 ? sep.equals("< 0.001") : sep.equals(String.format(Locale.ROOT, "%.3f",
+                e.separationP())), sep + " for " + e.separationP());
+        assertPrinted(cells.get(17).text(), e.dunn(), "Dunn");
+        String[] gap = cells.get(18).text().replace('\u00A0', ' ').split(" ± ");
         assertPrinted(gap[0], e.gap(), "gap");
         assertPrinted(gap[1], e.gapSE(), "s_k");
         assertEquals(1, d.select("#linkages tr.recommended").size());

@@ -83,7 +83,9 @@ class MethodsParagraphTest {
                 "a subsample of 80% of the samples drawn without replacement", "(5 replicates each)",
                 "19 null data sets", "(1 + 19)", "10 reference data sets", "principal axes", "(0.1, 0.9]",
                 "adjusted p ≤ 0.05", "mean Jaccard at least 0.75", "every mean Jaccard above 0.5", "mean silhouette width above 0",
-                "at least 5 samples counted as clusters", "first 5 replicates", "Ward2")) {
+                "at least 5 samples counted as clusters", "first 5 replicates", "Ward2",
+                "every cluster was set apart from its nearest cluster by a dip in density",
+                "the quarter of the larger nearest the smaller's centroid", "had to reject one mode at p ≤ 0.05")) {
             assertTrue(md.contains(expected), "missing '" + expected + "' in\n" + md);
         }
         assertEquals(20, st.replicates());
@@ -103,7 +105,8 @@ class MethodsParagraphTest {
             {"Hennig, 2007", "10.1016/j.csda.2006.11.025"}, {"Rousseeuw, 1987", "10.1016/0377-0427(87)90125-7"},
             {"Tibshirani et al., 2001", "10.1111/1467-9868.00293"},
             {"Kaufman & Rousseeuw, 1990", "10.1002/9780470316801"}, {"Liu et al., 2008", "10.1198/016214508000000454"},
-            {"Rousseeuw & Croux, 1993", "10.1080/01621459.1993.10476408"}};
+            {"Rousseeuw & Croux, 1993", "10.1080/01621459.1993.10476408"},
+            {"Hartigan & Hartigan, 1985", "10.1214/aos/1176346577"}};
         for (String[] r : required) {
             assertTrue(text.contains(r[0]), "not cited: " + r[0]);
             assertTrue(refs.contains("https://doi.org/" + r[1]), "no DOI for " + r[0]);
@@ -145,7 +148,7 @@ class MethodsParagraphTest {
         var words = new ReasonWords(org.treeproof.study.DecisionRule.DEFAULT);
         String none = words.word(new org.treeproof.study.Reason.Structure(t, 0.05, false));
         assertTrue(none.startsWith("The data depart from the null data without clusters"), none);
-        assertTrue(none.contains("not evidence of stable, cohesive clusters"), none);
+        assertTrue(none.contains("not evidence of stable, cohesive, separated clusters"), none);
         assertFalse(none.contains("hold cluster structure"), none);
         String some = words.word(new org.treeproof.study.Reason.Structure(t, 0.05, true));
         assertTrue(some.startsWith("The data depart from null data without clusters (a unimodal law"), some);
@@ -202,6 +205,9 @@ class MethodsParagraphTest {
         assertFalse(md.contains("Calinski"));
         assertFalse(md.contains("Ward"));
         assertFalse(md.contains("null data set;"), "no null data sets were drawn");
+        // the separation test needs the feature table: said so, and its work is not cited
+        assertTrue(md.contains("Whether the clusters were separated by a dip in density could not be tested"), md);
+        assertFalse(md.contains("Hartigan"), md);
         // the report lists neither the null data's nor the gap statistic's works when neither was computed
         String refs = HtmlReport.of(Studies.distancesOnly().model(), List.of()).render();
         refs = refs.substring(refs.indexOf("class=\"references\""));

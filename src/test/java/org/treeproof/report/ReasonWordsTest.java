@@ -16,7 +16,7 @@ import org.treeproof.tree.Linkage;
 /** The wording of typed reasons, on hand-built facts. */
 class ReasonWordsTest {
     private static Assessment at(int k, Verdict v, List<Condition> failed) {
-        var facts = new Assessment.Facts(Linkage.WARD, k, 0, 0.8, 0.7, true, 1, 0.3, 0.1, true, 5.0, 0.05, 0.7);
+        var facts = new Assessment.Facts(Linkage.WARD, k, 0, 0.8, 0.7, true, 1, 0.3, 0.1, true, 5.0, 0.05, 0.7, 0.001);
         return new Assessment(facts, v, List.of(), failed);
     }
 

@@ -275,7 +275,7 @@ class ReportModelTest {
         var odd = new org.treeproof.study.Assessment(new org.treeproof.study.Assessment.Facts(f.linkage(), f.k(),
                 f.outliers(), f.meanAri(), Double.NaN, f.noneDissolved(), f.doubtfulClusters(), f.silhouette(), f.leastClusterSilhouette(), f.calibrated(),
                 f.excess(), f.pAdjusted(),
-                f.cophenetic()), a.verdict(), a.met(), a.failed());
+                f.cophenetic(), f.separationP()), a.verdict(), a.met(), a.failed());
         reasons.add(new org.treeproof.study.Reason.BestFailed(odd));
         var changed = new Recommendation(r.linkage(), r.k(), r.cutHeight(), r.verdict(), r.levels(), reasons,
                 r.criteria(), r.clusters(), r.flaggedSamples(), r.linkages(), r.agreement(), r.rule(),

@@ -1,6 +1,7 @@
 package org.treeproof.study;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
@@ -18,12 +19,12 @@ class DecisionRuleTest {
 
     private static Assessment.Facts calibrated(int k, double excess, double p, boolean allStable, boolean whole) {
         return new Assessment.Facts(Linkage.AVERAGE, k, 0, 0.9, allStable ? 0.9 : whole ? 0.6 : 0.3,
-                whole, allStable || !whole ? 0 : 1, 0.1, 0.05, true, excess, p, 0.8);
+                whole, allStable || !whole ? 0 : 1, 0.1, 0.05, true, excess, p, 0.8, 0.001);
     }
 
     private static Assessment.Facts uncalibrated(double ari, boolean allStable, double silhouette) {
         return new Assessment.Facts(Linkage.AVERAGE, 2, 0, ari, allStable ? 0.9 : 0.6, true, allStable ? 0 : 1, silhouette,
-                silhouette, false, Double.NaN, Double.NaN, 0.8);
+                silhouette, false, Double.NaN, Double.NaN, 0.8, 0.001);
     }
 
     @Test
@@ -31,9 +32,32 @@ class DecisionRuleTest {
         Assessment a = RULE.assess(calibrated(3, 8.0, 0.05, true, true));
         assertEquals(Verdict.SUPPORTED, a.verdict());
         assertEquals(List.of(Condition.BEATS_NULL, Condition.NO_CLUSTER_DISSOLVES, Condition.EVERY_CLUSTER_COHESIVE,
-                Condition.AT_MOST_ONE_DOUBTFUL, Condition.EVERY_CLUSTER_STABLE),
+                Condition.EVERY_CLUSTER_SEPARATED, Condition.AT_MOST_ONE_DOUBTFUL, Condition.EVERY_CLUSTER_STABLE),
                 a.met());
         assertTrue(a.failed().isEmpty());
+    }
+
+    private static Assessment.Facts withSeparation(boolean calibrated, double separationP) {
+        return new Assessment.Facts(Linkage.WARD, 3, 0, 0.95, 0.9, true, 0, 0.6, 0.5, calibrated,
+                calibrated ? 12 : Double.NaN, calibrated ? 0.01 : Double.NaN, 0.8, separationP);
+    }
+
+    @Test
+    void piecesWithoutADipBetweenThemAreNoClustersWhateverTheirStability() {
+        // boundary of EVERY_CLUSTER_SEPARATED at alpha = 0.05, inclusive like the null's p-value: a stable solution
+        // that beats the null is supported at p = 0.05 and unsupported just above it (a chain cut into pieces)
+        assertEquals(Verdict.SUPPORTED, RULE.assess(withSeparation(true, 0.05)).verdict());
+        Assessment chain = RULE.assess(withSeparation(true, 0.0501));
+        assertEquals(Verdict.UNSUPPORTED, chain.verdict());
+        assertEquals(List.of(Condition.EVERY_CLUSTER_SEPARATED), chain.failed());
+        // without null data it is needed for tentative too
+        assertEquals(Verdict.TENTATIVE, RULE.assess(withSeparation(false, 0.01)).verdict());
+        assertEquals(Verdict.UNSUPPORTED, RULE.assess(withSeparation(false, 0.5)).verdict());
+        // not assessed (only distances given): neither met nor failed, and it decides nothing
+        Assessment unknown = RULE.assess(withSeparation(true, Double.NaN));
+        assertEquals(Verdict.SUPPORTED, unknown.verdict());
+        assertFalse(unknown.met().contains(Condition.EVERY_CLUSTER_SEPARATED));
+        assertTrue(unknown.failed().isEmpty());
     }
 
     @Test
@@ -57,8 +81,8 @@ class DecisionRuleTest {
     @Test
     void oneDoubtfulClusterIsTentativeTwoAreUnsupported() {
         // boundary of AT_MOST_ONE_DOUBTFUL: 1 doubtful beside stable ones passes, 2 fail, whatever the excess
-        var one = new Assessment.Facts(Linkage.WARD, 5, 0, 0.8, 0.6, true, 1, 0.3, 0.1, true, 9, 0.05, 0.7);
-        var two = new Assessment.Facts(Linkage.WARD, 5, 0, 0.8, 0.6, true, 2, 0.3, 0.1, true, 9, 0.05, 0.7);
+        var one = new Assessment.Facts(Linkage.WARD, 5, 0, 0.8, 0.6, true, 1, 0.3, 0.1, true, 9, 0.05, 0.7, 0.001);
+        var two = new Assessment.Facts(Linkage.WARD, 5, 0, 0.8, 0.6, true, 2, 0.3, 0.1, true, 9, 0.05, 0.7, 0.001);
         assertEquals(Verdict.TENTATIVE, RULE.assess(one).verdict());
         Assessment a = RULE.assess(two);
         assertEquals(Verdict.UNSUPPORTED, a.verdict());
@@ -70,24 +94,24 @@ class DecisionRuleTest {
         // Rousseeuw (1987): a negative width means closer to a neighbouring cluster; a cluster whose members are so
         // on average (0 included: as close to the neighbour as to each other) fails, whatever its stability
         Assessment scattered = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 4, 3, 0.9, 0.9, true, 0, 0.35,
-                0.0, true, 8, 0.05, 0.8));
+                0.0, true, 8, 0.05, 0.8, 0.001));
         assertEquals(Verdict.UNSUPPORTED, scattered.verdict());
         assertEquals(List.of(Condition.EVERY_CLUSTER_COHESIVE), scattered.failed());
         Assessment barely = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 4, 3, 0.9, 0.9, true, 0, 0.35,
-                1e-9, true, 8, 0.05, 0.8));
+                1e-9, true, 8, 0.05, 0.8, 0.001));
         assertEquals(Verdict.SUPPORTED, barely.verdict());
         Assessment noWidths = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 2, 0, 0.9, 0.9, true, 0,
-                Double.NaN, Double.NaN, true, 8, 0.05, 0.8));
+                Double.NaN, Double.NaN, true, 8, 0.05, 0.8, 0.001));
         assertEquals(Verdict.SUPPORTED, noWidths.verdict(), "no widths (clusters of one sample) do not fail it");
         Assessment withoutNull = RULE.assess(new Assessment.Facts(Linkage.COMPLETE, 2, 0, 0.9, 0.9, true, 0, 0.6,
-                -0.1, false, Double.NaN, Double.NaN, 0.8));
+                -0.1, false, Double.NaN, Double.NaN, 0.8, 0.001));
         assertEquals(Verdict.UNSUPPORTED, withoutNull.verdict());
     }
 
     @Test
     void noSilhouetteBandGatesACalibratedVerdict() {
         // a silhouette of 0.02, as in wide data, does not stop a solution that beats the null with stable clusters
-        var f = new Assessment.Facts(Linkage.WARD, 3, 0, 1.0, 1.0, true, 0, 0.02, 0.01, true, 30, 0.05, 0.5);
+        var f = new Assessment.Facts(Linkage.WARD, 3, 0, 1.0, 1.0, true, 0, 0.02, 0.01, true, 30, 0.05, 0.5, 0.001);
         assertEquals(Verdict.SUPPORTED, RULE.assess(f).verdict());
     }
 
