@@ -25,6 +25,24 @@ class SeparationTest {
         return new DataMatrix(ids, List.of("f"), v.clone());
     }
 
+    /** 0 .. big - 1, then 100 .. 104. */
+    private static double[] row(int big) {
+        double[] v = new double[big + 5];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = i < big ? i : 100 + i - big;
+        }
+        return v;
+    }
+
+    /** The first {@code big} in one cluster, the last five in another (labelled first-seen, so B is cluster 0). */
+    private static int[] labels(int big) {
+        int[] l = new int[big + 5];
+        for (int i = 0; i < big; i++) {
+            l[i] = 1;
+        }
+        return l;
+    }
+
     @Test
     void twoBlocksWithAGapAreSeparated() {
         // A = 0..4 (mean 2), B = 20..24 (mean 22), equal sizes: A is the smaller by label, all of B is taken.
@@ -64,16 +82,7 @@ class SeparationTest {
         // A's x: own centroid without it (510 - x)/4, midpoint with 9.5, position x - midpoint: 44, 45.125, 46.25,
         // 47.375, 48.5. B's y: own centroid without it (190 - y)/19, midpoint with 102, position y - midpoint (the
         // line points from A to B, and the sign is turned so that A is positive): y = 15 gives 15 - (175/19 + 102)/2.
-        double[] v = new double[25];
-        int[] labels = new int[25];
-        for (int i = 0; i < 20; i++) {
-            v[i] = i;
-            labels[i] = 1;
-        }
-        for (int i = 0; i < 5; i++) {
-            v[20 + i] = 100 + i;
-            labels[20 + i] = 0;
-        }
+        Separation.Result r = Separation.of(column(row(20)), Clustering.of(labels(20)));
         double[] hand = new double[10];
         double[] a = {44, 45.125, 46.25, 47.375, 48.5};
         System.arraycopy(a, 0, hand, 0, 5);
@@ -81,7 +90,6 @@ class SeparationTest {
             hand[5 + y - 15] = y - ((190.0 - y) / 19 + 102) / 2;
         }
         assertEquals(-40.605263157894736, hand[5], 1e-12);
-        Separation.Result r = Separation.of(column(v), Clustering.of(labels));
         Separation.Pair p = r.clusters().get(0);
         assertEquals(10, p.samples());
         assertEquals(DipTest.dip(hand), p.dip(), 1e-12);
@@ -109,15 +117,7 @@ class SeparationTest {
         // A's x: own centroid without it (510 - x)/4, midpoint with 19.5, position x - midpoint: 100 - (102.5 + 19.5)/2
         // = 39, then 40.125, 41.25, 42.375, 43.5. B's y: own centroid without it (780 - y)/39, position
         // y - ((780 - y)/39 + 102)/2.
-        double[] v = new double[45];
-        int[] labels = new int[45];
-        for (int i = 0; i < 40; i++) {
-            v[i] = i;
-            labels[i] = 1;
-        }
-        for (int i = 0; i < 5; i++) {
-            v[40 + i] = 100 + i;
-        }
+        Separation.Result r = Separation.of(column(row(40)), Clustering.of(labels(40)));
         double[] a = {39, 40.125, 41.25, 42.375, 43.5};
         double[] hand = new double[20];
         for (int i = 0; i < 5; i++) {
@@ -127,7 +127,6 @@ class SeparationTest {
         for (int y = 30; y <= 39; y++) {
             hand[10 + y - 30] = y - ((780.0 - y) / 39 + 102) / 2;
         }
-        Separation.Result r = Separation.of(column(v), Clustering.of(labels));
         Separation.Pair p = r.clusters().get(0);
         assertEquals(15, p.samples());
         double dip = DipTest.dip(hand);
