@@ -151,7 +151,23 @@ public final class ReasonWords implements Reason.Visitor<String> {
         if (!weak.isEmpty()) {
             s += " " + ModelFactory.capital(String.join("; ", weak)) + ".";
         }
+        if (ns != null) {
+            s += " " + silhouetteReading(e.silhouette());
+        }
         return s;
+    }
+
+    /**
+     * Kaufman and Rousseeuw's reading of an average silhouette, as a description only: with null data the verdict
+     * never reads a silhouette band (the rule's thresholds, {@link DecisionRule}).
+     */
+    String silhouetteReading(double silhouette) {
+        String reading = silhouette > rule.reasonableSilhouette() ? "a reasonable structure"
+                : silhouette > rule.weakSilhouette() ? "a weak structure" : "no substantial structure";
+        return f("In Kaufman and Rousseeuw's reading an average silhouette of %s describes %s (above %s reasonable, "
+                + "above %s weak); it is a description only and did not enter the verdict, since silhouettes shrink "
+                + "when many features carry no groups.", Numbers.fixed(silhouette, 3), reading,
+                Numbers.plain(rule.reasonableSilhouette()), Numbers.plain(rule.weakSilhouette()));
     }
 
     /**

@@ -33,6 +33,19 @@ class ReasonWordsTest {
     }
 
     @Test
+    void theSilhouetteIsReadInKaufmanAndRousseeuwsBands() {
+        // their reading (Finding Groups in Data, 1990): above 0.50 reasonable, 0.26-0.50 weak, 0.25 or less none
+        var words = new ReasonWords(DecisionRule.DEFAULT);
+        org.junit.jupiter.api.Assertions.assertTrue(words.silhouetteReading(0.551).contains(
+                "average silhouette of 0.551 describes a reasonable structure"));
+        org.junit.jupiter.api.Assertions.assertTrue(words.silhouetteReading(0.5).contains("describes a weak structure"));
+        org.junit.jupiter.api.Assertions.assertTrue(words.silhouetteReading(0.26).contains("describes a weak structure"));
+        org.junit.jupiter.api.Assertions.assertTrue(words.silhouetteReading(0.25).contains(
+                "describes no substantial structure"));
+        org.junit.jupiter.api.Assertions.assertTrue(words.silhouetteReading(0.03).contains("did not enter the verdict"));
+    }
+
+    @Test
     void criteriaThatPickTheSameKShareOneClause() {
         var linkage = List.of(at(2, Verdict.SUPPORTED, List.of()),
                 at(3, Verdict.TENTATIVE, List.of(Condition.EVERY_CLUSTER_STABLE)),
