@@ -48,9 +48,9 @@ final class Numbers {
         return fixed(v, 3);
     }
 
-    /** A p-value with three decimals, or "< 0.001" below that; the missing mark when not a number. */
+    /** A p-value with three decimals, or "< 0.001" (a no-break space: a table cell does not wrap there) below that; the missing mark when not a number. */
     static String smallP(double v) {
-        return Double.isNaN(v) ? MISSING : v < 0.001 ? "< 0.001" : fixed(v, 3);
+        return Double.isNaN(v) ? MISSING : v < 0.001 ? "<\u00A00.001" : fixed(v, 3);
     }
 
     /** A share as a whole percentage ("87%"). */
