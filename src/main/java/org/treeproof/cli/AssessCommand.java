@@ -206,7 +206,7 @@ final class AssessCommand implements Callable<Integer> {
         var explanation = ExplainRun.explain(loaded, evidence, rec, testOfFeatures, covariates,
                 explain.sensitivity ? inputOptions.readRaw(input) : null, inputOptions.preparation(), nThreads);
         var outputs = new StudyOutputs(loaded, evidence, rec, classes, labels, commandLine(), nThreads,
-                (System.nanoTime() - started) / 1e9, explanation, inputOptions.samplesInColumns());
+                (System.nanoTime() - started) / 1e9, explanation, inputOptions.samplesInColumns(), explain.covariates);
         try (OutputDirectory dir = OutputDirectory.begin(out, "--out", force, reads)) {
             outputs.writeInto(dir);
             dir.commit();

@@ -42,10 +42,14 @@ final class StudyOutputs {
     private final double seconds;
     private final Explanation explanation;
     private final boolean samplesInColumns;
+    private final Path covariatesFile;
 
+    /** @param covariatesFile the covariates file as given ({@code --covariates}), or {@code null} */
     StudyOutputs(LoadedInput loaded, Evidence evidence, Recommendation rec, String[] classes, Path labelsFile,
-            String[] commandLine, int threads, double seconds, Explanation explanation, boolean samplesInColumns) {
+            String[] commandLine, int threads, double seconds, Explanation explanation, boolean samplesInColumns,
+            Path covariatesFile) {
         this.samplesInColumns = samplesInColumns;
+        this.covariatesFile = covariatesFile;
         this.loaded = loaded;
         this.evidence = evidence;
         this.rec = rec;
@@ -197,6 +201,9 @@ final class StudyOutputs {
             o.add(new SummaryJson.Option("scale", p.scale().userName()));
             o.add(new SummaryJson.Option("topVariable", p.topVariable()));
         });
+        if (covariatesFile != null) {
+            o.add(new SummaryJson.Option("covariatesFile", covariatesFile.toString()));
+        }
         return o;
     }
 

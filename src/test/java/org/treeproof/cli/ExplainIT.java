@@ -95,6 +95,8 @@ class ExplainIT {
         Path dir = tmp.resolve("planted");
         JsonNode s = JSON.readTree(dir.resolve("summary.json").toFile());
         assertEquals(3, s.get("recommendation").get("k").asInt());
+        // the covariates file is recorded as given, beside the other input settings
+        assertEquals(cov.toString(), s.get("settings").get("covariatesFile").asText());
 
         List<CSVRecord> features = csv(dir.resolve("features.csv"));
         assertEquals(List.of("cluster", "feature", "rank", "effect", "auc", "meanInCluster", "meanElsewhere", "pValue",
