@@ -55,19 +55,23 @@ public final class Separation {
     }
 
     /**
-     * Every cluster's test and the solution's p-value (the largest; NaN when no pair could be assessed).
+     * Every cluster's test.
      *
-     * @param pValue   the largest p-value over the clusters
      * @param clusters per cluster, in label order (clusters too small to assess are left out)
      */
-    public record Result(double pValue, List<Pair> clusters) {
+    public record Result(List<Pair> clusters) {
         public Result {
             clusters = List.copyOf(clusters);
         }
 
+        /** The solution's p-value: the largest over its clusters; NaN when no pair could be assessed. */
+        public double pValue() {
+            return clusters.stream().mapToDouble(Pair::pValue).max().orElse(Double.NaN);
+        }
+
         /** Whether any pair was assessed. */
         public boolean assessed() {
-            return !Double.isNaN(pValue);
+            return !clusters.isEmpty();
         }
     }
 
@@ -115,7 +119,6 @@ public final class Separation {
         }
         var pairs = new ArrayList<Pair>();
         var tested = new java.util.HashMap<Integer, DipTest.Result>();   // a pair's test, by its smaller and larger
-        double worst = Double.NaN;
         for (int a = 0; a < k; a++) {
             int b = nearest(centroid, a);
             if (b < 0) {
@@ -146,9 +149,8 @@ public final class Separation {
                 return DipTest.pValue(DipTest.dip(positions), effectiveSize(m, h));
             });
             pairs.add(new Pair(a, b, m + h, r.dip(), r.pValue(), r.pBelow()));
-            worst = Double.isNaN(worst) ? r.pValue() : Math.max(worst, r.pValue());
         }
-        return new Result(worst, pairs);
+        return new Result(pairs);
     }
 
     /**

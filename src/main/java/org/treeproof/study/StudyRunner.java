@@ -107,8 +107,10 @@ public final class StudyRunner {
         }
         NullCalibration.Result calibration = nulls == null ? null : calibrate(tally, silhouettes, nulls);
         var linkages = new ArrayList<LinkageEvidence>();
+        // the rows in the metric's geometry, for the separation test: made once, read by every linkage
+        DataMatrix geometry = data == null ? null : settings.metric().embedding(data);
         for (int l = 0; l < refs.size(); l++) {
-            linkages.add(linkageEvidence(l, refs.get(l), data, d, tally, silResults[l],
+            linkages.add(linkageEvidence(l, refs.get(l), data, geometry, d, tally, silResults[l],
                     calibration == null ? null : calibration.cells()[l], gaps == null ? null : gaps[l],
                     pvalues == null ? null : pvalues.get(l)));
         }
@@ -258,12 +260,11 @@ public final class StudyRunner {
         return BigDecimal.valueOf(settings.pacHigh());
     }
 
-    private LinkageEvidence linkageEvidence(int l, ReferenceSolution ref, DataMatrix data, CondensedDistances d,
-            StabilityTally tally, Silhouette.Result[] sils, NullStability[] calibrated, GapResult gap,
-            BranchPValues pvalues) {
+    private LinkageEvidence linkageEvidence(int l, ReferenceSolution ref, DataMatrix data, DataMatrix geometry,
+            CondensedDistances d, StabilityTally tally, Silhouette.Result[] sils, NullStability[] calibrated,
+            GapResult gap, BranchPValues pvalues) {
         ConsensusMatrix consensus = tally.consensus(l);
         var byK = new ArrayList<KEvidence>();
-        DataMatrix geometry = data == null ? null : settings.metric().embedding(data);
         for (int k = 2; k <= settings.maxK(); k++) {
             SizedCut cut = ref.cut(k);
             if (cut == null) {
