@@ -165,8 +165,8 @@ public final class ReasonWords implements Reason.Visitor<String> {
         String reading = silhouette > rule.reasonableSilhouette() ? "a reasonable structure"
                 : silhouette > rule.weakSilhouette() ? "a weak structure" : "no substantial structure";
         return f("In Kaufman and Rousseeuw's reading an average silhouette of %s describes %s (above %s reasonable, "
-                + "above %s weak); it is a description only and did not enter the verdict, since silhouettes shrink "
-                + "when many features carry no groups.", Numbers.fixed(silhouette, 3), reading,
+                + "above %s weak); it is a description only and did not enter the verdict (no silhouette band gates a "
+                + "verdict, since silhouettes shrink when many features carry no groups).", Numbers.fixed(silhouette, 3), reading,
                 Numbers.plain(rule.reasonableSilhouette()), Numbers.plain(rule.weakSilhouette()));
     }
 
