@@ -3,7 +3,8 @@
 # test and, where gen.py wrote the planted labels, the adjusted Rand index of the recommended clusters with them
 # (outliers count as one more cluster; planted far samples are label -1). Options a set needs (gen.py's
 # name.opts, e.g. --log2) are added.
-# Usage: bench/judgement/unseen/run.sh [JAR]   (default target/treeproof.jar; ONLY=REGEX runs the matching sets)
+# Usage: bench/judgement/unseen/run.sh [JAR]   (default target/treeproof.jar; ONLY=REGEX runs the matching sets;
+# EXTRA="OPTIONS" adds options to every set's run)
 set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
 jar="${1:-$here/../../../target/treeproof.jar}"
@@ -16,7 +17,8 @@ for f in "$work"/data/*.csv; do
   if [ -n "${ONLY:-}" ] && ! [[ "$c" =~ $ONLY ]]; then continue; fi
   opts=()
   if [ -f "$work/data/$c.opts" ]; then read -r -a opts < "$work/data/$c.opts"; fi
-  java -jar "$jar" assess "$f" "${opts[@]}" --out "$work/out/$c" --quiet >/dev/null
+  extra=(); if [ -n "${EXTRA:-}" ]; then read -r -a extra <<< "$EXTRA"; fi
+  java -jar "$jar" assess "$f" "${opts[@]}" "${extra[@]}" --out "$work/out/$c" --quiet >/dev/null
   python3 - "$work/out/$c" "$c" "$work/data/$c.truth" <<'PY'
 import csv, json, os, sys
 from math import comb

@@ -2,7 +2,8 @@
 # Runs a default `assess` on each of the 21 hard sets of gen.py (seed 20261208; drawn by a tester before any verdict
 # was seen) and prints one line per set: verdict, k, linkage, cluster sizes, outliers, the structure test, the ARI
 # with the planted groups (--labels) and the levels. Options a set needs (NAME.opts) are added.
-# Usage: bench/judgement/unseen/hard/run.sh [JAR]   (default target/treeproof.jar; ONLY=REGEX runs matching sets)
+# Usage: bench/judgement/unseen/hard/run.sh [JAR]   (default target/treeproof.jar; ONLY=REGEX runs matching sets;
+# EXTRA="OPTIONS" adds options to every set's run)
 set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
 jar="${1:-$here/../../../../target/treeproof.jar}"
@@ -15,7 +16,8 @@ for f in "$work"/data/*.csv; do
   if [ -n "${ONLY:-}" ] && ! [[ "$c" =~ $ONLY ]]; then continue; fi
   opts=(); if [ -f "$work/data/$c.opts" ]; then read -r -a opts < "$work/data/$c.opts"; fi
   lab=(); if [ -f "$work/data/$c.truth.csv" ]; then lab=(--labels "$work/data/$c.truth.csv"); fi
-  java -jar "$jar" assess "$f" "${opts[@]}" "${lab[@]}" --out "$work/out/$c" --quiet >/dev/null
+  extra=(); if [ -n "${EXTRA:-}" ]; then read -r -a extra <<< "$EXTRA"; fi
+  java -jar "$jar" assess "$f" "${opts[@]}" "${extra[@]}" "${lab[@]}" --out "$work/out/$c" --quiet >/dev/null
   python3 - "$work/out/$c" "$c" <<'PY'
 import collections, csv, json, os, sys
 out, name = sys.argv[1:3]

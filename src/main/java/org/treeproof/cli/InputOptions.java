@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.treeproof.data.InputException;
+import org.treeproof.data.LibrarySize;
 import org.treeproof.data.MissingPolicy;
 import org.treeproof.data.Preparation;
 import org.treeproof.data.Scale;
@@ -40,6 +41,12 @@ public final class InputOptions {
             description = "Missing cells (empty, NA, N/A, #N/A, NaN): error, drop-features, drop-samples or"
                     + " impute-median (the feature's median). Default: error.")
     private MissingPolicy missing;
+
+    @Option(names = "--library-size", paramLabel = "HOW", converter = LibrarySizeConverter.class,
+            description = "Scale counts for each sample's depth before log2: none (default), total (each sample to"
+                    + " the mean total) or median-ratio (Anders and Huber's size factors, from the features above 0"
+                    + " in every sample). For read counts of uneven depth; values must be >= 0.")
+    private LibrarySize librarySize;
 
     @Option(names = "--log2", description = "Take log2(x + 1) of every value (all values must be >= 0).")
     private boolean log2;
@@ -97,7 +104,8 @@ public final class InputOptions {
      */
     public Preparation preparation() {
         Scale defaultScale = binaryMetric ? Scale.NONE : Preparation.DEFAULT_SCALE;
-        return new Preparation(missing == null ? MissingPolicy.ERROR : missing, log2,
+        return new Preparation(missing == null ? MissingPolicy.ERROR : missing,
+                librarySize == null ? LibrarySize.NONE : librarySize, log2,
                 scale == null ? defaultScale : scale, topVariable == null ? 0 : topVariable);
     }
 
@@ -120,6 +128,7 @@ public final class InputOptions {
             List<String> notForDistances = new ArrayList<>();
             addIf(notForDistances, samplesInColumns, "--samples-in-columns");
             addIf(notForDistances, missing != null, "--missing");
+            addIf(notForDistances, librarySize != null, "--library-size");
             addIf(notForDistances, log2, "--log2");
             addIf(notForDistances, scale != null, "--scale");
             addIf(notForDistances, topVariable != null, "--top-variable");
@@ -154,10 +163,14 @@ public final class InputOptions {
             return;
         }
         Preparation p = preparation();
-        if (p.log2() || p.scale() != Scale.NONE) {
-            throw new InputException("--metric " + metric.id() + " takes 0/1 data as they are; "
-                    + (p.scale() != Scale.NONE ? "drop --scale " + p.scale().userName() + (p.log2() ? " and " : "")
-                    : "") + (p.log2() ? "drop --log2" : "") + " (they change 0/1 values)");
+        var changes = new ArrayList<String>();
+        addIf(changes, p.librarySize() != LibrarySize.NONE, "--library-size " + p.librarySize().userName());
+        addIf(changes, p.log2(), "--log2");
+        addIf(changes, p.scale() != Scale.NONE, "--scale " + p.scale().userName());
+        if (!changes.isEmpty()) {
+            throw new InputException("--metric " + metric.id() + " takes 0/1 data as they are; drop "
+                    + String.join(" and ", changes) + " (" + (changes.size() == 1 ? "it changes" : "they change")
+                    + " 0/1 values)");
         }
     }
 
@@ -211,6 +224,18 @@ public final class InputOptions {
         public Scale convert(String value) {
             try {
                 return Scale.fromUserName(value);
+            } catch (InputException e) {
+                throw new CommandLine.TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
+    /** Reads a library-size method by its user name. */
+    public static final class LibrarySizeConverter implements CommandLine.ITypeConverter<LibrarySize> {
+        @Override
+        public LibrarySize convert(String value) {
+            try {
+                return LibrarySize.fromUserName(value);
             } catch (InputException e) {
                 throw new CommandLine.TypeConversionException(e.getMessage());
             }

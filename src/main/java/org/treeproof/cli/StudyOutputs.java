@@ -95,6 +95,7 @@ final class StudyOutputs {
             out.addAll(skewWarning(loaded));
         }
         out.addAll(multimodalNote(loaded));
+        out.addAll(unevenDepthNote(loaded));
         if (loaded.isDistanceTable()) {
             for (var link : evidence.settings().linkages()) {
                 if (link.requiresEuclidean()) {
@@ -149,6 +150,24 @@ final class StudyOutputs {
                 String.join(", ", named), flags.size() > 3 ? String.format(Locale.ROOT, " and %d more", flags.size() - 3) : ""));
     }
 
+    /**
+     * A note when counts (whole numbers, log2 taken, no library-size scaling) have sample totals that differ by at
+     * least {@link org.treeproof.data.PreparationReport.Totals#UNEVEN} times.
+     */
+    static List<String> unevenDepthNote(LoadedInput loaded) {
+        var totals = loaded.preparation().flatMap(r -> r.countTotals()).filter(t -> t.uneven());
+        return totals.map(t -> List.of(String.format(Locale.ROOT, "Note: the samples' totals range from %s ('%s') "
+                + "to %s ('%s'), %s. If these are read counts, samples read more deeply have larger counts on every "
+                + "feature and can cluster by depth; --library-size median-ratio (or total) divides each sample by "
+                + "its size factor before log2.", plain(t.smallest()), t.smallestSample(), plain(t.largest()),
+                t.largestSample(), t.smallest() > 0 ? String.format(Locale.ROOT, "%.1f times as much", t.ratio())
+                        : "a sample with no counts at all"))).orElse(List.of());
+    }
+
+    private static String plain(double x) {
+        return java.math.BigDecimal.valueOf(x).stripTrailingZeros().toPlainString();
+    }
+
     /** One warning when features have a long tail on one side (the three most skewed named, then a count). */
     static List<String> skewWarning(LoadedInput loaded) {
         var flags = loaded.matrix().map(org.treeproof.data.SkewedFeatures::of).orElse(List.of());
@@ -197,6 +216,7 @@ final class StudyOutputs {
             Preparation p = r.settings();
             o.add(new SummaryJson.Option("samplesInColumns", samplesInColumns));
             o.add(new SummaryJson.Option("missing", p.missing().userName()));
+            o.add(new SummaryJson.Option("librarySize", p.librarySize().userName()));
             o.add(new SummaryJson.Option("log2", p.log2()));
             o.add(new SummaryJson.Option("scale", p.scale().userName()));
             o.add(new SummaryJson.Option("topVariable", p.topVariable()));
@@ -220,7 +240,8 @@ final class StudyOutputs {
                 evidence.samples(), evidence.features(), preparationSteps(), preparationCautions(),
                 evidence.settings().metric().id(),
                 ShellWords.join(commandLine), evidence.settings().seed(), threads, seconds,
-                DateTimeFormatter.ISO_OFFSET_DATE_TIME.format(ZonedDateTime.now().withNano(0)));
+                DateTimeFormatter.ISO_OFFSET_DATE_TIME.format(ZonedDateTime.now().withNano(0)),
+                loaded.preparation().map(r -> r.settings().librarySize()).orElse(org.treeproof.data.LibrarySize.NONE));
     }
 
     /** Writes every output into the (staging) directory. */

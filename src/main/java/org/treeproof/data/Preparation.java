@@ -9,6 +9,8 @@ import java.util.Objects;
  * How a table as read is made ready for clustering, applied in this fixed order:
  * <ol>
  *   <li>the missing-value policy ({@link MissingPolicy}); afterwards no cell is missing;</li>
+ *   <li>optionally library-size scaling of counts ({@link LibrarySize}): each sample divided by its size factor;
+ *       every value must then be {@code >= 0};</li>
  *   <li>optionally {@code log2(x + 1)}; every value must then be {@code >= 0} (a value in (-1, 0) would have a
  *       logarithm, but a negative count or intensity means the data are not what log2 is meant for, so all
  *       negatives are refused);</li>
@@ -22,11 +24,13 @@ import java.util.Objects;
  * Applying a preparation is a pure function of the matrix; nothing is read or written.
  *
  * @param missing     what to do with missing cells
+ * @param librarySize how counts are scaled for each sample's depth
  * @param log2        whether to take {@code log2(x + 1)}
  * @param scale       the per-feature scaling
  * @param topVariable how many of the most variable features to keep, 0 for all
  */
-public record Preparation(MissingPolicy missing, boolean log2, Scale scale, int topVariable) {
+public record Preparation(MissingPolicy missing, LibrarySize librarySize, boolean log2, Scale scale,
+        int topVariable) {
 
     /**
      * The scaling used when none is asked for: z-scores, so that features measured in different units weigh the
@@ -36,11 +40,17 @@ public record Preparation(MissingPolicy missing, boolean log2, Scale scale, int 
 
     public Preparation {
         Objects.requireNonNull(missing, "missing");
+        Objects.requireNonNull(librarySize, "librarySize");
         Objects.requireNonNull(scale, "scale");
         if (topVariable < 0) {
             throw new InputException("--top-variable must be 0 (keep all features) or a positive count, got "
                     + topVariable);
         }
+    }
+
+    /** A preparation without library-size scaling. */
+    public Preparation(MissingPolicy missing, boolean log2, Scale scale, int topVariable) {
+        this(missing, LibrarySize.NONE, log2, scale, topVariable);
     }
 
     /** The defaults: refuse missing values, no log2, {@link #DEFAULT_SCALE}, all features. */
@@ -78,6 +88,10 @@ public record Preparation(MissingPolicy missing, boolean log2, Scale scale, int 
         long missingCells = raw.missingCount();
         var run = new PreparationRun(raw, where);
         missing.apply(run);
+        if (librarySize == LibrarySize.NONE && log2) {
+            noteCountTotals(run);
+        }
+        librarySize.apply(run);
         if (log2) {
             takeLog2(run);
         }
@@ -86,6 +100,28 @@ public record Preparation(MissingPolicy missing, boolean log2, Scale scale, int 
         }
         scale.apply(run);
         return new Prepared(run.table.toMatrix(), run.report(this, raw, missingCells));
+    }
+
+    /**
+     * Records the range of the samples' totals when every value is a whole number {@code >= 0} (counts), so that
+     * the outputs can point out uneven depths that {@code --library-size} would scale.
+     */
+    private static void noteCountTotals(PreparationRun run) {
+        WorkingTable t = run.table;
+        if (t.first(x -> x < 0 || x != Math.rint(x) || Double.isInfinite(x), false) != null) {
+            return;
+        }
+        int lo = 0;
+        int hi = 0;
+        double[] total = new double[t.samples()];
+        for (int i = 0; i < t.samples(); i++) {
+            for (int j = 0; j < t.features(); j++) {
+                total[i] += t.get(i, j);
+            }
+            lo = total[i] < total[lo] ? i : lo;
+            hi = total[i] > total[hi] ? i : hi;
+        }
+        run.countTotals(new PreparationReport.Totals(total[lo], t.sample(lo), total[hi], t.sample(hi)));
     }
 
     private static void takeLog2(PreparationRun run) {

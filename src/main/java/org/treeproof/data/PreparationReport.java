@@ -23,16 +23,22 @@ import java.util.Optional;
  * @param topVariable     the top-variable selection, empty when it was not asked for
  * @param samples         samples in the prepared table
  * @param features        features in the prepared table
+ * @param sizeFactors     the library-size factors, empty when no library-size scaling was asked for
+ * @param countTotals     without library-size scaling, under log2, of data that are whole numbers >= 0: the range
+ *                        of the samples' totals (for a note when counts of uneven depth may need scaling)
  */
 public record PreparationReport(Preparation settings, int inputSamples, int inputFeatures, long missingCells,
         List<Removal> droppedSamples, List<Removal> droppedFeatures, long imputedCells, int imputedFeatures,
-        Optional<TopVariable> topVariable, int samples, int features) {
+        Optional<TopVariable> topVariable, int samples, int features, Optional<SizeFactors> sizeFactors,
+        Optional<Totals> countTotals) {
 
     public PreparationReport {
         Objects.requireNonNull(settings, "settings");
         droppedSamples = List.copyOf(droppedSamples);
         droppedFeatures = List.copyOf(droppedFeatures);
         Objects.requireNonNull(topVariable, "topVariable");
+        Objects.requireNonNull(sizeFactors, "sizeFactors");
+        Objects.requireNonNull(countTotals, "countTotals");
         if (inputSamples < 0 || inputFeatures < 0 || missingCells < 0 || imputedCells < 0 || imputedFeatures < 0) {
             throw new IllegalArgumentException("negative count");
         }
@@ -72,6 +78,7 @@ public record PreparationReport(Preparation settings, int inputSamples, int inpu
             out.add(String.format(Locale.ROOT, "Imputed %d cell(s) in %d feature(s) with the feature's median.",
                     imputedCells, imputedFeatures));
         }
+        sizeFactors.ifPresent(f -> out.add(f.sentence()));
         if (settings.log2()) {
             out.add("Transformed every value to log2(x + 1).");
         }
@@ -130,6 +137,89 @@ public record PreparationReport(Preparation settings, int inputSamples, int inpu
         /** A short phrase for reports, e.g. "has missing values". */
         public String description() {
             return description;
+        }
+    }
+
+    /**
+     * The size factor each sample's counts were divided by.
+     *
+     * @param method  the library-size method
+     * @param samples the samples, in the order of the table at that step
+     * @param factors their size factors, in the same order
+     */
+    public record SizeFactors(LibrarySize method, List<String> samples, List<Double> factors) {
+        public SizeFactors {
+            Objects.requireNonNull(method, "method");
+            samples = List.copyOf(samples);
+            factors = List.copyOf(factors);
+            if (samples.size() != factors.size() || samples.isEmpty()) {
+                throw new IllegalArgumentException(samples.size() + " samples for " + factors.size() + " factors");
+            }
+        }
+
+        /** The index of the smallest factor (the first on ties). */
+        int smallest() {
+            int at = 0;
+            for (int i = 1; i < factors.size(); i++) {
+                at = factors.get(i) < factors.get(at) ? i : at;
+            }
+            return at;
+        }
+
+        /** The index of the largest factor (the first on ties). */
+        int largest() {
+            int at = 0;
+            for (int i = 1; i < factors.size(); i++) {
+                at = factors.get(i) > factors.get(at) ? i : at;
+            }
+            return at;
+        }
+
+        /** What was done, as a sentence for reports. */
+        String sentence() {
+            int lo = smallest();
+            int hi = largest();
+            String range = String.format(Locale.ROOT, "size factors from %.3g ('%s') to %.3g ('%s')",
+                    factors.get(lo), samples.get(lo), factors.get(hi), samples.get(hi));
+            return switch (method) {
+                case TOTAL -> "Divided each sample's counts by its total relative to the mean total of the samples"
+                        + " (total-count scaling, Dillies et al., 2013; " + range + ").";
+                case MEDIAN_RATIO -> "Divided each sample's counts by its size factor from the median-ratio method"
+                        + " (Anders & Huber, 2010; " + range + ").";
+                case NONE -> throw new IllegalStateException("no size factors without library-size scaling");
+            };
+        }
+    }
+
+    /**
+     * The range of the samples' totals over the features, as read (after the missing-value policy).
+     *
+     * @param smallest       the smallest total
+     * @param smallestSample the sample that has it
+     * @param largest        the largest total
+     * @param largestSample  the sample that has it
+     */
+    public record Totals(double smallest, String smallestSample, double largest, String largestSample) {
+        public Totals {
+            Objects.requireNonNull(smallestSample, "smallestSample");
+            Objects.requireNonNull(largestSample, "largestSample");
+        }
+
+        /**
+         * The ratio of the largest total to the smallest from which the depths are called uneven: twice. Our
+         * choice, with no source: a sample read twice as deeply has every count doubled, one log2 unit on every
+         * feature, as large as a typical between-group difference in expression data.
+         */
+        public static final double UNEVEN = 2;
+
+        /** How many times the largest total the smallest is; infinite when the smallest is 0. */
+        public double ratio() {
+            return largest / smallest;
+        }
+
+        /** Whether the totals differ by at least {@link #UNEVEN} times. */
+        public boolean uneven() {
+            return !(ratio() < UNEVEN);
         }
     }
 

@@ -16,6 +16,8 @@ final class PreparationRun {
     private long imputedCells;
     private int imputedFeatures;
     private PreparationReport.TopVariable topVariable;
+    private PreparationReport.SizeFactors sizeFactors;
+    private PreparationReport.Totals countTotals;
 
     PreparationRun(DataMatrix input, CellLocator where) {
         this.table = new WorkingTable(input);
@@ -55,6 +57,14 @@ final class PreparationRun {
         topVariable = t;
     }
 
+    void librarySizes(PreparationReport.SizeFactors f) {
+        sizeFactors = f;
+    }
+
+    void countTotals(PreparationReport.Totals t) {
+        countTotals = t;
+    }
+
     /**
      * Refuses a table in which {@code step} made a value too large for a double, naming the first such cell.
      *
@@ -81,6 +91,6 @@ final class PreparationRun {
     PreparationReport report(Preparation settings, DataMatrix input, long missingCells) {
         return new PreparationReport(settings, input.samples(), input.features(), missingCells, droppedSamples,
                 droppedFeatures, imputedCells, imputedFeatures, Optional.ofNullable(topVariable), table.samples(),
-                table.features());
+                table.features(), Optional.ofNullable(sizeFactors), Optional.ofNullable(countTotals));
     }
 }

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Objects;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.data.InputException;
+import org.treeproof.data.LibrarySize;
 import org.treeproof.data.Preparation;
 import org.treeproof.data.Scale;
 import org.treeproof.distance.CondensedDistances;
@@ -64,7 +65,10 @@ public final class Sensitivity {
         return new Sensitivity(raw, chosen, metric, linkage, solution, sampleIds, survives, threads);
     }
 
-    /** The alternatives, in a fixed order: scalings, log2, numbers of features, dissimilarities. */
+    /**
+     * The alternatives, in a fixed order: scalings, log2, the other library-size methods (when one was chosen),
+     * numbers of features, dissimilarities.
+     */
     List<Alternative> alternatives() {
         var out = new ArrayList<Alternative>();
         boolean binary = metric.binaryOnly();
@@ -77,6 +81,14 @@ public final class Sensitivity {
             }
             out.add(new Alternative("log2: " + (chosen.log2() ? "off" : "on"), "log2", with(chosen, chosen.scale(),
                     !chosen.log2(), chosen.topVariable()), metric));
+            if (chosen.librarySize() != LibrarySize.NONE) {
+                for (LibrarySize l : LibrarySize.values()) {
+                    if (l != chosen.librarySize()) {
+                        out.add(new Alternative("library-size: " + l.userName(), "library-size", new Preparation(
+                                chosen.missing(), l, chosen.log2(), chosen.scale(), chosen.topVariable()), metric));
+                    }
+                }
+            }
         }
         if (chosen.topVariable() > 0) {
             int half = Math.max(1, chosen.topVariable() / 2);
@@ -97,7 +109,7 @@ public final class Sensitivity {
     }
 
     private static Preparation with(Preparation p, Scale scale, boolean log2, int top) {
-        return new Preparation(p.missing(), log2, scale, top);
+        return new Preparation(p.missing(), p.librarySize(), log2, scale, top);
     }
 
     /** One alternative analysis: a preparation and a dissimilarity. */

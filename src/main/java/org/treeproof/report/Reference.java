@@ -86,6 +86,13 @@ public record Reference(String cite, String entry, String doi) {
     static final Reference WARD = new Reference("Ward, 1963",
             "Ward, J. H. (1963). Hierarchical grouping to optimize an objective function. Journal of the American "
                     + "Statistical Association, 58, 236–244.", "10.1080/01621459.1963.10500845");
+    static final Reference ANDERS_HUBER = new Reference("Anders & Huber, 2010",
+            "Anders, S. & Huber, W. (2010). Differential expression analysis for sequence count data. Genome Biology, "
+                    + "11, R106.", "10.1186/gb-2010-11-10-r106");
+    static final Reference DILLIES = new Reference("Dillies et al., 2013",
+            "Dillies, M.-A. et al. (2013). A comprehensive evaluation of normalization methods for Illumina "
+                    + "high-throughput RNA sequencing data analysis. Briefings in Bioinformatics, 14, 671–683.",
+            "10.1093/bib/bbs046");
     static final Reference HARTIGAN = new Reference("Hartigan & Hartigan, 1985",
             "Hartigan, J. A. & Hartigan, P. M. (1985). The dip test of unimodality. The Annals of Statistics, 13, "
                     + "70–84.", "10.1214/aos/1176346577");

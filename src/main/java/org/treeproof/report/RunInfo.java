@@ -25,10 +25,20 @@ import java.util.regex.Pattern;
  * @param threads     threads used
  * @param wallSeconds wall-clock time of the run in seconds
  * @param generatedAt when the report was made, as text (e.g. ISO-8601)
+ * @param librarySize the library-size method of the preparation ({@code NONE} for a distance table), for the
+ *                    methods paragraph's references
  */
 public record RunInfo(String toolName, String toolVersion, String inputFile, String inputSha256, int samples,
         int features, List<String> preparation, List<String> cautions, String metric, String commandLine, long seed,
-        int threads, double wallSeconds, String generatedAt) {
+        int threads, double wallSeconds, String generatedAt, org.treeproof.data.LibrarySize librarySize) {
+
+    /** A run without library-size scaling. */
+    public RunInfo(String toolName, String toolVersion, String inputFile, String inputSha256, int samples,
+            int features, List<String> preparation, List<String> cautions, String metric, String commandLine, long seed,
+            int threads, double wallSeconds, String generatedAt) {
+        this(toolName, toolVersion, inputFile, inputSha256, samples, features, preparation, cautions, metric,
+                commandLine, seed, threads, wallSeconds, generatedAt, org.treeproof.data.LibrarySize.NONE);
+    }
 
     /** A run whose preparation gave no caution. */
     public RunInfo(String toolName, String toolVersion, String inputFile, String inputSha256, int samples,
@@ -48,6 +58,7 @@ public record RunInfo(String toolName, String toolVersion, String inputFile, Str
         Objects.requireNonNull(metric, "metric");
         Objects.requireNonNull(commandLine, "commandLine");
         Objects.requireNonNull(generatedAt, "generatedAt");
+        Objects.requireNonNull(librarySize, "librarySize");
         preparation = List.copyOf(preparation);
         cautions = List.copyOf(cautions);
         if (toolName.isBlank() || toolVersion.isBlank()) {
