@@ -1,6 +1,6 @@
 /*
  * Tried and set aside (3 December 2026, eighth session): making both sides of the separation test local.
- * See README.md beside this file.
+ * See bench/judgement/README.md, "Tried and set aside: both sides of the separation test local".
  *
  *   java -cp target/treeproof.jar bench/judgement/tried/local-separation/LocalSeparation.java X.csv LAB.csv NAME
  *

@@ -1,5 +1,5 @@
 #!/usr/bin/env python3
-"""Cuts of scipy's trees for the local-separation trial (see README.md beside this file).
+"""Cuts of scipy's trees for the local-separation trial (bench/judgement/README.md, "both sides ... local").
 
     python3 prep_cuts.py DATA.csv OUT_PREFIX [OPTIONS]
 
