@@ -138,7 +138,8 @@ public final class Sensitivity {
             CondensedDistances d = a.metric().compute(prepared, threads);
             labels = linkage.cluster(d).cutLabelsAtK(Math.min(solution.k(), prepared.samples()));
         } catch (InputException e) {
-            return new SensitivityResult.Row(a.name(), a.change(), p.scale().userName(), p.log2(), p.topVariable(),
+            return new SensitivityResult.Row(a.name(), a.change(), p.librarySize().userName(), p.scale().userName(),
+                    p.log2(), p.topVariable(),
                     a.metric().id(), Double.NaN, new double[0], "not run: " + e.getMessage());
         }
         // the chosen solution's clustered samples that the alternative also kept
@@ -157,7 +158,8 @@ public final class Sensitivity {
         Partition px = Partition.of(x);
         Partition py = Partition.of(y);
         double ari = AdjustedRandIndex.of(px, py).compute().value();
-        return new SensitivityResult.Row(a.name(), a.change(), p.scale().userName(), p.log2(), p.topVariable(),
+        return new SensitivityResult.Row(a.name(), a.change(), p.librarySize().userName(), p.scale().userName(),
+                    p.log2(), p.topVariable(),
                 a.metric().id(), ari, bestJaccard(x, y, solution.k()), "");
     }
 

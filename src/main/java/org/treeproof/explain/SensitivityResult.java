@@ -22,6 +22,7 @@ public record SensitivityResult(String linkage, int k, double survives, List<Row
      *
      * @param name        a short name ("scale: none", "metric: manhattan")
      * @param change      what differs from the chosen analysis: scale, log2, top-variable or metric
+     * @param librarySize the library-size method used ({@code none} without one)
      * @param scale       the scaling used
      * @param log2        whether log2 was applied
      * @param topVariable features kept by variance, 0 for all
@@ -30,7 +31,7 @@ public record SensitivityResult(String linkage, int k, double survives, List<Row
      * @param jaccard     per chosen cluster (index c − 1) its best-match Jaccard (empty when not run)
      * @param note        why the alternative could not be run, empty when it ran
      */
-    public record Row(String name, String change, String scale, boolean log2, int topVariable, String metric,
+    public record Row(String name, String change, String librarySize, String scale, boolean log2, int topVariable, String metric,
             double ari, double[] jaccard, String note) {
         public Row {
             Objects.requireNonNull(name, "name");

@@ -29,7 +29,7 @@ public final class ExplainCsv {
             "qValue", "effect", "flagged");
 
     /** The columns of {@code sensitivity.csv}. */
-    public static final List<String> SENSITIVITY_COLUMNS = List.of("alternative", "change", "scale", "log2",
+    public static final List<String> SENSITIVITY_COLUMNS = List.of("alternative", "change", "librarySize", "scale", "log2",
             "topVariable", "metric", "ari", "clustersSurviving", "jaccardByCluster", "note");
 
     /** Every (cluster, feature), clusters in order and features by rank within each. */
@@ -77,7 +77,7 @@ public final class ExplainCsv {
                 for (double j : r.jaccard()) {
                     jac.add(CsvOutputs.num(j));
                 }
-                p.printRecord(r.name(), r.change(), r.scale(), String.valueOf(r.log2()), String.valueOf(r.topVariable()),
+                p.printRecord(r.name(), r.change(), r.librarySize(), r.scale(), String.valueOf(r.log2()), String.valueOf(r.topVariable()),
                         r.metric(), CsvOutputs.num(r.ari()), r.ran() ? String.valueOf(r.surviving(s.survives())) : "",
                         String.join(";", jac), r.note());
             }

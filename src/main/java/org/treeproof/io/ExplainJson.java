@@ -114,6 +114,7 @@ final class ExplainJson {
             g.writeStartObject();
             g.writeStringField("alternative", r.name());
             g.writeStringField("change", r.change());
+            g.writeStringField("librarySize", r.librarySize());
             g.writeStringField("scale", r.scale());
             g.writeBooleanField("log2", r.log2());
             g.writeNumberField("topVariable", r.topVariable());

@@ -246,4 +246,36 @@ class ExplainCoreTest {
         assertTrue(sn.rows().stream().noneMatch(r -> r.change().equals("metric")));
         assertTrue(sn.rows().stream().filter(r -> r.name().equals("log2: on")).allMatch(r -> !r.ran()));
     }
+
+    @Test
+    void sensitivityTriesTheOtherLibrarySizeMethodsWhenOneWasChosen() {
+        Solution planted = Solution.of(plantedLabels());
+        List<String> ids = matrix(planted(1, 0)).sampleIds();
+        // positive "counts": three groups of 30 on 50 features, each sample multiplied by its own depth (1 to 3)
+        var rc = new SplittableRandom(12);
+        double[][] x = planted(13, 0);
+        for (int i = 0; i < 90; i++) {
+            double depth = 1 + 2 * rc.nextDouble();
+            for (int j = 0; j < 50; j++) {
+                x[i][j] = Math.rint(depth * (50 + 5 * x[i][j] + (j / 10 == i / 30 ? 60 : 0)));
+            }
+        }
+        var chosen = new Preparation(org.treeproof.data.MissingPolicy.ERROR,
+                org.treeproof.data.LibrarySize.MEDIAN_RATIO, true, org.treeproof.data.Scale.ZSCORE, 0);
+        SensitivityResult s = Sensitivity.of(matrix(x), chosen, Metric.EUCLIDEAN, Linkage.WARD, planted, ids, 0.75, 1)
+                .compute();
+        var library = s.rows().stream().filter(r -> r.change().equals("library-size")).toList();
+        assertEquals(List.of("library-size: none", "library-size: total"),
+                library.stream().map(SensitivityResult.Row::name).toList());
+        assertEquals(List.of("none", "total"), library.stream().map(SensitivityResult.Row::librarySize).toList());
+        // every other alternative keeps the chosen method
+        s.rows().stream().filter(r -> !r.change().equals("library-size"))
+                .forEach(r -> assertEquals("median-ratio", r.librarySize(), r.toString()));
+        // total-count scaling finds the same groups here (the groups move only a fifth of the features)
+        assertEquals(3, library.get(1).surviving(0.75), library.get(1).toString());
+        // without any chosen method, none is tried
+        SensitivityResult plain = Sensitivity.of(matrix(x), Preparation.defaults(), Metric.EUCLIDEAN, Linkage.WARD,
+                planted, ids, 0.75, 1).compute();
+        assertTrue(plain.rows().stream().noneMatch(r -> r.change().equals("library-size")));
+    }
 }

@@ -12,13 +12,13 @@ import org.treeproof.explain.SensitivityResult;
 /** The explanation's prose counts only what was done (hand-built results). */
 class ExplainProseTest {
     private static SensitivityResult.Row ran(String name, double ari) {
-        return new SensitivityResult.Row(name, "scale", "none", false, 0, "euclidean", ari, new double[] {0.9, 0.8},
+        return new SensitivityResult.Row(name, "scale", "none", "none", false, 0, "euclidean", ari, new double[] {0.9, 0.8},
                 "");
     }
 
     @Test
     void alternativesThatCouldNotRunAreNotCountedAsRun() {
-        var notRun = new SensitivityResult.Row("log2", "log2", "zscore", true, 0, "euclidean", Double.NaN,
+        var notRun = new SensitivityResult.Row("log2", "log2", "none", "zscore", true, 0, "euclidean", Double.NaN,
                 new double[0], "not run: log2 needs positive values");
         var s = new SensitivityResult("ward", 2, 0.75, List.of(ran("scale: none", 0.9), notRun,
                 ran("metric: manhattan", 0.7)));
