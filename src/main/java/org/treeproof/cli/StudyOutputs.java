@@ -156,12 +156,16 @@ final class StudyOutputs {
      */
     static List<String> unevenDepthNote(LoadedInput loaded) {
         var totals = loaded.preparation().flatMap(r -> r.countTotals()).filter(t -> t.uneven());
-        return totals.map(t -> List.of(String.format(Locale.ROOT, "Note: the samples' totals range from %s ('%s') "
-                + "to %s ('%s'), %s. If these are read counts, samples read more deeply have larger counts on every "
-                + "feature and can cluster by depth; --library-size median-ratio (or total) divides each sample by "
-                + "its size factor before log2.", plain(t.smallest()), t.smallestSample(), plain(t.largest()),
-                t.largestSample(), t.smallest() > 0 ? String.format(Locale.ROOT, "%.1f times as much", t.ratio())
-                        : "a sample with no counts at all"))).orElse(List.of());
+        return totals.map(t -> List.of(t.smallest() > 0 ? String.format(Locale.ROOT, "Note: the samples' totals "
+                + "range from %s ('%s') to %s ('%s'), %.1f times as much. If these are read counts, samples read more "
+                + "deeply have larger counts on every feature and can cluster by depth; --library-size median-ratio "
+                + "(or total) divides each sample by its size factor before log2.", plain(t.smallest()),
+                t.smallestSample(), plain(t.largest()), t.largestSample(), t.ratio())
+                : String.format(Locale.ROOT, "Note: sample '%s' has no counts (every value is 0) while others total "
+                + "up to %s ('%s'). If these are read counts, it carries no information; remove it, and if the other "
+                + "samples were read to uneven depths, --library-size median-ratio (or total) divides each by its "
+                + "size factor before log2.", t.smallestSample(), plain(t.largest()), t.largestSample())))
+                .orElse(List.of());
     }
 
     private static String plain(double x) {
@@ -179,12 +183,16 @@ final class StudyOutputs {
         for (int i = 0; i < Math.min(3, flags.size()); i++) {
             named.add(String.format(Locale.ROOT, "%s %.1f", flags.get(i).feature(), flags.get(i).skewness()));
         }
+        boolean logged = loaded.preparation().map(r -> r.settings().log2()).orElse(false);
         return List.of(String.format(Locale.ROOT, "Warning: %d of %d features %s a long tail on one side "
                 + "(skewness beyond %.0f: %s%s). The null data are symmetric, so pieces of such a tail can pass for "
-                + "clusters; for intensities, abundances or counts, a log transform (--log2) before scaling is the "
-                + "usual remedy.", flags.size(), features, flags.size() == 1 ? "has" : "have",
+                + "clusters; %s", flags.size(), features, flags.size() == 1 ? "has" : "have",
                 org.treeproof.data.SkewedFeatures.LIMIT,
-                String.join(", ", named), flags.size() > 3 ? ", ..." : ""));
+                String.join(", ", named), flags.size() > 3 ? ", ..." : "", logged
+                        ? "these are skewed after log2 (--log2), so check them (a feature mostly at 0 is one such) and "
+                        + "consider leaving them out of the table."
+                        : "for intensities, abundances or counts, a log transform (--log2) before scaling is the usual "
+                        + "remedy."));
     }
 
     /** A warning per feature that alone puts a sample far out (at most five named, then a count). */

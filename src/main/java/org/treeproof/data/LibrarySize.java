@@ -40,10 +40,6 @@ public enum LibrarySize {
                 for (int j = 0; j < p; j++) {
                     s += t.get(i, j);
                 }
-                if (!(s > 0)) {
-                    throw new InputException(run.where.source() + ": sample '" + t.sample(i) + "' has no counts (its"
-                            + " values sum to 0), so --library-size total cannot scale it; drop the sample");
-                }
                 total[i] = s;
                 mean += s / n;
             }
@@ -139,7 +135,8 @@ public enum LibrarySize {
     /**
      * Divides each sample's counts by its size factor and records the factors.
      *
-     * @throws InputException when a value is negative (counts cannot be), or the factors cannot be formed
+     * @throws InputException when a value is negative (counts cannot be), a sample has no counts, or the factors
+     *                        cannot be formed
      */
     void apply(PreparationRun run) {
         if (this == NONE) {
@@ -150,6 +147,17 @@ public enum LibrarySize {
         if (at != null) {
             throw new InputException(run.locate(at[0], at[1]) + ": " + t.get(at[0], at[1]) + " is negative "
                     + run.names(at[0], at[1]) + "; --library-size " + userName + " scales counts, which are >= 0");
+        }
+        for (int i = 0; i < t.samples(); i++) {
+            boolean empty = true;
+            for (int j = 0; j < t.features() && empty; j++) {
+                empty = t.get(i, j) == 0;
+            }
+            if (empty) {
+                throw new InputException(run.where.source() + ": sample '" + t.sample(i) + "' has no counts (every"
+                        + " value is 0), so --library-size " + userName + " cannot scale it; remove the sample from"
+                        + " the table");
+            }
         }
         double[] factor = factors(run);
         int p = t.features();
@@ -162,7 +170,8 @@ public enum LibrarySize {
         }
         run.librarySizes(new PreparationReport.SizeFactors(this, Arrays.asList(samples),
                 Arrays.stream(factor).boxed().toList()));
-        run.refuseNonFinite("--library-size " + userName);
+        run.refuseNonFinite("--library-size " + userName, "values this large are not read counts; drop"
+                + " --library-size");
     }
 
     @Override

@@ -87,8 +87,10 @@ public record Preparation(MissingPolicy missing, LibrarySize librarySize, boolea
         }
         long missingCells = raw.missingCount();
         var run = new PreparationRun(raw, where);
+        // whether the observed cells are counts is read before imputed medians (which can be halves) fill gaps
+        boolean counts = librarySize == LibrarySize.NONE && log2 && wholeNumbers(raw);
         missing.apply(run);
-        if (librarySize == LibrarySize.NONE && log2) {
+        if (counts) {
             noteCountTotals(run);
         }
         librarySize.apply(run);
@@ -102,15 +104,25 @@ public record Preparation(MissingPolicy missing, LibrarySize librarySize, boolea
         return new Prepared(run.table.toMatrix(), run.report(this, raw, missingCells));
     }
 
+    /** Whether every observed cell of {@code m} is a whole number {@code >= 0}, as counts are. */
+    private static boolean wholeNumbers(DataMatrix m) {
+        for (int i = 0; i < m.samples(); i++) {
+            for (int j = 0; j < m.features(); j++) {
+                double x = m.get(i, j);
+                if (!Double.isNaN(x) && (x < 0 || x != Math.rint(x) || Double.isInfinite(x))) {
+                    return false;
+                }
+            }
+        }
+        return true;
+    }
+
     /**
-     * Records the range of the samples' totals when every value is a whole number {@code >= 0} (counts), so that
-     * the outputs can point out uneven depths that {@code --library-size} would scale.
+     * Records the range of the samples' totals after the missing-value policy, for data whose observed values are
+     * counts, so that the outputs can point out uneven depths that {@code --library-size} would scale.
      */
     private static void noteCountTotals(PreparationRun run) {
         WorkingTable t = run.table;
-        if (t.first(x -> x < 0 || x != Math.rint(x) || Double.isInfinite(x), false) != null) {
-            return;
-        }
         int lo = 0;
         int hi = 0;
         double[] total = new double[t.samples()];

@@ -71,10 +71,15 @@ final class PreparationRun {
      * @throws InputException naming file, line and column of the cell
      */
     void refuseNonFinite(String step) {
+        refuseNonFinite(step, "rescale the feature (e.g. --log2) first");
+    }
+
+    /** As {@link #refuseNonFinite(String)}, with {@code remedy} as the advice. */
+    void refuseNonFinite(String step, String remedy) {
         int[] at = table.first(x -> !Double.isFinite(x), where.featureMajor());
         if (at != null) {
             throw new InputException(locate(at[0], at[1]) + ": " + step + " makes this value " + names(at[0], at[1])
-                    + " too large for a double; rescale the feature (e.g. --log2) first");
+                    + " too large for a double; " + remedy);
         }
     }
 

@@ -98,12 +98,24 @@ class LibrarySizeTest {
         assertTrue(e.getMessage().contains("--library-size total scales counts"), e.getMessage());
     }
 
-    @Test
-    void refusesASampleWithoutCountsUnderTotal() {
+    @ParameterizedTest
+    @ValueSource(strings = {"total", "median-ratio"})
+    void refusesASampleWithoutCountsNamingIt(String method) {
+        // under median-ratio the empty sample is the cause of "no feature above 0 everywhere", and is named as such
         DataMatrix m = new DataMatrix(List.of("s1", "s2"), List.of("a", "b"), new double[] {1, 2, 0, 0});
-        InputException e = assertThrows(InputException.class, () -> with(LibrarySize.TOTAL, false).apply(m));
-        assertEquals("input: sample 's2' has no counts (its values sum to 0), so --library-size total cannot scale"
-                + " it; drop the sample", e.getMessage());
+        InputException e = assertThrows(InputException.class, () -> with(LibrarySize.fromUserName(method), false)
+                .apply(m));
+        assertEquals("input: sample 's2' has no counts (every value is 0), so --library-size " + method + " cannot"
+                + " scale it; remove the sample from the table", e.getMessage());
+    }
+
+    @Test
+    void overflowAdvisesDroppingTheOptionNotLog2() {
+        // factors 2e308 / mean ~ 2 and 1 / mean: the small sample's 1e308 is divided by about 1/1e308 * ... -> inf
+        DataMatrix m = new DataMatrix(List.of("s1", "s2"), List.of("a", "b"), new double[] {1e308, 1e308, 1, 1});
+        InputException e = assertThrows(InputException.class, () -> with(LibrarySize.TOTAL, true).apply(m));
+        assertTrue(e.getMessage().endsWith("too large for a double; values this large are not read counts; drop"
+                + " --library-size"), e.getMessage());
     }
 
     @Test
