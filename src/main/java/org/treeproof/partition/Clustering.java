@@ -116,6 +116,38 @@ public record Clustering(int[] labels, int k) {
         return out;
     }
 
+    /**
+     * How far one of two clusterings of the same items nests within the other: over the items clustered in both,
+     * the share whose cluster in the finer of the two (more clusters; {@code this} on a tie) is counted in the
+     * coarser cluster that holds most of that finer cluster. 1 when every finer cluster lies within one coarser
+     * cluster; NaN when no item is clustered in both. A description, not a test.
+     *
+     * @throws IllegalArgumentException if the sizes differ
+     */
+    public double nesting(Clustering other) {
+        if (other.size() != size()) {
+            throw new IllegalArgumentException(size() + " items against " + other.size());
+        }
+        Clustering fine = other.k > k ? other : this;
+        Clustering coarse = fine == this ? other : this;
+        int[][] both = new int[fine.k][coarse.k];
+        int n = 0;
+        for (int i = 0; i < size(); i++) {
+            if (!fine.isOutlier(i) && !coarse.isOutlier(i)) {
+                both[fine.labels[i]][coarse.labels[i]]++;
+                n++;
+            }
+        }
+        if (n == 0) {
+            return Double.NaN;
+        }
+        long held = 0;
+        for (int[] row : both) {
+            held += java.util.Arrays.stream(row).max().orElse(0);
+        }
+        return (double) held / n;
+    }
+
     /** Cluster sizes, outliers not counted. */
     public int[] clusterSizes() {
         int[] s = new int[k];

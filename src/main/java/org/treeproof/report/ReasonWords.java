@@ -295,9 +295,18 @@ public final class ReasonWords implements Reason.Visitor<String> {
     @Override
     public String otherLinkages(Reason.OtherLinkages r) {
         var parts = new ArrayList<String>();
-        for (Recommendation.LinkageSummary s : r.others()) {
-            parts.add(s.verdict() == Verdict.UNSUPPORTED ? f("%s finds no convincing k", Names.linkage(s.linkage()))
-                    : f("%s is %s at k = %d", Names.linkage(s.linkage()), s.verdict().id(), s.k()));
+        for (int i = 0; i < r.others().size(); i++) {
+            Recommendation.LinkageSummary s = r.others().get(i);
+            double nest = r.nesting().get(i);
+            String part = s.verdict() == Verdict.UNSUPPORTED ? f("%s finds no convincing k", Names.linkage(s.linkage()))
+                    : f("%s is %s at k = %d", Names.linkage(s.linkage()), s.verdict().id(), s.k());
+            if (!Double.isNaN(nest)) {
+                // floored, so that "100%" means every sample
+                part += f(" (%s; the finer solution's clusters fall within single clusters of the coarser for %d%% "
+                        + "of the samples)", s.k() > r.recommendedK() ? "finer" : "coarser",
+                        nest >= 1 ? 100 : (int) Math.floor(100 * nest));
+            }
+            parts.add(part);
         }
         return f("Among the linkages, %s gives the recommended solution; %s.", Names.linkage(r.recommended()),
                 String.join("; ", parts));

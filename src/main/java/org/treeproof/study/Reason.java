@@ -207,10 +207,24 @@ public sealed interface Reason {
         }
     }
 
-    /** The other linkages' own best solutions. */
-    record OtherLinkages(Linkage recommended, List<Recommendation.LinkageSummary> others) implements Reason {
+    /**
+     * What the other linkages choose.
+     *
+     * @param recommended  the recommended linkage
+     * @param recommendedK the recommended k
+     * @param others      each other linkage's own choice
+     * @param nesting     per other linkage, {@link org.treeproof.partition.Clustering#nesting} of its choice with the
+     *                    recommended solution; NaN when it finds no convincing k or chooses the same k
+     */
+    record OtherLinkages(Linkage recommended, int recommendedK, List<Recommendation.LinkageSummary> others,
+            List<Double> nesting)
+            implements Reason {
         public OtherLinkages {
             others = List.copyOf(others);
+            nesting = List.copyOf(nesting);
+            if (nesting.size() != others.size()) {
+                throw new IllegalArgumentException(others.size() + " linkages, " + nesting.size() + " nestings");
+            }
         }
 
         @Override

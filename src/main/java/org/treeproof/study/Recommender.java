@@ -148,8 +148,17 @@ public final class Recommender {
             reasons.add(new Reason.Inversions(le.linkage(), e.k()));
         }
         if (all.size() > 1) {
-            reasons.add(new Reason.OtherLinkages(le.linkage(),
-                    summaries.stream().filter(s -> s.linkage() != le.linkage()).toList()));
+            var others = new ArrayList<Recommendation.LinkageSummary>();
+            var nesting = new ArrayList<Double>();
+            for (int l = 0; l < all.size(); l++) {
+                if (l != winnerLinkage) {
+                    others.add(summaries.get(l));
+                    Assessment a = perLinkage[l];
+                    nesting.add(a == null || a.k() == winner.k() ? Double.NaN
+                            : all.get(l).at(a.k()).clustering().nesting(e.clustering()));
+                }
+            }
+            reasons.add(new Reason.OtherLinkages(le.linkage(), winner.k(), others, nesting));
         }
         return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict(), levels, reasons, criteria,
                 ClusterEvidence.sizedBy(e.clusters(), solution), flaggedSamples(e, solution), summaries, agreement, rule, assessments, test, solution,

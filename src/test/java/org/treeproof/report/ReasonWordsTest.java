@@ -104,4 +104,25 @@ class ReasonWordsTest {
         org.junit.jupiter.api.Assertions.assertTrue(text.endsWith("At least 19 null data sets are needed "
                 + "(--null-sets)."), text);
     }
+
+    @Test
+    void otherLinkagesSayHowTheirSolutionsNestWithTheRecommendedOne() {
+        var words = new ReasonWords(DecisionRule.DEFAULT);
+        var average = new org.treeproof.study.Recommendation.LinkageSummary(Linkage.AVERAGE, 0.8, 5, Verdict.SUPPORTED,
+                0.9, 0.05, 0.3, 0.8);
+        var complete = new org.treeproof.study.Recommendation.LinkageSummary(Linkage.COMPLETE, 0.7, 3,
+                Verdict.SUPPORTED, 0.9, 0.05, 0.3, 0.8);
+        var single = new org.treeproof.study.Recommendation.LinkageSummary(Linkage.SINGLE, 0.6, 1, Verdict.UNSUPPORTED,
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+        // 0.996 is floored to 99%: "100%" is kept for every sample
+        String text = words.otherLinkages(new Reason.OtherLinkages(Linkage.WARD, 3, List.of(average, complete, single),
+                List.of(0.996, Double.NaN, Double.NaN)));
+        org.junit.jupiter.api.Assertions.assertEquals("Among the linkages, Ward gives the recommended solution; average "
+                + "is supported at k = 5 (finer; the finer solution's clusters fall within single clusters of the "
+                + "coarser for 99% of the samples); complete is supported at k = 3; single finds no convincing k.", text);
+        String coarser = words.otherLinkages(new Reason.OtherLinkages(Linkage.WARD, 6, List.of(average),
+                List.of(1.0)));
+        org.junit.jupiter.api.Assertions.assertTrue(coarser.contains("at k = 5 (coarser; the finer solution's clusters "
+                + "fall within single clusters of the coarser for 100% of the samples)"), coarser);
+    }
 }
