@@ -26,8 +26,8 @@ final class ExplainOptions {
     List<String> covariateKinds;
 
     @Option(names = "--sensitivity", description = "Rerun the recommended linkage at the recommended k under the other "
-            + "scalings, log2 on/off, the other --library-size methods when one was given, half and double "
-            + "--top-variable, and the other valid dissimilarities; writes sensitivity.csv.")
+            + "scalings, log2 on/off, the other --library-size methods (when one was given, or log2 is taken of "
+            + "counts), half and double --top-variable, and the other valid dissimilarities; writes sensitivity.csv.")
     boolean sensitivity;
 
     /** The test asked for; Wilcoxon by default. */

@@ -124,6 +124,22 @@ public enum LibrarySize {
         throw new InputException("unknown library-size method '" + name + "'; use one of " + names());
     }
 
+    /**
+     * Whether every observed (not missing) cell of {@code m} is a whole number {@code >= 0}, as counts are: the data
+     * that library-size scaling is for, and that the outputs and {@code --sensitivity} offer it to.
+     */
+    public static boolean countsLike(DataMatrix m) {
+        for (int i = 0; i < m.samples(); i++) {
+            for (int j = 0; j < m.features(); j++) {
+                double x = m.get(i, j);
+                if (!Double.isNaN(x) && (x < 0 || x != Math.rint(x) || Double.isInfinite(x))) {
+                    return false;
+                }
+            }
+        }
+        return true;
+    }
+
     /** The user names, comma-separated, for help and messages. */
     public static String names() {
         return Arrays.stream(values()).map(LibrarySize::userName).collect(Collectors.joining(", "));

@@ -88,7 +88,7 @@ public record Preparation(MissingPolicy missing, LibrarySize librarySize, boolea
         long missingCells = raw.missingCount();
         var run = new PreparationRun(raw, where);
         // whether the observed cells are counts is read before imputed medians (which can be halves) fill gaps
-        boolean counts = librarySize == LibrarySize.NONE && log2 && wholeNumbers(raw);
+        boolean counts = librarySize == LibrarySize.NONE && log2 && LibrarySize.countsLike(raw);
         missing.apply(run);
         if (counts) {
             noteCountTotals(run);
@@ -102,19 +102,6 @@ public record Preparation(MissingPolicy missing, LibrarySize librarySize, boolea
         }
         scale.apply(run);
         return new Prepared(run.table.toMatrix(), run.report(this, raw, missingCells));
-    }
-
-    /** Whether every observed cell of {@code m} is a whole number {@code >= 0}, as counts are. */
-    private static boolean wholeNumbers(DataMatrix m) {
-        for (int i = 0; i < m.samples(); i++) {
-            for (int j = 0; j < m.features(); j++) {
-                double x = m.get(i, j);
-                if (!Double.isNaN(x) && (x < 0 || x != Math.rint(x) || Double.isInfinite(x))) {
-                    return false;
-                }
-            }
-        }
-        return true;
     }
 
     /**

@@ -66,8 +66,8 @@ public final class Sensitivity {
     }
 
     /**
-     * The alternatives, in a fixed order: scalings, log2, the other library-size methods (when one was chosen),
-     * numbers of features, dissimilarities.
+     * The alternatives, in a fixed order: scalings, log2, the other library-size methods (when one was chosen, or
+     * when none was and log2 is taken of counts), numbers of features, dissimilarities.
      */
     List<Alternative> alternatives() {
         var out = new ArrayList<Alternative>();
@@ -81,7 +81,8 @@ public final class Sensitivity {
             }
             out.add(new Alternative("log2: " + (chosen.log2() ? "off" : "on"), "log2", with(chosen, chosen.scale(),
                     !chosen.log2(), chosen.topVariable()), metric));
-            if (chosen.librarySize() != LibrarySize.NONE) {
+            // the other methods when one was chosen; both when none was but the data are counts taken to log2
+            if (chosen.librarySize() != LibrarySize.NONE || chosen.log2() && LibrarySize.countsLike(raw)) {
                 for (LibrarySize l : LibrarySize.values()) {
                     if (l != chosen.librarySize()) {
                         out.add(new Alternative("library-size: " + l.userName(), "library-size", new Preparation(

@@ -273,9 +273,23 @@ class ExplainCoreTest {
                 .forEach(r -> assertEquals("median-ratio", r.librarySize(), r.toString()));
         // total-count scaling finds the same groups here (the groups move only a fifth of the features)
         assertEquals(3, library.get(1).surviving(0.75), library.get(1).toString());
-        // without any chosen method, none is tried
+        // without a chosen method: none is tried without log2; with log2 of these counts both are
         SensitivityResult plain = Sensitivity.of(matrix(x), Preparation.defaults(), Metric.EUCLIDEAN, Linkage.WARD,
                 planted, ids, 0.75, 1).compute();
         assertTrue(plain.rows().stream().noneMatch(r -> r.change().equals("library-size")));
+        var logged = new Preparation(org.treeproof.data.MissingPolicy.ERROR, true, org.treeproof.data.Scale.ZSCORE, 0);
+        SensitivityResult offered = Sensitivity.of(matrix(x), logged, Metric.EUCLIDEAN, Linkage.WARD, planted, ids,
+                0.75, 1).compute();
+        assertEquals(List.of("library-size: total", "library-size: median-ratio"), offered.rows().stream()
+                .filter(r -> r.change().equals("library-size")).map(SensitivityResult.Row::name).toList());
+        // values that are not whole numbers are no counts: nothing is offered
+        double[][] y = planted(14, 0);
+        for (double[] row : y) {
+            for (int j = 0; j < row.length; j++) {
+                row[j] = 50.5 + row[j];
+            }
+        }
+        assertTrue(Sensitivity.of(matrix(y), logged, Metric.EUCLIDEAN, Linkage.WARD, planted, ids, 0.75, 1).compute()
+                .rows().stream().noneMatch(r -> r.change().equals("library-size")));
     }
 }
