@@ -12,7 +12,7 @@ import java.util.stream.Collectors;
  */
 public enum LibrarySize {
     /** The counts as they are. */
-    NONE("none") {
+    NONE("none", "Left the counts as they are.") {
         @Override
         double[] factors(PreparationRun run) {
             return null;
@@ -27,7 +27,8 @@ public enum LibrarySize {
      * total is from memory of that description). A few features with very high counts in some samples move the
      * totals, which the median-ratio method resists.
      */
-    TOTAL("total") {
+    TOTAL("total", "Divided each sample's counts by its total relative to the mean total of the samples"
+            + " (total-count scaling, Dillies et al., 2013; %s).") {
         @Override
         double[] factors(PreparationRun run) {
             WorkingTable t = run.table;
@@ -57,7 +58,8 @@ public enum LibrarySize {
      * take part (a zero makes the geometric mean 0). Being a median, it is not moved by the few features that
      * differ between groups, as a total is.
      */
-    MEDIAN_RATIO("median-ratio") {
+    MEDIAN_RATIO("median-ratio", "Divided each sample's counts by its size factor from the median-ratio method"
+            + " (Anders & Huber, 2010; %s).") {
         @Override
         double[] factors(PreparationRun run) {
             WorkingTable t = run.table;
@@ -99,9 +101,16 @@ public enum LibrarySize {
     };
 
     private final String userName;
+    private final String sentence;
 
-    LibrarySize(String userName) {
+    LibrarySize(String userName, String sentence) {
         this.userName = userName;
+        this.sentence = sentence;
+    }
+
+    /** What this method did, as a sentence for reports, with {@code factors} (the range of the factors) in it. */
+    String sentence(String factors) {
+        return String.format(Locale.ROOT, sentence, factors);
     }
 
     /** The name users type, e.g. {@code median-ratio}. */

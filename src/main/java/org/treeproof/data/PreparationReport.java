@@ -149,7 +149,9 @@ public record PreparationReport(Preparation settings, int inputSamples, int inpu
      */
     public record SizeFactors(LibrarySize method, List<String> samples, List<Double> factors) {
         public SizeFactors {
-            Objects.requireNonNull(method, "method");
+            if (Objects.requireNonNull(method, "method") == LibrarySize.NONE) {
+                throw new IllegalArgumentException("no size factors without library-size scaling");
+            }
             samples = List.copyOf(samples);
             factors = List.copyOf(factors);
             if (samples.size() != factors.size() || samples.isEmpty()) {
@@ -157,37 +159,16 @@ public record PreparationReport(Preparation settings, int inputSamples, int inpu
             }
         }
 
-        /** The index of the smallest factor (the first on ties). */
-        int smallest() {
-            int at = 0;
-            for (int i = 1; i < factors.size(); i++) {
-                at = factors.get(i) < factors.get(at) ? i : at;
-            }
-            return at;
-        }
-
-        /** The index of the largest factor (the first on ties). */
-        int largest() {
-            int at = 0;
-            for (int i = 1; i < factors.size(); i++) {
-                at = factors.get(i) > factors.get(at) ? i : at;
-            }
-            return at;
-        }
-
-        /** What was done, as a sentence for reports. */
+        /** What was done, as a sentence for reports: the method's, with the range of the factors. */
         String sentence() {
-            int lo = smallest();
-            int hi = largest();
-            String range = String.format(Locale.ROOT, "size factors from %.3g ('%s') to %.3g ('%s')",
-                    factors.get(lo), samples.get(lo), factors.get(hi), samples.get(hi));
-            return switch (method) {
-                case TOTAL -> "Divided each sample's counts by its total relative to the mean total of the samples"
-                        + " (total-count scaling, Dillies et al., 2013; " + range + ").";
-                case MEDIAN_RATIO -> "Divided each sample's counts by its size factor from the median-ratio method"
-                        + " (Anders & Huber, 2010; " + range + ").";
-                case NONE -> throw new IllegalStateException("no size factors without library-size scaling");
-            };
+            int lo = 0;
+            int hi = 0;
+            for (int i = 1; i < factors.size(); i++) {
+                lo = factors.get(i) < factors.get(lo) ? i : lo;
+                hi = factors.get(i) > factors.get(hi) ? i : hi;
+            }
+            return method.sentence(String.format(Locale.ROOT, "size factors from %.3g ('%s') to %.3g ('%s')",
+                    factors.get(lo), samples.get(lo), factors.get(hi), samples.get(hi)));
         }
     }
 
