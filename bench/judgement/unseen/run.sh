@@ -4,12 +4,12 @@
 # (outliers count as one more cluster; planted far samples are label -1). Options a set needs (gen.py's
 # name.opts, e.g. --log2) are added.
 # Usage: bench/judgement/unseen/run.sh [JAR]   (default target/treeproof.jar; ONLY=REGEX runs the matching sets;
-# EXTRA="OPTIONS" adds options to every set's run)
+# EXTRA="OPTIONS" adds options to every set's run;
+# KEEP=DIR keeps the data and every study's output in DIR)
 set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
 jar="${1:-$here/../../../target/treeproof.jar}"
-work="$(mktemp -d)"
-trap 'rm -rf "$work"' EXIT
+if [ -n "${KEEP:-}" ]; then work="$KEEP"; mkdir -p "$work"; else work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT; fi
 python3 "$here/gen.py" "$work/data"
 printf '%-26s %-11s %3s %-9s %4s %6s %8s %6s\n' case verdict k linkage out stat pFitted ARI
 for f in "$work"/data/*.csv; do

@@ -3,12 +3,12 @@
 # was seen) and prints one line per set: verdict, k, linkage, cluster sizes, outliers, the structure test, the ARI
 # with the planted groups (--labels) and the levels. Options a set needs (NAME.opts) are added.
 # Usage: bench/judgement/unseen/hard/run.sh [JAR]   (default target/treeproof.jar; ONLY=REGEX runs matching sets;
-# EXTRA="OPTIONS" adds options to every set's run)
+# EXTRA="OPTIONS" adds options to every set's run;
+# KEEP=DIR keeps the data and every study's output in DIR)
 set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
 jar="${1:-$here/../../../../target/treeproof.jar}"
-work="$(mktemp -d)"
-trap 'rm -rf "$work"' EXIT
+if [ -n "${KEEP:-}" ]; then work="$KEEP"; mkdir -p "$work"; else work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT; fi
 python3 "$here/gen.py" "$work/data" >/dev/null
 for f in "$work"/data/*.csv; do
   case "$f" in *.truth.csv) continue ;; esac
