@@ -55,7 +55,16 @@ final class Numbers {
 
     /** A share as a whole percentage ("87%"). */
     static String percent(double share) {
-        return Double.isFinite(share) ? fixed(100 * share, 0) + "%" : MISSING;
+        if (!Double.isFinite(share)) {
+            return MISSING;
+        }
+        String whole = fixed(100 * share, 0);
+        // a share strictly between 0 and 1 never reads as none or all: 199 of 200 is "99.5%", not "100%"
+        if (share > 0 && share < 1 && (whole.equals("0") || whole.equals("100"))) {
+            String tenth = fixed(100 * share, 1);
+            return tenth.equals("0.0") ? "<0.1%" : tenth.equals("100.0") ? ">99.9%" : tenth + "%";
+        }
+        return whole + "%";
     }
 
     /** A setting as the user would type it: the shortest plain decimal ("0.8", "1", "0.05"). */

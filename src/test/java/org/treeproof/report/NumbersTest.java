@@ -50,6 +50,15 @@ class NumbersTest {
         assertEquals("100", Numbers.plain(100.0));
         assertEquals("0.05", Numbers.plain(0.05));
         assertEquals("75%", Numbers.percent(0.75));
+        // a share strictly between 0 and 1 never reads as none or all: 199 of 200 replicates is not "100%"
+        assertEquals("1%", Numbers.percent(1 / 200.0));
+        assertEquals("0.2%", Numbers.percent(1 / 500.0));
+        assertEquals("99.5%", Numbers.percent(199 / 200.0));
+        assertEquals("<0.1%", Numbers.percent(1 / 5000.0));
+        assertEquals(">99.9%", Numbers.percent(4999 / 5000.0));
+        assertEquals("100%", Numbers.percent(1));
+        assertEquals("0%", Numbers.percent(0));
+        assertEquals("1%", Numbers.percent(0.006));
         assertEquals("12.3 s", Numbers.seconds(12.34));
     }
 }
