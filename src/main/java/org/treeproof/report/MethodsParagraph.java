@@ -163,6 +163,10 @@ public final class MethodsParagraph {
                     + "data sets %s. For each linkage and k, the excess "
                     + "over the null was the mean ARI and the average silhouette, each standardised by the null sets' "
                     + "mean and standard deviation at that linkage and k, added together; it ordered the solutions. "
+                    + "The mean ARI's difference from the null's was divided by the standard deviation of the "
+                    + "difference between two means of %d replicates, one from the data and one from a null set, "
+                    + "so that the spread of the data's own replicates counted as well as the null's (a Welch-type "
+                    + "standardised difference, %s). "
                     + "For testing, the same sum was formed with the observed solution (its first %d replicates, as "
                     + "many as each null set had) and the null sets that had a cut at that linkage and k "
                     + "standardised alike, by their pooled mean and standard deviation. A solution's p-value was "
@@ -171,7 +175,8 @@ public final class MethodsParagraph {
                     + "all linkages and k reached the solution's. The largest observed statistic against the null "
                     + "sets' largest is the test of any cluster structure; beside its Monte Carlo p-value a p-value "
                     + "from a normal distribution fitted to the null sets' largest is reported.", s.nullReplicates(),
-                    s.nullSets(), nullData, s.nullReplicates(), cite(c, Reference.WESTFALL_YOUNG), s.nullSets(),
+                    s.nullSets(), nullData, s.nullReplicates(), cite(c, Reference.WELCH), s.nullReplicates(),
+                    cite(c, Reference.WESTFALL_YOUNG), s.nullSets(),
                     cite(c, Reference.HOPE)));
         } else {
             out.add("Stability was not calibrated against null data.");

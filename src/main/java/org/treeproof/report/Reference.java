@@ -77,6 +77,10 @@ public record Reference(String cite, String entry, String doi) {
             "Gómez, E., Gómez-Villegas, M. A. & Marín, J. M. (1998). A multivariate generalization of the power "
                     + "exponential family of distributions. Communications in Statistics - Theory and Methods, 27, "
                     + "589–600.", "10.1080/03610929808832115");
+    /** Details from memory. */
+    static final Reference WELCH = new Reference("Welch, 1947",
+            "Welch, B. L. (1947). The generalization of 'Student's' problem when several different population "
+                    + "variances are involved. Biometrika, 34, 28–35.", "10.1093/biomet/34.1-2.28");
     static final Reference WESTFALL_YOUNG = new Reference("Westfall & Young, 1993",
             "Westfall, P. H. & Young, S. S. (1993). Resampling-Based Multiple Testing: Examples and Methods for "
                     + "p-Value Adjustment. Wiley, New York. ISBN 978-0-471-55761-6.", "");

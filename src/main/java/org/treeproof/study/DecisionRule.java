@@ -61,7 +61,11 @@ import org.treeproof.score.JaccardStability;
  *       narrowness of the null as much as by strength (on five planted groups in ten features, Ward's k = 3 led
  *       k = 5 while all five groups were stable and supported; bench/judgement/README.md). Between linkages the
  *       excess still decides: taking the finest supported solution on any linkage let one linkage's marginally
- *       stable split of a real group win (imbalanced groups, draw 0).</li>
+ *       stable split of a real group win (imbalanced groups, draw 0). The excess divides the ARI's difference by
+ *       the spread of the data's replicates as well as the null's ({@link NullCalibration}), so a linkage whose
+ *       null splits are all near ARI 0 no longer lifts a coarser, scattered solution above another linkage's
+ *       finer, well reproduced one (four unequal groups in wide data on suite draw 2, and RELIABILITY.md's wide
+ *       expression-like case, were recommended as the coarser before).</li>
  *   <li>When no solution is better than {@code unsupported} the verdict is {@code unsupported} with k = 1: the
  *       data hold no convincing cluster structure (beside any samples the tree sets aside as outliers).</li>
  *   <li>Levels: the k of the recommended linkage that are {@code supported} and persist over a range of cut

@@ -15,7 +15,18 @@ import org.treeproof.score.ReplicateSummary;
  * heavy-tailed as the data's bulk, so heavy tails alone do not beat it.
  *
  * <p><b>Two standardisations.</b> The <i>excess</i>, which orders solutions, standardises the observed mean ARI
- * and silhouette by the null sets' mean and SD at the same linkage and k. The <i>test statistic</i> standardises
+ * and silhouette by the null sets' mean and spread at the same linkage and k. The ARI's difference is divided by
+ * the SD of the difference between two means of {@code replicatesPerSet} replicates, one from the data and one
+ * from a null set: {@code sqrt(sd_null^2 + sd_obs^2 / replicatesPerSet)}, where {@code sd_null} is the SD of the
+ * null sets' means (each of that many replicates) and {@code sd_obs} the SD of the observed replicates' ARI. So
+ * the data's mean is compared like with like, as in the test statistic below, and a solution whose replicates
+ * scatter widely is not lifted by a null that happens to be narrow (a Welch-type standardised difference: B. L.
+ * Welch, "The generalization of 'Student's' problem when several different population variances are involved",
+ * Biometrika 34 (1947) 28-35, doi:10.1093/biomet/34.1-2.28). Dividing by {@code sd_null} alone ranked a linkage
+ * whose null splits are all near ARI 0 (complete linkage at k = 2, null SD 0.009) above Ward's better reproduced
+ * finer solution in wide data (RELIABILITY.md, "Linkages ranked by a z-score that a narrow null inflates").
+ * The silhouette is one value of the data, so its difference is divided by the null sets' SD. The <i>test
+ * statistic</i> standardises
  * the observed value (from as many replicates as each null set has) and each null set's value alike, by the
  * mean and SD of all of them that have a cut there, so that under the null the data and the null sets are
  * exchangeable and the Monte Carlo p-value holds (Hope 1968). Standardising the null sets among themselves
@@ -44,6 +55,7 @@ final class NullCalibration {
      * @param obsAriTest  {@code [l][k-2]} observed mean ARI over the first {@code replicatesPerSet} replicates
      *                    (NaN where the cut does not exist)
      * @param obsAri      {@code [l][k-2]} observed mean ARI over all replicates
+     * @param obsAriSd    {@code [l][k-2]} SD of the observed replicates' ARI (NaN where the cut does not exist)
      * @param obsSil      {@code [l][k-2]} observed average silhouette
      * @param nullAri     {@code [l][k-2][set]} null sets' mean ARI (NaN where the null set has no such cut)
      * @param nullSil     {@code [l][k-2][set]} null sets' silhouette
@@ -52,7 +64,7 @@ final class NullCalibration {
     record Result(NullStability[][] cells, StructureTest test) {
     }
 
-    static Result of(double[][] obsAriTest, double[][] obsAri, double[][] obsSil, double[][][] nullAri,
+    static Result of(double[][] obsAriTest, double[][] obsAri, double[][] obsAriSd, double[][] obsSil, double[][][] nullAri,
             double[][][] nullSil, double[][][] nullPac, int replicatesPerSet) {
         int links = obsAri.length;
         int ks = obsAri[0].length;
@@ -104,7 +116,8 @@ final class NullCalibration {
                 ReplicateSummary as = ReplicateSummary.of(a);
                 ReplicateSummary ss = ReplicateSummary.of(s);
                 double full = finite(nullAri[l][k]).length == 0 ? Double.NaN : excess(obsAri[l][k], obsSil[l][k],
-                        ariMean[l][k], ariSd[l][k], silMean[l][k], silSd[l][k]);
+                        ariMean[l][k], ariScale(ariSd[l][k], obsAriSd[l][k], replicatesPerSet), silMean[l][k],
+                        silSd[l][k]);
                 cells[l][k] = new NullStability(sets, replicatesPerSet, ariMean[l][k], ariSd[l][k], as.low(),
                         as.high(), mean(finite(nullPac[l][k])), silMean[l][k], silSd[l][k], ss.low(), ss.high(), full,
                         testExcess[l][k], monteCarlo(testExcess[l][k], nullMax));
@@ -123,9 +136,26 @@ final class NullCalibration {
         return new Result(cells, test);
     }
 
-    /** The excess of one observation over the null at a cell; NaN when the observation is NaN. */
-    static double excess(double ari, double sil, double ariMean, double ariSd, double silMean, double silSd) {
-        return (ari - ariMean) / ariSd + (sil - silMean) / silSd;
+    /**
+     * The excess of one observation over the null at a cell; NaN when the observation is NaN.
+     *
+     * @param ariScale what the ARI's difference is divided by ({@link #ariScale})
+     */
+    static double excess(double ari, double sil, double ariMean, double ariScale, double silMean, double silSd) {
+        return (ari - ariMean) / ariScale + (sil - silMean) / silSd;
+    }
+
+    /**
+     * The SD of the difference between the data's and a null set's mean ARI, each over {@code replicatesPerSet}
+     * replicates: {@code sqrt(nullSd^2 + observedSd^2 / replicatesPerSet)}, at least {@link #SD_FLOOR} (see the
+     * class comment). An observed SD that is not defined (fewer than two replicates) counts as 0.
+     *
+     * @param nullSd     SD over the null sets of their mean ARI
+     * @param observedSd SD of the data's replicates' ARI
+     */
+    static double ariScale(double nullSd, double observedSd, int replicatesPerSet) {
+        double obs = Double.isNaN(observedSd) ? 0 : observedSd * observedSd / replicatesPerSet;
+        return Math.max(SD_FLOOR, Math.sqrt(nullSd * nullSd + obs));
     }
 
     /** Hope's Monte Carlo p-value of {@code observed} among {@code nulls} (NaN observed: 1). */

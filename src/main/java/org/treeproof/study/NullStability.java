@@ -5,8 +5,11 @@ package org.treeproof.study;
  * same way ({@link StudyRunner}; the null distribution is described in {@link NullCalibration}).
  *
  * <p>The solution's <i>excess</i> over the null is its null-standardised stability plus its null-standardised
- * separation: {@code (ARI - mean_null(ARI)) / sd_null(ARI) + (silhouette - mean_null(sil)) / sd_null(sil)},
- * each mean and SD taken over the null sets at the same linkage and k. So solutions at different k and on
+ * separation: {@code (ARI - mean_null(ARI)) / sqrt(sd_null(ARI)^2 + sd_obs(ARI)^2 / m)
+ * + (silhouette - mean_null(sil)) / sd_null(sil)}, each mean and SD taken over the null sets at the same linkage and
+ * k, {@code sd_obs(ARI)} the SD of the data's replicates' ARI and {@code m} the replicates per null set (so the
+ * ARI's difference is measured in SDs of the difference between two means of {@code m} replicates, one from the
+ * data and one from a null set; {@link NullCalibration}). So solutions at different k and on
  * different linkages are each measured against what clustering noise gives at that k and linkage, and raw
  * silhouette, which falls with k and with the number of features whatever the structure, never compares two k.
  *

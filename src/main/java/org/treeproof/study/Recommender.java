@@ -309,7 +309,8 @@ public final class Recommender {
                 if (byFineness) {
                     v = ari[t][r] >= rule.stableJaccard() ? e.k() : Double.NEGATIVE_INFINITY;
                 } else {
-                    v = NullCalibration.excess(ari[t][r], e.silhouette(), ns.ariMean(), ns.ariSD(),
+                    v = NullCalibration.excess(ari[t][r], e.silhouette(), ns.ariMean(),
+                            NullCalibration.ariScale(ns.ariSD(), e.stability().ari().sd(), ns.replicatesPerSet()),
                             ns.silhouetteMean(), ns.silhouetteSD());
                 }
                 if (v > bestValue) {

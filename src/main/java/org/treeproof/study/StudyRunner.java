@@ -123,14 +123,16 @@ public final class StudyRunner {
         int ks = settings.maxK() - 1;
         double[][] test = new double[links][ks];
         double[][] all = new double[links][ks];
+        double[][] sd = new double[links][ks];
         for (int l = 0; l < links; l++) {
             for (int k = 2; k <= settings.maxK(); k++) {
                 double[] ari = tally.ari(l, k);
                 all[l][k - 2] = mean(ari, ari.length);
+                sd[l][k - 2] = Double.isNaN(all[l][k - 2]) ? Double.NaN : ReplicateSummary.of(ari).sd();
                 test[l][k - 2] = mean(ari, Math.min(ari.length, settings.nullReplicates()));
             }
         }
-        return NullCalibration.of(test, all, silhouettes, nulls.meanAri(), nulls.silhouette(), nulls.pac(),
+        return NullCalibration.of(test, all, sd, silhouettes, nulls.meanAri(), nulls.silhouette(), nulls.pac(),
                 settings.nullReplicates());
     }
 
