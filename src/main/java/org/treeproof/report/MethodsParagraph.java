@@ -216,10 +216,11 @@ public final class MethodsParagraph {
                     + "preferred, then the larger excess over the null, the higher smallest cluster Jaccard and the "
                     + "higher cophenetic correlation, leaving out supported solutions that existed over less than half "
                     + "the relative range of cut heights of the linkage's longest-lasting one (passing states of the "
-                    + "tree). The first solution so "
-                    + "ordered gave the linkage; when it was supported, the finest supported cut of that linkage's "
-                    + "tree was recommended, its coarser supported cuts reported as levels of nested structure. When "
-                    + "no solution was better than unsupported, the data were treated as one group (k = 1).",
+                    + "tree). When the first solution so ordered was supported, the finest supported cut of any "
+                    + "linkage's tree was recommended (among equally fine cuts, that of the linkage whose best "
+                    + "solution came first), its linkage's coarser supported cuts reported as levels of nested "
+                    + "structure; otherwise the first solution was recommended. When no solution was better than "
+                    + "unsupported, the data were treated as one group (k = 1).",
                     Numbers.plain(r.alpha()),
                     cite(c, Reference.ROUSSEEUW), model.hasData() ? ", every cluster was set apart from its nearest "
                             + "cluster by a dip in density (described below)" : "", Numbers.plain(r.stableJaccard()),

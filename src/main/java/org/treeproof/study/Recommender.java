@@ -70,14 +70,7 @@ public final class Recommender {
             }
             perLinkage[l] = strongest[l] != null && strongest[l].verdict() != Verdict.UNSUPPORTED ? strongest[l] : null;
         }
-        Assessment winner = null;
-        int winnerLinkage = -1;
-        for (int l = 0; l < all.size(); l++) {
-            if (perLinkage[l] != null && (winner == null || rule.order().compare(perLinkage[l], winner) < 0)) {
-                winner = perLinkage[l];
-                winnerLinkage = l;
-            }
-        }
+        Assessment[] best = perLinkage.clone();
         // each linkage's own choice: its strongest, or, when that is supported, its finest level (rule item 3)
         for (int l = 0; l < all.size(); l++) {
             if (perLinkage[l] != null && perLinkage[l].verdict() == Verdict.SUPPORTED) {
@@ -88,9 +81,8 @@ public final class Recommender {
                         .findFirst().orElseThrow();
             }
         }
-        if (winner != null) {
-            winner = perLinkage[winnerLinkage];
-        }
+        int winnerLinkage = recommendedLinkage(best, perLinkage, rule.order());
+        Assessment winner = winnerLinkage < 0 ? null : perLinkage[winnerLinkage];
         var summaries = new ArrayList<Recommendation.LinkageSummary>();
         for (int l = 0; l < all.size(); l++) {
             LinkageEvidence le = all.get(l);
@@ -163,6 +155,38 @@ public final class Recommender {
         return new Recommendation(le.linkage(), e.k(), e.cutHeight(), winner.verdict(), levels, reasons, criteria,
                 ClusterEvidence.sizedBy(e.clusters(), solution), flaggedSamples(e, solution), summaries, agreement, rule, assessments, test, solution,
                 evidence.minClusterSize(), votes);
+    }
+
+    /**
+     * The linkage whose own choice is recommended (item 3 of {@link DecisionRule}): the linkage whose best solution
+     * comes first in the rule's order; but when that is supported, the linkage whose finest supported level is the
+     * finest of all (among equally fine ones, the one whose best solution comes first in the order). The finest
+     * partition into clusters that are each stable, cohesive and separated and that beats the null is the most
+     * detailed claim the evidence carries, whichever tree holds it.
+     *
+     * @param best   each linkage's first solution in the rule's order (passing states left out); null when it is
+     *               unsupported
+     * @param choice each linkage's own choice: its best solution or, when that is supported, its finest level
+     * @return the index of the linkage, or -1 when no linkage has a solution better than unsupported
+     */
+    static int recommendedLinkage(Assessment[] best, Assessment[] choice, java.util.Comparator<Assessment> order) {
+        int w = -1;
+        for (int l = 0; l < best.length; l++) {
+            if (best[l] != null && (w < 0 || order.compare(best[l], best[w]) < 0)) {
+                w = l;
+            }
+        }
+        if (w < 0 || best[w].verdict() != Verdict.SUPPORTED) {
+            return w;
+        }
+        int finest = w;
+        for (int l = 0; l < best.length; l++) {
+            if (best[l] != null && best[l].verdict() == Verdict.SUPPORTED && (choice[l].k() > choice[finest].k()
+                    || choice[l].k() == choice[finest].k() && order.compare(best[l], best[finest]) < 0)) {
+                finest = l;
+            }
+        }
+        return finest;
     }
 
     /**
