@@ -67,7 +67,7 @@ import org.treeproof.score.JaccardStability;
  *       the planted groups (bench/judgement/README.md). Taking the finest level of any linkage was rejected once
  *       (2 December 2026) because average linkage's marginally stable split of a real group won (imbalanced groups,
  *       draw 0); with the conditions added since (the separation test among them) that split no longer competes,
- *       and on the 321 sets with known answers (suite draws 0-6, 90 unseen, 21 hard) no linkage's finer supported
+ *       and in the 377 studies with known answers (suite draws 0-6, 90 unseen, 21 hard) no linkage's finer supported
  *       level was a wrong answer. The excess also divides the ARI's difference by the spread of the data's
  *       replicates as well as the null's ({@link NullCalibration}), so a narrow null does not lift a scattered
  *       solution.</li>
