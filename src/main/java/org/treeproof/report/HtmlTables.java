@@ -45,7 +45,8 @@ final class HtmlTables {
                 + "apart in others (consensus in (%s, %s]); the smallest Jaccard is the least stable cluster's mean "
                 + "best match. Null columns are the same measures on data without clusters. The excess over the null "
                 + "is the mean ARI and the silhouette, each standardised by the null data sets at the same linkage "
-                + "and k (the ARI's difference also by the spread of the data's own replicates), added; its p-value is adjusted for the choice among every linkage and k. The separation p is "
+                + "and k (the ARI's difference also by the spread of the data's own replicates), added; its p-value "
+                + "is adjusted for the choice among every linkage and k. The separation p is "
                 + "the largest over the clusters of the dip test of each against its nearest (a dip in density "
                 + "between them; at most %s passes). Cut heights are "
                 + "in the units of the dissimilarity.", model.decision().minClusterSize(),

@@ -64,8 +64,8 @@ final class NullCalibration {
     record Result(NullStability[][] cells, StructureTest test) {
     }
 
-    static Result of(double[][] obsAriTest, double[][] obsAri, double[][] obsAriSd, double[][] obsSil, double[][][] nullAri,
-            double[][][] nullSil, double[][][] nullPac, int replicatesPerSet) {
+    static Result of(double[][] obsAriTest, double[][] obsAri, double[][] obsAriSd, double[][] obsSil,
+            double[][][] nullAri, double[][][] nullSil, double[][][] nullPac, int replicatesPerSet) {
         int links = obsAri.length;
         int ks = obsAri[0].length;
         int sets = nullAri[0][0].length;
