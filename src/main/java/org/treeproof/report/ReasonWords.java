@@ -219,8 +219,9 @@ public final class ReasonWords implements Reason.Visitor<String> {
         boolean one = r.count() == 1;
         // a tenth of the samples or more is no longer a few stray samples (our choice): the reader is told so
         String many = 10 * r.count() >= r.samples() ? f(" That is %s of the samples, more than scattered outliers: "
-                + "they may be a group of their own that differs in spread rather than in location, or a sparse part "
-                + "of a continuum; look at them in the heat map before reading them as noise.",
+                + "they may be the long tail of a heavy-tailed population, a group of their own that differs in spread "
+                + "rather than in location, or a sparse part of a continuum; look at them in the heat map before "
+                + "reading them as noise.",
                 Numbers.percent((double) r.count() / r.samples())) : "";
         return f("%d sample%s %s set aside as %s, not %s: on branches of fewer than %d samples, or joining the tree (or "
                 + "%s cluster) far above its first split into two large branches; %s listed in clusters.csv and left "

@@ -27,6 +27,9 @@ class ReasonWordsTest {
         String many = words.outliers(new Reason.Outliers(72, 5, 0, 200));
         org.junit.jupiter.api.Assertions.assertTrue(many.contains("That is 36% of the samples, more than scattered "
                 + "outliers"), many);
+        // multivariate t with 3 degrees of freedom in 40 features (bench/judgement/unseen/fresh, Y02): 94 of 250 far
+        // samples and no clusters; a heavy tail is named among the causes
+        org.junit.jupiter.api.Assertions.assertTrue(many.contains("the long tail of a heavy-tailed population"), many);
         // 9 of 190 (under a tenth): scattered far samples, no such sentence
         String few = words.outliers(new Reason.Outliers(9, 5, 0, 190));
         org.junit.jupiter.api.Assertions.assertFalse(few.contains("more than scattered"), few);
