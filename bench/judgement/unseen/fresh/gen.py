@@ -1,4 +1,4 @@
-"""Seventeen sets drawn on 4 December 2026 (tenth session) before any verdict on them was seen, in the kinds of data
+"""Twenty-six sets drawn on 4 December 2026 (tenth session) before any verdict on them was seen, in the kinds of data
 a user brings that are hardest for the rule: far samples, heavy tails, skew, wide data with few informative features,
 small real groups, nested groups, groups in heavy-tailed noise, groups beside a batch, counts with features in rows.
 The right answer of each is written in README.md (written with this file, before the first run). Writes NAME.csv,
@@ -111,3 +111,27 @@ counts = r.negative_binomial(5, 5 / (5 + mu))
 write("Y16-counts-rows-3subtypes", counts.T, t, opts="--samples-in-columns --log2", rows_are_features=True)
 x, t = blobs(r, [50, 50, 50, 50, 50], spread(r, 5, 12, 5.5))
 write("Y17-5g-p12", x, t)
+
+# ---- a second batch, drawn the same day after the first had run (its answers written in README.md before its run)
+r = np.random.default_rng(20261205)
+x = r.standard_normal((120, 1000)); far_idx = r.choice(120, 4, replace=False); x[far_idx] *= 3
+t = np.zeros(120, dtype=object); t[far_idx] = "far"
+write("Z01-none-wide-4far", x, t)
+write("Z02-none-cauchy-p6", t_noise(r, 200, 6, 1), np.zeros(200, int))
+write("Z03-none-t2-p500", t_noise(r, 100, 500, 2), np.zeros(100, int))
+x = r.standard_normal((200, 10)); x[17, 4] = 50.0
+t = np.zeros(200, dtype=object); t[17] = "far"
+write("Z04-none-one-huge-cell", x, t)
+write("Z05-none-n20-p8", r.standard_normal((20, 8)), np.zeros(20, int))
+c = np.zeros((2, 5)); c[1, 0] = 8.0
+x, t = blobs(r, [100, 100], c); x[t == 1] = c[1] + 3 * (x[t == 1] - c[1])
+write("Z06-2g-one-broad", x, t)
+x = (r.random((200, 50)) < 0.1).astype(float)
+write("Z07-none-binary-sparse", x, np.zeros(200, int), opts="--metric jaccard")
+t = np.repeat([0, 1, 2], 60); x = r.standard_normal((180, 1000))
+for g in range(3):
+    x[t == g, g * 100:(g + 1) * 100] += 1.0
+far_idx = r.choice(180, 5, replace=False); x[far_idx] *= 3; t = t.astype(object); t[far_idx] = "far"
+write("Z08-wide-3g-5far", x, t)
+t = np.repeat([0, 1], 12); x = r.standard_normal((24, 1000)); x[t == 1, :100] += 1.0
+write("Z09-wide-n24-2g", x, t)
