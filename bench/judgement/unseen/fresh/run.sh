@@ -1,12 +1,13 @@
 #!/usr/bin/env bash
 # Runs a default `assess` on each set of gen.py (with NAME.opts where given) and prints verdict, k, linkage, cluster
 # sizes, outliers, the ARI with the planted groups (--labels; planted far samples form one more group) and the levels.
-# Usage: bench/judgement/unseen/fresh/run.sh [JAR]   (default target/treeproof.jar; KEEP=DIR keeps data and outputs)
+# Usage: bench/judgement/unseen/fresh/run.sh [JAR]   (default target/treeproof.jar; KEEP=DIR keeps data and outputs;
+# GEN=FILE and PYTHON=INTERPRETER run another generator, as ../wide/run.sh and ../shapes/run.sh do)
 set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
 jar="${1:-$here/../../../../target/treeproof.jar}"
 if [ -n "${KEEP:-}" ]; then work="$KEEP"; mkdir -p "$work"; else work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT; fi
-python3 "$here/gen.py" "$work/data"
+"${PYTHON:-python3}" "${GEN:-$here/gen.py}" "$work/data"
 for f in "$work"/data/*.csv; do
   case "$f" in *.truth.csv) continue ;; esac
   c="$(basename "$f" .csv)"

@@ -10,7 +10,8 @@ NAME.truth.csv (the planted groups) into the folder given.
   W5-nested-p5000       200 x 5000, two families of 100 (1.5 on 300 features), each of two subgroups of 50 (1.2 on
                         100 features)
   W6-3g-batch-p6000     180 x 6000, groups of 60 raised by 1.3 on 150 features each, every second sample shifted
-                        by 0.5 on every feature (a batch stronger than the groups)
+                        by 0.5 on every feature (a batch stronger than the groups); W6-3g-batch-p6000.batch.tsv
+                        holds each sample's run, for --covariates and --center-within batch
 """
 import os
 import sys
@@ -58,3 +59,8 @@ write("W5-nested-p5000", x, t)
 x, t = groups(np.random.default_rng(16), [60, 60, 60], 6000, 150, 1.3)
 x[::2] += 0.5
 write("W6-3g-batch-p6000", x, t)
+# the processing run of each W6 sample, for --covariates (and --center-within batch); .tsv, so run.sh skips it
+with open(f"{out}/W6-3g-batch-p6000.batch.tsv", "w") as f:
+    f.write("id\tbatch\n")
+    for i in range(len(t)):
+        f.write(f"s{i}\t{'run-2' if i % 2 == 0 else 'run-1'}\n")

@@ -1,24 +1,6 @@
 #!/usr/bin/env bash
 # Runs a default `assess` on each set of gen.py and prints verdict, k, linkage, cluster sizes, outliers, the ARI with
-# the planted groups (--labels) and the levels.
+# the planted groups (--labels) and the levels (../fresh/run.sh).
 # Usage: bench/judgement/unseen/wide/run.sh [JAR]   (default target/treeproof.jar; KEEP=DIR keeps data and outputs)
-set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
-jar="${1:-$here/../../../../target/treeproof.jar}"
-if [ -n "${KEEP:-}" ]; then work="$KEEP"; mkdir -p "$work"; else work="$(mktemp -d)"; trap 'rm -rf "$work"' EXIT; fi
-python3 "$here/gen.py" "$work/data"
-for f in "$work"/data/*.csv; do
-  case "$f" in *.truth.csv) continue ;; esac
-  c="$(basename "$f" .csv)"
-  java -jar "$jar" assess "$f" --labels "$work/data/$c.truth.csv" --out "$work/out/$c" --quiet >/dev/null
-  python3 - "$work/out/$c" "$c" <<'PY'
-import collections, csv, json, os, sys
-out, name = sys.argv[1:3]
-d = json.load(open(os.path.join(out, "summary.json")))
-r = d["recommendation"]
-rows = list(csv.DictReader(open(os.path.join(out, "clusters.csv"))))
-sizes = sorted(collections.Counter(x["cluster"] for x in rows if x["cluster"]).values(), reverse=True)
-print(f"{name:22s} {r['verdict']:11s} k={r['k']} {r['linkage']:8s} sizes={'/'.join(map(str, sizes))} "
-      f"out={len(r['outliers'])} ari={d['labels']['ari']:.2f} levels={r.get('levels')}")
-PY
-done
+GEN="$here/gen.py" exec "$here/../fresh/run.sh" "$@"

@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.treeproof.data.DataMatrix;
 import org.treeproof.data.InputException;
@@ -119,6 +120,36 @@ final class AssessCommand implements Callable<Integer> {
         }
     }
 
+    /**
+     * Each sample's level of {@code column} for {@code --center-within}, by sample id; samples without a value are
+     * left out (the centring then names the first). A numeric column's values are its levels.
+     */
+    private Map<String, String> batchLevels(List<org.treeproof.explain.Covariate> covariates, String column,
+            List<String> ids) {
+        var covariate = covariates.stream().filter(c -> c.name().equals(column)).findFirst()
+                .orElseThrow(() -> new InputException("--center-within " + column + ": --covariates "
+                        + explain.covariates + " has no column '" + column + "' (its columns: "
+                        + String.join(", ", covariates.stream().map(org.treeproof.explain.Covariate::name).toList())
+                        + ")"));
+        String[] categories = covariate.categories();
+        double[] values = covariate.values();
+        var levels = new java.util.HashMap<String, String>();
+        for (int i = 0; i < ids.size(); i++) {
+            if (covariate.missing(i)) {
+                continue;
+            }
+            String level;
+            if (categories != null) {
+                level = categories[i];
+            } else {
+                double v = values[i];
+                level = v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
+            }
+            levels.put(ids.get(i), level);
+        }
+        return levels;
+    }
+
     @Override
     public Integer call() {
         long started = System.nanoTime();
@@ -133,6 +164,15 @@ final class AssessCommand implements Callable<Integer> {
         }
         OutputGuard.check(out, "--out", force, reads);
         inputOptions.fitTo(settings.metric());
+        // a distance table refuses --center-within when it is loaded, naming --distances
+        inputOptions.centerWithin().filter(column -> !inputOptions.distances()).ifPresent(column -> {
+            if (explain.covariates == null) {
+                throw new InputException("--center-within " + column + " names a column of --covariates FILE; give "
+                        + "--covariates");
+            }
+            inputOptions.batchLevelsFrom(ids -> batchLevels(
+                    CovariatesReader.read(explain.covariates, ids, explain.kinds()), column, ids));
+        });
         LoadedInput loaded = inputOptions.load(input);
         StudyInput studyInput = loaded.isDistanceTable()
                 ? StudyInput.ofDistances(loaded.sampleIds(), loaded.distances().orElseThrow())

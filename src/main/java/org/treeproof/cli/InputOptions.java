@@ -4,7 +4,10 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
+import java.util.function.Function;
+import org.treeproof.data.BatchCentering;
 import org.treeproof.data.InputException;
 import org.treeproof.data.LibrarySize;
 import org.treeproof.data.MissingPolicy;
@@ -62,6 +65,13 @@ public final class InputOptions {
             description = "Keep the N features of largest variance (ties by input order), 0 for all. Default: 0.")
     private Integer topVariable;
 
+    @Option(names = "--center-within", paramLabel = "COLUMN",
+            description = "Remove each batch's mean from every feature, after --log2 and before --top-variable and"
+                    + " --scale: COLUMN is the column of --covariates that records how the samples were processed (a"
+                    + " batch, run, site or date). Groups spread evenly over the batches keep their difference;"
+                    + " groups spread unevenly lose part of it. Default: no centring.")
+    private String centerWithin;
+
     @Option(names = "--no-ids",
             description = "The table has no id column: every column is a feature, and samples are named by their"
                     + " row, 1 to n.")
@@ -75,12 +85,31 @@ public final class InputOptions {
     /** Set by {@link #fitTo}: a 0/1 metric, whose default scaling is none. */
     private boolean binaryMetric;
 
+    /** Reads each sample's batch for {@code --center-within}, given the table's sample ids; set by the command. */
+    private Function<List<String>, Map<String, String>> batchLevels;
+
+    /** Built when a data table is loaded with {@code --center-within}. */
+    private BatchCentering centering;
+
     /** How messages name the input when INPUT is {@code -}. */
     static final String STANDARD_INPUT = "standard input";
 
     /** Whether {@code input} is {@code -}, which stands for standard input. */
     static boolean isStandardInput(Path input) {
         return input.toString().equals("-");
+    }
+
+    /** The covariate column named by {@code --center-within}, if given. */
+    public Optional<String> centerWithin() {
+        return Optional.ofNullable(centerWithin);
+    }
+
+    /**
+     * Supplies each sample's level of the {@code --center-within} column (by sample id), read once the table's
+     * ids are known; a sample without a value is left out of the map.
+     */
+    public void batchLevelsFrom(Function<List<String>, Map<String, String>> levels) {
+        this.batchLevels = levels;
     }
 
     /** Whether INPUT is a distance table. */
@@ -106,7 +135,7 @@ public final class InputOptions {
         Scale defaultScale = binaryMetric ? Scale.NONE : Preparation.DEFAULT_SCALE;
         return new Preparation(missing == null ? MissingPolicy.ERROR : missing,
                 librarySize == null ? LibrarySize.NONE : librarySize, log2,
-                scale == null ? defaultScale : scale, topVariable == null ? 0 : topVariable);
+                scale == null ? defaultScale : scale, topVariable == null ? 0 : topVariable, centering);
     }
 
     /**
@@ -133,6 +162,7 @@ public final class InputOptions {
             addIf(notForDistances, scale != null, "--scale");
             addIf(notForDistances, topVariable != null, "--top-variable");
             addIf(notForDistances, noIds, "--no-ids");
+            addIf(notForDistances, centerWithin != null, "--center-within");
             if (!notForDistances.isEmpty()) {
                 throw new InputException(String.join(", ", notForDistances) + (notForDistances.size() == 1 ? " does"
                         : " do") + " not apply to a distance table (--distances)");
@@ -140,10 +170,16 @@ public final class InputOptions {
             DistanceTableReader reader = new DistanceTableReader(delimiter);
             return LoadedInput.of(isStandardInput(input) ? reader.read(STANDARD_INPUT, System.in) : reader.read(input));
         }
-        Preparation preparation = preparation();
+        if (centerWithin != null && batchLevels == null) {
+            throw new InputException("--center-within " + centerWithin + " names a column of --covariates FILE, which "
+                    + "only the assess command reads");
+        }
         DataTableReader reader = new DataTableReader(delimiter, samplesInColumns, noIds);
         DataTable table = isStandardInput(input) ? reader.read(STANDARD_INPUT, System.in) : reader.read(input);
-        return LoadedInput.of(table, preparation.apply(table.matrix(), table.locator()));
+        if (centerWithin != null) {
+            centering = BatchCentering.of(centerWithin, batchLevels.apply(table.matrix().sampleIds()));
+        }
+        return LoadedInput.of(table, preparation().apply(table.matrix(), table.locator()));
     }
 
     /** Reads {@code input}, a data table, as it is (before any preparation), for rerunning other preparations. */
@@ -167,6 +203,7 @@ public final class InputOptions {
         addIf(changes, p.librarySize() != LibrarySize.NONE, "--library-size " + p.librarySize().userName());
         addIf(changes, p.log2(), "--log2");
         addIf(changes, p.scale() != Scale.NONE, "--scale " + p.scale().userName());
+        addIf(changes, centerWithin != null, "--center-within");
         if (!changes.isEmpty()) {
             throw new InputException("--metric " + metric.id() + " takes 0/1 data as they are; drop "
                     + String.join(" and ", changes) + " (" + (changes.size() == 1 ? "it changes" : "they change")

@@ -228,6 +228,9 @@ final class StudyOutputs {
             o.add(new SummaryJson.Option("log2", p.log2()));
             o.add(new SummaryJson.Option("scale", p.scale().userName()));
             o.add(new SummaryJson.Option("topVariable", p.topVariable()));
+            if (p.centering() != null) {
+                o.add(new SummaryJson.Option("centerWithin", p.centering().column()));
+            }
         });
         if (covariatesFile != null) {
             o.add(new SummaryJson.Option("covariatesFile", covariatesFile.toString()));
@@ -249,7 +252,8 @@ final class StudyOutputs {
                 evidence.settings().metric().id(),
                 ShellWords.join(commandLine), evidence.settings().seed(), threads, seconds,
                 DateTimeFormatter.ISO_OFFSET_DATE_TIME.format(ZonedDateTime.now().withNano(0)),
-                loaded.preparation().map(r -> r.settings().librarySize()).orElse(org.treeproof.data.LibrarySize.NONE));
+                loaded.preparation().map(r -> r.settings().librarySize()).orElse(org.treeproof.data.LibrarySize.NONE),
+                loaded.preparation().map(r -> r.settings().centering()).map(c -> c.column()).orElse(null));
     }
 
     /** Writes every output into the (staging) directory. */

@@ -14,6 +14,8 @@ import java.util.Objects;
  *   <li>optionally {@code log2(x + 1)}; every value must then be {@code >= 0} (a value in (-1, 0) would have a
  *       logarithm, but a negative count or intensity means the data are not what log2 is meant for, so all
  *       negatives are refused);</li>
+ *   <li>optionally batch mean-centring ({@link BatchCentering}): each batch's mean removed from every feature,
+ *       before features are ranked by variance or scaled, so that neither counts the batches' differences;</li>
  *   <li>optionally the {@code topVariable} features of largest population variance, ties broken by input
  *       order, kept in input order; asking for at least as many features as there are keeps all of them (and
  *       the report says so) rather than failing, because the count left after the missing-value policy is not
@@ -28,9 +30,10 @@ import java.util.Objects;
  * @param log2        whether to take {@code log2(x + 1)}
  * @param scale       the per-feature scaling
  * @param topVariable how many of the most variable features to keep, 0 for all
+ * @param centering   the batch mean-centring, or {@code null} for none
  */
 public record Preparation(MissingPolicy missing, LibrarySize librarySize, boolean log2, Scale scale,
-        int topVariable) {
+        int topVariable, BatchCentering centering) {
 
     /**
      * The scaling used when none is asked for: z-scores, so that features measured in different units weigh the
@@ -48,9 +51,19 @@ public record Preparation(MissingPolicy missing, LibrarySize librarySize, boolea
         }
     }
 
-    /** A preparation without library-size scaling. */
+    /** A preparation without batch mean-centring. */
+    public Preparation(MissingPolicy missing, LibrarySize librarySize, boolean log2, Scale scale, int topVariable) {
+        this(missing, librarySize, log2, scale, topVariable, null);
+    }
+
+    /** A preparation without library-size scaling or batch mean-centring. */
     public Preparation(MissingPolicy missing, boolean log2, Scale scale, int topVariable) {
         this(missing, LibrarySize.NONE, log2, scale, topVariable);
+    }
+
+    /** This preparation with {@code log2}, {@code scale} and {@code topVariable} replaced, the rest kept. */
+    public Preparation with(boolean log2, Scale scale, int topVariable) {
+        return new Preparation(missing, librarySize, log2, scale, topVariable, centering);
     }
 
     /** The defaults: refuse missing values, no log2, {@link #DEFAULT_SCALE}, all features. */
@@ -96,6 +109,9 @@ public record Preparation(MissingPolicy missing, LibrarySize librarySize, boolea
         librarySize.apply(run);
         if (log2) {
             takeLog2(run);
+        }
+        if (centering != null) {
+            centering.apply(run);
         }
         if (topVariable > 0) {
             keepTopVariable(run);

@@ -82,6 +82,9 @@ public record PreparationReport(Preparation settings, int inputSamples, int inpu
         if (settings.log2()) {
             out.add("Transformed every value to log2(x + 1).");
         }
+        if (settings.centering() != null) {
+            out.add(settings.centering().sentence());
+        }
         topVariable.ifPresent(t -> out.add(t.kept().size() < t.candidates()
                 ? String.format(Locale.ROOT, "Kept the %d of %d features with the largest variance%s.",
                         t.kept().size(), t.candidates(), t.tieAtCutoff() ? " (a tie at the cutoff went by input order)" : "")

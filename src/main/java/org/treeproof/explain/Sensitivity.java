@@ -86,7 +86,8 @@ public final class Sensitivity {
                 for (LibrarySize l : LibrarySize.values()) {
                     if (l != chosen.librarySize()) {
                         out.add(new Alternative("library-size: " + l.userName(), "library-size", new Preparation(
-                                chosen.missing(), l, chosen.log2(), chosen.scale(), chosen.topVariable()), metric));
+                                chosen.missing(), l, chosen.log2(), chosen.scale(), chosen.topVariable(),
+                                chosen.centering()), metric));
                     }
                 }
             }
@@ -110,7 +111,7 @@ public final class Sensitivity {
     }
 
     private static Preparation with(Preparation p, Scale scale, boolean log2, int top) {
-        return new Preparation(p.missing(), p.librarySize(), log2, scale, top);
+        return p.with(log2, scale, top);
     }
 
     /** One alternative analysis: a preparation and a dissimilarity. */

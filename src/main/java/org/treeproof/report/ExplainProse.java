@@ -148,8 +148,10 @@ final class ExplainProse {
         List<String> flagged = results.stream().filter(CovariateResult::flagged).map(CovariateResult::name).toList();
         List<String> tested = results.stream().map(CovariateResult::name).toList();
         if (flagged.isEmpty()) {
-            return f("None of the %d covariates (%s) was strongly associated with the clusters.", tested.size(),
-                    Prose.and(tested));
+            return tested.size() == 1
+                    ? f("The covariate '%s' was not strongly associated with the clusters.", tested.get(0))
+                    : f("None of the %d covariates (%s) was strongly associated with the clusters.", tested.size(),
+                            Prose.and(tested));
         }
         return f("The clusters largely follow %s (%s); the other covariates were not flagged.", Prose.and(flagged
                 .stream().map(n -> "'" + n + "'").toList()), String.join("; ", results.stream()

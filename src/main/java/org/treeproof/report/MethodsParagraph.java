@@ -113,6 +113,11 @@ public final class MethodsParagraph {
                     ? f("The data (%d samples, %d features) were used as given.", run.samples(), run.features())
                     : f("The data (%d samples, %d features after preparation) were prepared in these steps. %s",
                             run.samples(), run.features(), steps));
+            if (run.centeredWithin() != null) {
+                out.add(f("Removing the batch means (as in %s) leaves groups spread evenly over the levels of '%s' "
+                        + "as they were, but shrinks the difference of groups spread unevenly over them (%s).",
+                        cite(c, Reference.SIMS), md(run.centeredWithin()), cite(c, Reference.NYGAARD)));
+            }
             out.add(f("Dissimilarities between samples were %s.", Names.metricProse(s.metric())));
         } else {
             // each step ends with its own full stop

@@ -41,8 +41,9 @@ public final class ReasonWords implements Reason.Visitor<String> {
         return String.format(java.util.Locale.ROOT, "The clusters largely follow the covariate '%s' (%s %.2f, %s): "
                 + "if it records how the samples were collected or processed (a batch, a site, a date), the clusters "
                 + "may reflect that rather than a difference between the samples; if it is a known property of the "
-                + "samples, the clusters recover it. Decide which before reading the clusters as groups.", flag.covariate(), flag.effectName(),
-                flag.effect(), q);
+                + "samples, the clusters recover it. Decide which before reading the clusters as groups; to look for "
+                + "groups within the batches, rerun with --center-within naming this column, which removes each "
+                + "batch's mean.", flag.covariate(), flag.effectName(), flag.effect(), q);
     }
 
     /** The sentence for each reason, in order. */

@@ -93,6 +93,15 @@ public record Reference(String cite, String entry, String doi) {
     static final Reference ANDERS_HUBER = new Reference("Anders & Huber, 2010",
             "Anders, S. & Huber, W. (2010). Differential expression analysis for sequence count data. Genome Biology, "
                     + "11, R106.", "10.1186/gb-2010-11-10-r106");
+    static final Reference SIMS = new Reference("Sims et al., 2008",
+            "Sims, A. H., Smethurst, G. J., Hey, Y., Okoniewski, M. J., Pepper, S. D., Howell, A., Miller, C. J. & "
+                    + "Clarke, R. B. (2008). The removal of multiplicative, systematic bias allows integration of "
+                    + "breast cancer gene expression datasets – improving meta-analysis and prediction of prognosis. "
+                    + "BMC Medical Genomics, 1, 42.", "10.1186/1755-8794-1-42");
+    static final Reference NYGAARD = new Reference("Nygaard et al., 2016",
+            "Nygaard, V., Rødland, E. A. & Hovig, E. (2016). Methods that remove batch effects while retaining group "
+                    + "differences may lead to exaggerated confidence in downstream analyses. Biostatistics, 17, "
+                    + "29–39.", "10.1093/biostatistics/kxv027");
     static final Reference DILLIES = new Reference("Dillies et al., 2013",
             "Dillies, M.-A. et al. (2013). A comprehensive evaluation of normalization methods for Illumina "
                     + "high-throughput RNA sequencing data analysis. Briefings in Bioinformatics, 14, 671–683.",

@@ -27,10 +27,20 @@ import java.util.regex.Pattern;
  * @param generatedAt when the report was made, as text (e.g. ISO-8601)
  * @param librarySize the library-size method of the preparation ({@code NONE} for a distance table), for the
  *                    methods paragraph's references
+ * @param centeredWithin the covariate whose levels' means were removed ({@code --center-within}), or {@code null}
  */
 public record RunInfo(String toolName, String toolVersion, String inputFile, String inputSha256, int samples,
         int features, List<String> preparation, List<String> cautions, String metric, String commandLine, long seed,
-        int threads, double wallSeconds, String generatedAt, org.treeproof.data.LibrarySize librarySize) {
+        int threads, double wallSeconds, String generatedAt, org.treeproof.data.LibrarySize librarySize,
+        String centeredWithin) {
+
+    /** A run without batch mean-centring. */
+    public RunInfo(String toolName, String toolVersion, String inputFile, String inputSha256, int samples,
+            int features, List<String> preparation, List<String> cautions, String metric, String commandLine, long seed,
+            int threads, double wallSeconds, String generatedAt, org.treeproof.data.LibrarySize librarySize) {
+        this(toolName, toolVersion, inputFile, inputSha256, samples, features, preparation, cautions, metric,
+                commandLine, seed, threads, wallSeconds, generatedAt, librarySize, null);
+    }
 
     /** A run without library-size scaling. */
     public RunInfo(String toolName, String toolVersion, String inputFile, String inputSha256, int samples,

@@ -193,6 +193,79 @@ class ExplainIT {
     }
 
     @Test
+    void centringWithinTheBatchesFindsTheGroupsTheBatchHid() throws Exception {
+        // three groups of 30 (2 units up on their own 8 of 40 features, 5.7 apart) crossed evenly with two batches
+        // (the second 3 units up on every feature, 19 apart): the batch outweighs the groups
+        Path data = table("crossed.csv", 90, 40, 11,
+                (i, j) -> (j / 8 == i % 3 ? 2.0 : 0.0) + (i % 2 == 1 ? 3.0 : 0.0));
+        Path cov = covariates("crossed-covariates.tsv", 90, 12, i -> "run-" + (1 + i % 2));
+        var groups = new StringBuilder("id,group\n");
+        for (int i = 0; i < 90; i++) {
+            groups.append(String.format("s%03d,g%d%n", i, i % 3));
+        }
+        Path labels = tmp.resolve("groups.csv");
+        Files.writeString(labels, groups.toString());
+        Jar.Result plain = run("assess", data.toString(), "--out", "plain", "--covariates", cov.toString(),
+                "--labels", labels.toString());
+        assertEquals(0, plain.exit(), plain.err());
+        JsonNode before = JSON.readTree(tmp.resolve("plain/summary.json").toFile());
+        assertEquals("batch", before.get("explain").get("flaggedCovariates").get(0).asText());
+        // the batch splits every group (k = 6, groups within runs, or k = 2, the runs): never the three groups
+        assertTrue(before.get("recommendation").get("k").asInt() != 3, before.get("labels").toString());
+        assertTrue(before.get("labels").get("ari").asDouble() < 0.6, before.get("labels").toString());
+        assertTrue(before.get("recommendation").get("reasons").toString().contains("rerun with --center-within"),
+                before.get("recommendation").get("reasons").toString());
+
+        Jar.Result centred = run("assess", data.toString(), "--out", "centred", "--covariates", cov.toString(),
+                "--labels", labels.toString(), "--center-within", "batch");
+        assertEquals(0, centred.exit(), centred.err());
+        Path dir = tmp.resolve("centred");
+        JsonNode after = JSON.readTree(dir.resolve("summary.json").toFile());
+        assertEquals("supported", after.get("recommendation").get("verdict").asText());
+        assertEquals(3, after.get("recommendation").get("k").asInt());
+        assertTrue(after.get("labels").get("ari").asDouble() > 0.9, after.get("labels").toString());
+        assertEquals(0, after.get("explain").get("flaggedCovariates").size(), after.get("explain").toString());
+        assertTrue(after.toString().contains("\"centerWithin\""), "settings record the column");
+        String methods = Files.readString(dir.resolve("methods.md"));
+        assertTrue(methods.contains("Removed each level's mean of the covariate 'batch' (2 levels) from every feature"),
+                methods);
+        assertTrue(methods.contains("Sims et al., 2008") && methods.contains("Nygaard et al., 2016"), methods);
+        Document html = Jsoup.parse(dir.resolve("report.html").toFile(), "UTF-8");
+        String refs = html.select("#references").text();
+        assertTrue(refs.contains("Sims, A. H.") && refs.contains("Nygaard, V."), refs);
+        assertTrue(html.text().contains("Removed each level's mean of the covariate 'batch'"), "preparation step shown");
+    }
+
+    @Test
+    void centringWithinABatchIsRefusedInOneLineWhenItCannotBeDone() throws Exception {
+        Path data = table("small2.csv", 30, 5, 8, (i, j) -> 0.0);
+        Path cov = covariates("cov3.tsv", 30, 9, i -> i == 0 ? "solo" : "b" + i % 2);
+        Jar.Result noFile = run("assess", data.toString(), "--out", "c1", "--center-within", "batch");
+        assertEquals(2, noFile.exit());
+        assertTrue(noFile.err().contains("--center-within batch names a column of --covariates FILE"), noFile.err());
+        Jar.Result noColumn = run("assess", data.toString(), "--out", "c2", "--covariates", cov.toString(),
+                "--center-within", "plate");
+        assertEquals(2, noColumn.exit());
+        assertTrue(noColumn.err().contains("has no column 'plate' (its columns: batch, sex, age, site)"),
+                noColumn.err());
+        Jar.Result lone = run("assess", data.toString(), "--out", "c3", "--covariates", cov.toString(),
+                "--center-within", "batch");
+        assertEquals(2, lone.exit());
+        assertTrue(lone.err().contains("level 'solo' holds only sample 's000'"), lone.err());
+        Jar.Result missing = run("assess", data.toString(), "--out", "c4", "--covariates", cov.toString(),
+                "--center-within", "site");
+        assertEquals(2, missing.exit());
+        assertTrue(missing.err().contains("has no value in that column"), missing.err());
+        for (String o : List.of("c1", "c2", "c3", "c4")) {
+            assertFalse(Files.exists(tmp.resolve(o)), o);
+        }
+        for (Jar.Result r : List.of(noFile, noColumn, lone, missing)) {
+            assertEquals(1, Arrays.stream(r.err().split("\n")).filter(l -> !l.isBlank()).count(), r.err());
+            assertFalse(r.err().contains("Exception"), r.err());
+        }
+    }
+
+    @Test
     void noiseHasNothingToStressEvenWithoutNullData() throws Exception {
         Path data = table("noise.csv", 100, 20, 5, (i, j) -> 0.0);
         // without null calibration noise once gave a tentative split of extreme samples to stress; now no solution
