@@ -96,6 +96,10 @@ final class StudyOutputs {
         }
         out.addAll(multimodalNote(loaded));
         out.addAll(unevenDepthNote(loaded));
+        loaded.preparation().map(r -> r.settings().centering()).ifPresent(c -> out.add("Note: each level's mean of '"
+                + c.column() + "' was removed from every feature (--center-within). Groups spread unevenly over its "
+                + "levels lose part of their difference and can vanish: compare with the study without "
+                + "--center-within before reading either."));
         if (loaded.isDistanceTable()) {
             for (var link : evidence.settings().linkages()) {
                 if (link.requiresEuclidean()) {

@@ -43,7 +43,8 @@ public final class ReasonWords implements Reason.Visitor<String> {
                 + "may reflect that rather than a difference between the samples; if it is a known property of the "
                 + "samples, the clusters recover it. Decide which before reading the clusters as groups; to look for "
                 + "groups within the batches, rerun with --center-within naming this column, which removes each "
-                + "batch's mean.", flag.covariate(), flag.effectName(), flag.effect(), q);
+                + "batch's mean, and compare: groups spread unevenly over the batches lose part of their difference "
+                + "when it is removed.", flag.covariate(), flag.effectName(), flag.effect(), q);
     }
 
     /** The sentence for each reason, in order. */

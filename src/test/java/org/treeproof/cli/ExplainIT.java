@@ -226,6 +226,9 @@ class ExplainIT {
         assertTrue(after.get("labels").get("ari").asDouble() > 0.9, after.get("labels").toString());
         assertEquals(0, after.get("explain").get("flaggedCovariates").size(), after.get("explain").toString());
         assertTrue(after.toString().contains("\"centerWithin\""), "settings record the column");
+        // the cost of centring is said beside the decision
+        assertTrue(after.get("input").get("cautions").toString().contains("Groups spread unevenly over its levels lose "
+                + "part of their difference"), after.get("input").get("cautions").toString());
         String methods = Files.readString(dir.resolve("methods.md"));
         assertTrue(methods.contains("Removed each level's mean of the covariate 'batch' (2 levels) from every feature"),
                 methods);
