@@ -67,7 +67,9 @@ public final class Sensitivity {
 
     /**
      * The alternatives, in a fixed order: scalings, log2, the other library-size methods (when one was chosen, or
-     * when none was and log2 is taken of counts), numbers of features, dissimilarities.
+     * when none was and log2 is taken of counts), numbers of features, the batch means kept (when
+     * {@code --center-within} removed them: groups spread unevenly over the batches lose part of their difference
+     * under centring, so how far the clusters depend on it is worth seeing), dissimilarities.
      */
     List<Alternative> alternatives() {
         var out = new ArrayList<Alternative>();
@@ -99,6 +101,10 @@ public final class Sensitivity {
             out.add(new Alternative("top-variable: " + 2L * chosen.topVariable(), "top-variable", with(chosen,
                     chosen.scale(), chosen.log2(), (int) Math.min(Integer.MAX_VALUE, 2L * chosen.topVariable())),
                     metric));
+        }
+        if (chosen.centering() != null) {
+            out.add(new Alternative("center-within: off", "center-within", new Preparation(chosen.missing(),
+                    chosen.librarySize(), chosen.log2(), chosen.scale(), chosen.topVariable()), metric));
         }
         if (!linkage.requiresEuclidean()) {
             for (Metric m : Metric.values()) {

@@ -91,17 +91,25 @@ final class ExplainProse {
         SensitivityResult s = e.sensitivity();
         if (s != null) {
             List<SensitivityResult.Row> skipped = s.rows().stream().filter(r -> !r.ran()).toList();
+            // the choices that were changed, named once each in the order the alternatives ran
+            List<String> choices = s.rows().stream().map(r -> CHOICES.getOrDefault(r.change(), r.change()))
+                    .distinct().toList();
             out.add(f("To see whether other reasonable analyses find the same clusters, the %s linkage was rerun at "
-                    + "k = %d under %d alternative analys%s, each changing one choice (scaling, log2, the number of most "
-                    + "variable features, or the dissimilarity), and compared with the recommended solution by the "
+                    + "k = %d under %d alternative analys%s, each changing one choice (%s), and compared with the "
+                    + "recommended solution by the "
                     + "adjusted Rand index and, per cluster, the Jaccard similarity of its best match (found again at "
                     + "%s or more).%s", s.linkage(), s.k(), s.ran().size(), s.ran().size() == 1 ? "is" : "es",
-                    Numbers.plain(s.survives()), skipped.isEmpty() ? "" : f(" %s tried and could not run on these data: %s.",
+                    Prose.or(choices), Numbers.plain(s.survives()), skipped.isEmpty() ? "" : f(" %s tried and could not run on these data: %s.",
                             skipped.size() == 1 ? "One more alternative was" : skipped.size() + " more alternatives were",
                             String.join("; ", skipped.stream().map(r -> r.name() + " (" + r.note() + ")").toList()))));
         }
         return out;
     }
+
+    /** How the methods text names each kind of change of the sensitivity analysis ({@code Alternative.change}). */
+    private static final java.util.Map<String, String> CHOICES = java.util.Map.of("scale", "scaling", "log2", "log2",
+            "library-size", "the library-size scaling", "top-variable", "the number of most variable features",
+            "center-within", "the batch means kept", "metric", "the dissimilarity");
 
     /** The references {@link #methods} cites for this explanation, in the order it cites them. */
     static List<Reference> references(Explanation e) {

@@ -26,9 +26,18 @@ final class Prose {
 
     /** "a", "a and b", "a, b and c". */
     static String and(List<String> items) {
+        return joined(items, " and ");
+    }
+
+    /** "a", "a or b", "a, b or c". */
+    static String or(List<String> items) {
+        return joined(items, " or ");
+    }
+
+    private static String joined(List<String> items, String last) {
         if (items.size() <= 1) {
             return String.join("", items);
         }
-        return String.join(", ", items.subList(0, items.size() - 1)) + " and " + items.get(items.size() - 1);
+        return String.join(", ", items.subList(0, items.size() - 1)) + last + items.get(items.size() - 1);
     }
 }

@@ -248,6 +248,36 @@ class ExplainCoreTest {
     }
 
     @Test
+    void sensitivityKeepsTheBatchMeansOnceWhenTheyWereRemoved() {
+        // three groups of 30 (feature block of the group raised by 4) crossed with two batches, the second raised by 6
+        // on every feature: centred, the groups are the clusters; with the batch means kept, Ward at k = 3 splits by
+        // batch first and the groups are not found again
+        Solution planted = Solution.of(plantedLabels());
+        double[][] x = planted(15, 0);
+        var levels = new java.util.HashMap<String, String>();
+        for (int i = 0; i < 90; i++) {
+            for (int j = 0; j < 50; j++) {
+                x[i][j] += (j / 10 == i / 30 ? 4 : 0) + (i % 2 == 1 ? 6 : 0);
+            }
+            levels.put("s" + i, "run-" + i % 2);
+        }
+        var chosen = new Preparation(org.treeproof.data.MissingPolicy.ERROR, org.treeproof.data.LibrarySize.NONE, false,
+                org.treeproof.data.Scale.ZSCORE, 0, org.treeproof.data.BatchCentering.of("batch", levels));
+        List<String> ids = matrix(x).sampleIds();
+        SensitivityResult s = Sensitivity.of(matrix(x), chosen, Metric.EUCLIDEAN, Linkage.WARD, planted, ids, 0.75, 1)
+                .compute();
+        var kept = s.rows().stream().filter(r -> r.change().equals("center-within")).toList();
+        assertEquals(List.of("center-within: off"), kept.stream().map(SensitivityResult.Row::name).toList());
+        assertTrue(kept.get(0).ari() < 0.5, kept.get(0).toString());
+        // every other alternative keeps the centring, and finds the groups again
+        s.rows().stream().filter(r -> r.change().equals("scale"))
+                .forEach(r -> assertEquals(3, r.surviving(0.75), r.toString()));
+        // without centring chosen, no such alternative
+        assertTrue(Sensitivity.of(matrix(x), Preparation.defaults(), Metric.EUCLIDEAN, Linkage.WARD, planted, ids,
+                0.75, 1).compute().rows().stream().noneMatch(r -> r.change().equals("center-within")));
+    }
+
+    @Test
     void sensitivityTriesTheOtherLibrarySizeMethodsWhenOneWasChosen() {
         Solution planted = Solution.of(plantedLabels());
         List<String> ids = matrix(planted(1, 0)).sampleIds();
