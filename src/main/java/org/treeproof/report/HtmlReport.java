@@ -229,14 +229,7 @@ public final class HtmlReport {
         if (model.hasData()) {
             refs.add(Reference.HARTIGAN);   // the separation test of the evidence tables
         }
-        switch (model.run().librarySize()) {
-            case MEDIAN_RATIO -> refs.add(Reference.ANDERS_HUBER);
-            case TOTAL -> refs.add(Reference.DILLIES);
-            case NONE -> { }
-        }
-        if (model.run().centeredWithin() != null) {
-            refs.addAll(List.of(Reference.SIMS, Reference.NYGAARD));
-        }
+        refs.addAll(Reference.ofPreparation(model.run()));
         model.explained().ifPresent(x -> refs.addAll(ExplainProse.references(x)));
         for (Reference r : refs) {
             if (r.doi().isEmpty()) {

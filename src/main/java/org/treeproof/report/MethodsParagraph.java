@@ -102,12 +102,8 @@ public final class MethodsParagraph {
         out.add(f("Samples were clustered hierarchically with %s %s (seed %d).", md(run.toolName()),
                 md(run.toolVersion()), s.seed()));
         String steps = String.join(" ", run.preparation().stream().map(MethodsParagraph::md).toList());
-        // the step's own sentence names the method; its source joins the references
-        switch (run.librarySize()) {
-            case MEDIAN_RATIO -> c.add(Reference.ANDERS_HUBER);
-            case TOTAL -> c.add(Reference.DILLIES);
-            case NONE -> { }
-        }
+        // each step's own sentence names the method; its sources join the references
+        c.addAll(Reference.ofPreparation(run));
         if (model.hasData()) {
             out.add(run.preparation().isEmpty()
                     ? f("The data (%d samples, %d features) were used as given.", run.samples(), run.features())

@@ -106,6 +106,23 @@ public record Reference(String cite, String entry, String doi) {
             "Dillies, M.-A. et al. (2013). A comprehensive evaluation of normalization methods for Illumina "
                     + "high-throughput RNA sequencing data analysis. Briefings in Bioinformatics, 14, 671–683.",
             "10.1093/bib/bbs046");
+
+    /**
+     * The sources of the preparation steps a run took, in the order the steps ran: the library-size method's and,
+     * after batch mean-centring, its own and that of its cost (cited in the methods text beside the step).
+     */
+    static java.util.List<Reference> ofPreparation(RunInfo run) {
+        var out = new java.util.ArrayList<Reference>();
+        switch (run.librarySize()) {
+            case MEDIAN_RATIO -> out.add(ANDERS_HUBER);
+            case TOTAL -> out.add(DILLIES);
+            case NONE -> { }
+        }
+        if (run.centeredWithin() != null) {
+            out.addAll(java.util.List.of(SIMS, NYGAARD));
+        }
+        return out;
+    }
     static final Reference HARTIGAN = new Reference("Hartigan & Hartigan, 1985",
             "Hartigan, J. A. & Hartigan, P. M. (1985). The dip test of unimodality. The Annals of Statistics, 13, "
                     + "70–84.", "10.1214/aos/1176346577");
